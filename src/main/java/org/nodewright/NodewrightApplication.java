@@ -1,0 +1,13 @@
+package org.nodewright;
+
+import org.springframework.boot.SpringApplication;
+import org.springframework.boot.autoconfigure.SpringBootApplication;
+
+/** Starts the Nodewright server: string and air-column mode designer with a shop library. */
+@SpringBootApplication
+public class NodewrightApplication {
+
+    public static void main(String[] args) {
+        SpringApplication.run(NodewrightApplication.class, args);
+    }
+}
