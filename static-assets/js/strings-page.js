@@ -234,7 +234,11 @@ async function analyze() {
 // ---------- drawing ----------
 
 const L = (mm) => fromMm(mm, io.units.length);
-const fmtLen = (mm) => L(mm).toFixed(io.units.length === 'mm' ? 2 : 4);
+const fmtLen = (mm) => {
+  const digits = io.units.length === 'mm' ? 2 : 4;
+  const v = L(mm);
+  return (Math.abs(v) < 0.5 * 10 ** -digits ? 0 : v).toFixed(digits);   // no "-0.00" from rounding noise
+};
 const cents = (mode) => mode.centsFromHarmonic ?? mode.cents ?? 1200 * Math.log2(mode.frequencyHz / mode.harmonicHz);
 
 /**
@@ -270,7 +274,7 @@ function markerAnnotations(request) {
   const annotations = {};
   const pluckLabel = request.pluck.kind === 'strike' ? TEXT.strike : TEXT.pluck;
   if (typeof request.pluck.positionMm === 'number') {
-    annotations.pluck = verticalLine(L(request.pluck.positionMm), pluckLabel, '#a3262a', { draggable: true });
+    annotations.pluck = verticalLine(L(request.pluck.positionMm), pluckLabel, '#a3262a', { draggable: true, labelAt: 'end' });
   }
   request.pickups.forEach((pu, i) => {
     if (typeof pu.positionMm !== 'number') return;
@@ -330,7 +334,7 @@ function drawNodeMap(request, response) {
   options.plugins.annotation.annotations = markerAnnotations(request);
   options.plugins.tooltip = { callbacks: { label: (ctx) => `${TEXT.mode} ${ctx.parsed.y} · ${TEXT.nodes} ${ctx.parsed.x.toFixed(2)} ${io.units.length}` } };
   options.scales.x = lengthAxis(request.lengthMm);
-  options.scales.y = { reverse: true, min: 0.5, max: count + 0.5, ticks: { stepSize: 1 }, title: { display: true, text: TEXT.modeNumber } };
+  options.scales.y = { reverse: true, min: 0.5, max: count + 0.5, ticks: { stepSize: 1, callback: (v) => (Number.isInteger(v) ? String(v) : '') }, title: { display: true, text: TEXT.modeNumber } };
   drawChart($('node-map-chart'), { type: 'scatter', data: { datasets }, options });
 }
 

@@ -41,7 +41,7 @@ export function baseOptions({ xTitle, yTitle, legend = true } = {}) {
 }
 
 /** A vertical marker line (annotation plugin) at x with a small label. */
-export function verticalLine(x, label, lineColour, { dash = [], draggable = false } = {}) {
+export function verticalLine(x, label, lineColour, { dash = [], draggable = false, labelAt = 'start' } = {}) {
   return {
     type: 'line',
     xMin: x,
@@ -53,7 +53,7 @@ export function verticalLine(x, label, lineColour, { dash = [], draggable = fals
     label: {
       display: true,
       content: label,
-      position: 'start',
+      position: labelAt,
       backgroundColor: lineColour,
       color: '#fff',
       font: { size: 10 },
