@@ -108,7 +108,9 @@ function buildRequest() {
     referenceA4Hz: readNumber($('setA4')),
     strings: rows().map((tr) => {
       const wound = tr.querySelector('.wound').checked;
+      const target = tr.querySelector('.target').value.trim();
       return {
+        label: target === '' ? null : target,
         targetHz: readPitch(tr.querySelector('.target'), $('setA4')),
         material: tr.querySelector('.material').value,
         diameterMm: io.readLength(tr.querySelector('.gauge')),
@@ -125,7 +127,7 @@ function fillForm(p) {
   $('setA4').value = p.referenceA4Hz != null ? String(p.referenceA4Hz) : '440';
   $('set-rows').replaceChildren();
   for (const s of p.strings || []) {
-    addRow({ target: s.targetHz, material: s.material, diameterMm: s.diameterMm, wrapMaterial: s.wrapMaterial,
+    addRow({ target: s.label || s.targetHz, material: s.material, diameterMm: s.diameterMm, wrapMaterial: s.wrapMaterial,
       wrapDiameterMm: s.wrapDiameterMm, lengthMm: s.lengthMm });
   }
 }
@@ -137,7 +139,11 @@ function strengthOf(request, index, result) {
 }
 
 function render(request, response) {
-  const ratios = response.strings.map((s, i) => { const ts = strengthOf(request, i, s); return ts ? s.stressPa / ts : null; });
+  const ratios = response.strings.map((s, i) => {
+    if (typeof s.stressFraction === 'number') return s.stressFraction;
+    const ts = strengthOf(request, i, s);
+    return ts ? s.stressPa / ts : null;
+  });
   const tensions = response.strings.map((s) => io.forceOut(s.tensionN));
   const colours = ratios.map((r) => (r !== null && r > STRONG_RATIO ? '#a3262a' : r !== null && r > WARN_RATIO ? '#a86400' : '#2b5d8a'));
   const digits = io.units.force === 'N' ? 1 : 2;
@@ -152,6 +158,12 @@ function render(request, response) {
     data: { labels, datasets: [{ kind: 'tension', label: TEXT.tension, data: tensions, totalN: response.totalTensionN, backgroundColor: colours }] },
     options,
   });
+  const setWarnings = $('set-warnings');
+  setWarnings.replaceChildren(...(response.warnings || []).map((w) => {
+    const li = document.createElement('li');
+    li.textContent = w;
+    return li;
+  }));
   const tbody = $('set-results').querySelector('tbody');
   tbody.replaceChildren();
   response.strings.forEach((s, i) => {

@@ -242,14 +242,13 @@ const fmtLen = (mm) => {
 const cents = (mode) => mode.centsFromHarmonic ?? mode.cents ?? 1200 * Math.log2(mode.frequencyHz / mode.harmonicHz);
 
 /**
- * Shape samples of a mode as {xMm, y} with max |y| = 1: the server's own samples when it sends
- * them (clamped and stiff shapes), else sin(nπx/L), the exact shape of the pinned string.
+ * Shape samples of a mode as {xMm, y} with max |y| = 1: the server's own samples (shapeX in mm,
+ * shape; the computed beam shape for clamped ends), else sin(nπx/L), the pinned string's shape.
  */
 function shapeSamples(mode, lengthMm) {
-  const s = mode.shape || mode.shapeSamples || null;
-  let xs = s && (s.positionsMm || s.xMm || s.positionMm);
-  let ys = s && (s.displacement || s.values || s.y || s.amplitude);
-  if (!xs || !ys || xs.length !== ys.length) {
+  let xs = mode.shapeX;
+  let ys = mode.shape;
+  if (!Array.isArray(xs) || !Array.isArray(ys) || xs.length !== ys.length || xs.length < 2) {
     const count = Math.max(200, 16 * mode.n);
     xs = Array.from({ length: count + 1 }, (_, i) => (lengthMm * i) / count);
     ys = xs.map((x) => Math.sin((mode.n * Math.PI * x) / lengthMm));
@@ -361,7 +360,7 @@ function spectrumSeries(response) {
   const pickupCount = modes.length ? (modes[0].pickupResponse || []).length : 0;
   const series = [];
   for (let k = 0; k < pickupCount; k++) {
-    series.push({ label: `${TEXT.pickup} ${k + 1}`, values: modes.map((m, i) => excitation[i] * m.pickupResponse[k]) });
+    series.push({ label: `${TEXT.pickup} ${k + 1}`, values: modes.map((m, i) => (m.pickupOutput ? m.pickupOutput[k] : excitation[i] * m.pickupResponse[k])) });
   }
   if (pickupCount >= 2) {
     series.push({ label: TEXT.sum, values: modes.map((m, i) => excitation[i] * (m.pickupResponse[0] + m.pickupResponse[1])), combined: true });
@@ -388,7 +387,7 @@ function drawSpectrum(response) {
 function drawSummary(request, response) {
   const a4 = typeof request.referenceA4Hz === 'number' ? request.referenceA4Hz : 440;
   const note = response.note || nearestNote(response.fundamentalHz, a4);
-  const ratio = response.tensileStrengthPa ? response.stressPa / response.tensileStrengthPa : null;
+  const ratio = response.stressFraction ?? (response.tensileStrengthPa ? response.stressPa / response.tensileStrengthPa : null);
   const rows = [
     [TEXT.tension, `${fromNewton(response.tensionN, io.units.force).toFixed(io.units.force === "N" ? 2 : 3)} ${io.units.force}`],
     [TEXT.fundamental, `${response.fundamentalHz.toFixed(3)} Hz`],
@@ -430,9 +429,9 @@ function drawTable(request, response) {
       String(m.n), m.frequencyHz.toFixed(3), m.harmonicHz.toFixed(3), `${c >= 0 ? '+' : ''}${c.toFixed(2)}`,
       `${note.name} ${note.cents >= 0 ? '+' : ''}${note.cents.toFixed(1)}`,
       m.nodesMm.map(fmtLen).join(', '),
-      [...m.nodesMm].reverse().map((x) => fmtLen(length - x)).join(', '),
+      (m.nodesFromBridgeMm || [...m.nodesMm].reverse().map((x) => length - x)).map(fmtLen).join(', '),
       m.antinodesMm.map(fmtLen).join(', '),
-      [...m.antinodesMm].reverse().map((x) => fmtLen(length - x)).join(', '),
+      (m.antinodesFromBridgeMm || [...m.antinodesMm].reverse().map((x) => length - x)).map(fmtLen).join(', '),
     ];
     const tr = document.createElement('tr');
     cells.forEach((v, i) => {

@@ -112,7 +112,12 @@ class StringBenchIT extends BrowserTestBase {
         assertThat(third.get(5).getText()).isEqualTo("0.00, 216.67, 433.33, 650.00");
         assertThat(third.get(6).getText()).isEqualTo("0.00, 216.67, 433.33, 650.00");
         assertThat(driver.findElement(By.id("string-caution")).getText()).contains("eye protection");
+        js("window.scrollTo(0, 0);");
         screenshot("string-bench-8-modes");
+        js("document.getElementById('mode-shapes-chart').scrollIntoView();");
+        screenshot("string-bench-mode-shapes");
+        js("document.getElementById('modes-table').scrollIntoView();");
+        screenshot("string-bench-table");
     }
 
     @SuppressWarnings("unchecked")
@@ -167,6 +172,7 @@ class StringBenchIT extends BrowserTestBase {
         assertThat(num(atNode.get(2))).isEqualTo(-80.0);
         assertThat(num(atNode.get(0))).isGreaterThan(-80.0);
         assertThat(driver.findElement(By.id("near-nodes")).getText()).contains("3, 6, 9, 12");
+        js("document.getElementById('partials-chart').scrollIntoView();");
         screenshot("string-bench-pickup-on-node");
     }
 
@@ -175,7 +181,7 @@ class StringBenchIT extends BrowserTestBase {
         // Text where a number belongs: the server's problem document names diameterMm.
         type("diameterMm", "abc");
         driver.findElement(By.id("analyze-button")).click();
-        assertThat(waitFor(By.cssSelector("[data-error-for='diameterMm']")).getText()).isNotBlank();
+        assertThat(errorText("diameterMm")).isNotBlank();
         WebElement diameter = driver.findElement(By.id("diameterMm"));
         assertThat(diameter.getAttribute("class")).contains("invalid");
         assertThat(diameter.getAttribute("value")).isEqualTo("abc");
@@ -184,8 +190,7 @@ class StringBenchIT extends BrowserTestBase {
         type("diameterMm", "0.25");
         type("lengthMm", "-650");
         driver.findElement(By.id("analyze-button")).click();
-        WebElement lengthError = waitFor(By.cssSelector("[data-error-for='lengthMm']"));
-        assertThat(lengthError.getText()).isNotBlank();
+        assertThat(errorText("lengthMm")).isNotBlank();
         WebElement length = driver.findElement(By.id("lengthMm"));
         assertThat(length.getAttribute("class")).contains("invalid");
         assertThat(length.getAttribute("value")).isEqualTo("-650");
@@ -220,5 +225,14 @@ class StringBenchIT extends BrowserTestBase {
         assertThat(summary).contains(String.format(java.util.Locale.ROOT, "%.3f lbf", lbf));
         assertThat(tensionN).isPositive();
         screenshot("string-bench-inches");
+    }
+
+    /** Waits for the inline message of a field (re-read each time: the page rewrites it per answer). */
+    private String errorText(String field) {
+        return wait.until(d -> {
+            Object text = js("const e = document.querySelector('[data-error-for=\"' + CSS.escape(arguments[0]) + '\"]');"
+                    + "return e && e.textContent.trim() ? e.textContent : null;", field);
+            return (String) text;
+        });
     }
 }

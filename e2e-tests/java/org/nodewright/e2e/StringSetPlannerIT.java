@@ -87,10 +87,18 @@ class StringSetPlannerIT extends BrowserTestBase {
         gauge.clear();
         gauge.sendKeys("0");
         driver.findElement(By.id("analyze-set")).click();
-        WebElement error = waitFor(By.cssSelector("[data-error-for='strings[1].diameterMm']"));
-        assertThat(error.getText()).isNotBlank();
+        assertThat(errorText("strings[1].diameterMm")).isNotBlank();
         assertThat(gauge.getAttribute("value")).isEqualTo("0");
         assertThat(gauge.getAttribute("class")).contains("invalid");
         screenshot("set-planner-field-error");
+    }
+
+    /** Waits for the inline message of a field (re-read each time: the page rewrites it per answer). */
+    private String errorText(String field) {
+        return wait.until(d -> {
+            Object text = js("const e = document.querySelector('[data-error-for=\"' + CSS.escape(arguments[0]) + '\"]');"
+                    + "return e && e.textContent.trim() ? e.textContent : null;", field);
+            return (String) text;
+        });
     }
 }
