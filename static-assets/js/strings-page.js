@@ -24,6 +24,14 @@ function pickupRows() {
   return [...$('pickup-list').querySelectorAll('.pickup-row')];
 }
 
+/** A measured-value override in SI: the exact value handed over by another panel, or typed × factor. */
+function readOverride(input, factor) {
+  const v = readNumber(input);
+  if (typeof v !== 'number') return v;
+  if (input.dataset.shown === input.value && input.dataset.canonical !== undefined) return Number(input.dataset.canonical);
+  return v * factor;
+}
+
 /** The analyze request for what the form shows now (mm, N, Hz, SI). */
 function buildRequest() {
   const request = { lengthMm: readLength($('lengthMm')) };
@@ -35,10 +43,10 @@ function buildRequest() {
     request.wrapMaterial = $('wrapMaterial').value;
     request.wrapDiameterMm = readLength($('wrapDiameterMm'));
   }
-  const mu = readNumber($('linearDensity'));
-  if (mu !== null) request.linearDensityKgPerM = typeof mu === 'number' ? mu / 1000 : mu;   // g/m → kg/m
-  const modulus = readNumber($('youngsModulus'));
-  if (modulus !== null) request.youngsModulusPa = typeof modulus === 'number' ? modulus * 1e9 : modulus; // GPa → Pa
+  const mu = readOverride($('linearDensity'), 1e-3);           // g/m → kg/m
+  if (mu !== null) request.linearDensityKgPerM = mu;
+  const modulus = readOverride($('youngsModulus'), 1e9);       // GPa → Pa
+  if (modulus !== null) request.youngsModulusPa = modulus;
   request.endCondition = $('endCondition').value;
   request.stiffness = $('stiffness').checked;
   request.modeCount = readNumber($('modeCount'));
@@ -83,6 +91,9 @@ function fillForm(p, partial) {
     if (partial && !(key in p)) return;
     const v = p[key];
     input.value = v == null ? '' : String(Number((v * factor).toPrecision(6)));
+    input.dataset.canonical = v == null ? '' : String(v);
+    input.dataset.shown = input.value;
+    if (v == null) delete input.dataset.canonical;
     if (v != null) input.closest('details').open = true;
   };
   overrides('linearDensityKgPerM', $('linearDensity'), 1000);   // kg/m → g/m
@@ -269,6 +280,11 @@ function interpolate(samples, xMm) {
   return samples.length ? samples[samples.length - 1].y : 0;
 }
 
+/** One tick per mode row (1..count), whatever the axis padding. */
+function modeTicks(count) {
+  return Array.from({ length: count }, (_, i) => ({ value: i + 1 }));
+}
+
 function markerAnnotations(request) {
   const annotations = {};
   const pluckLabel = request.pluck.kind === 'strike' ? TEXT.strike : TEXT.pluck;
@@ -316,7 +332,8 @@ function drawModeShapes(request, response) {
   options.plugins.tooltip = { callbacks: { label: (ctx) => `${ctx.dataset.label} · ${ctx.parsed.x.toFixed(2)} ${io.units.length}` } };
   options.scales.x = lengthAxis(lengthMm);
   options.scales.y = {
-    min: 0.4, max: count + 0.6, ticks: { stepSize: 1, callback: (v) => (Number.isInteger(v) && v >= 1 && v <= count ? `${TEXT.mode} ${count - v + 1}` : '') },
+    min: 0.4, max: count + 0.6, ticks: { callback: (v) => `${TEXT.mode} ${count - v + 1}` },
+    afterBuildTicks: (axis) => { axis.ticks = modeTicks(count); },
     grid: { color: 'rgba(0,0,0,0.06)' },
   };
   drawChart($('mode-shapes-chart'), { type: 'scatter', data: { datasets }, options });
@@ -333,7 +350,10 @@ function drawNodeMap(request, response) {
   options.plugins.annotation.annotations = markerAnnotations(request);
   options.plugins.tooltip = { callbacks: { label: (ctx) => `${TEXT.mode} ${ctx.parsed.y} · ${TEXT.nodes} ${ctx.parsed.x.toFixed(2)} ${io.units.length}` } };
   options.scales.x = lengthAxis(request.lengthMm);
-  options.scales.y = { reverse: true, min: 0.5, max: count + 0.5, ticks: { stepSize: 1, callback: (v) => (Number.isInteger(v) ? String(v) : '') }, title: { display: true, text: TEXT.modeNumber } };
+  options.scales.y = {
+    reverse: true, min: 0.5, max: count + 0.5, title: { display: true, text: TEXT.modeNumber },
+    afterBuildTicks: (axis) => { axis.ticks = modeTicks(count); },
+  };
   drawChart($('node-map-chart'), { type: 'scatter', data: { datasets }, options });
 }
 

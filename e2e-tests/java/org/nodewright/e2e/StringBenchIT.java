@@ -227,6 +227,40 @@ class StringBenchIT extends BrowserTestBase {
         screenshot("string-bench-inches");
     }
 
+    @Test
+    @SuppressWarnings("unchecked")
+    void clampedEndsRaiseThePartialsAndAppliedParametersReachTheForm() throws Exception {
+        type("modeCount", "8");
+        new org.openqa.selenium.support.ui.Select(driver.findElement(By.id("endCondition"))).selectByValue("clamped");
+        analyze();
+        assertThat(js("return window.lastAnalysis.request.endCondition;")).isEqualTo("clamped");
+        double b = num(js("return window.lastAnalysis.response.inharmonicityB;"));
+        List<Object> cents = (List<Object>) datasets("partials-chart").get(0).get("data");
+        // Fletcher 1964, clamped ends: f_n = n f0 sqrt(1 + B n^2) (1 + 2/pi sqrt(B) + 4/pi^2 B), an
+        // approximation of the exact beam solution the server computes; to 0.05 cent at this small B.
+        for (int n = 1; n <= 8; n++) {
+            double ratio = Math.sqrt(1 + b * n * n) * (1 + 2 / Math.PI * Math.sqrt(b) + 4 / (Math.PI * Math.PI) * b);
+            assertThat(num(cents.get(n - 1))).isCloseTo(1200 * Math.log(ratio) / Math.log(2), within(0.05));
+        }
+        // The clamped shapes come from the server (shapeX, shape), not a sine: drawn as sent.
+        List<Map<String, Object>> modes = ofKind(datasets("mode-shapes-chart"), "mode");
+        assertThat(modes).hasSize(8);
+        List<Object> shapeX = (List<Object>) js("return window.lastAnalysis.response.modes[0].shapeX;");
+        assertThat(points(modes.get(0))).hasSize(shapeX.size());
+
+        // Another panel hands over measured values: they land in the override fields and are analysed.
+        long before = ((Number) js("return window.analysisCount || 0;")).longValue();
+        js("document.dispatchEvent(new CustomEvent('nodewright:apply-string-parameters',"
+                + " {detail: {linearDensityKgPerM: 0.0006, youngsModulusPa: 1.9e11}}));");
+        wait.until(d -> ((Number) js("return window.analysisCount;")).longValue() > before);
+        assertThat(driver.findElement(By.id("linearDensity")).getAttribute("value")).isEqualTo("0.6");
+        assertThat(driver.findElement(By.id("youngsModulus")).getAttribute("value")).isEqualTo("190");
+        assertThat(num(js("return window.lastAnalysis.request.linearDensityKgPerM;"))).isCloseTo(0.0006, within(1e-15));
+        assertThat(num(js("return window.lastAnalysis.response.linearDensityKgPerM;"))).isCloseTo(0.0006, within(1e-15));
+        assertThat(num(js("return window.lastAnalysis.request.youngsModulusPa;"))).isCloseTo(1.9e11, within(1.0));
+        screenshot("string-bench-clamped");
+    }
+
     /** Waits for the inline message of a field (re-read each time: the page rewrites it per answer). */
     private String errorText(String field) {
         return wait.until(d -> {

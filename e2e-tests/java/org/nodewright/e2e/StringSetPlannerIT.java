@@ -62,6 +62,7 @@ class StringSetPlannerIT extends BrowserTestBase {
             assertThat(num(bars.get(i))).isCloseTo(expected, within(expected * 1e-3));
         }
         assertThat(driver.findElement(By.id("neck-caution")).getText()).contains("truss-rod");
+        js("document.getElementById('set-total').scrollIntoView();");
         screenshot("set-planner");
     }
 
@@ -78,6 +79,7 @@ class StringSetPlannerIT extends BrowserTestBase {
         assertThat(num(bars().get(5)) / before).isCloseTo(Math.pow(680.0 / 650.0, 2), within(1e-3));
         double sum = bars().stream().mapToDouble(StringSetPlannerIT::num).sum();
         assertThat(totalShownN()).isCloseTo(sum, within(0.06));
+        js("document.getElementById('set-total').scrollIntoView();");
         screenshot("set-planner-multiscale");
     }
 
