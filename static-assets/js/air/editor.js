@@ -146,6 +146,7 @@ export class BoreEditor {
       const label = document.createElement('span');
       label.className = row.open ? 'hole-state open' : 'hole-state closed';
       label.textContent = row.open ? t('open') : t('closed');
+      td.className = 'open-cell';
       td.append(box, label);
       tr.append(td);
     }

@@ -7,6 +7,7 @@ import java.util.List;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import org.openqa.selenium.By;
+import org.openqa.selenium.Dimension;
 import org.openqa.selenium.WebElement;
 import org.openqa.selenium.support.ui.Select;
 
@@ -57,7 +58,13 @@ class BoreBenchIT extends BrowserTestBase {
         assertThat(js("return window.__airEvents.length")).isEqualTo(1L);
         assertThat(js("return window.__airEvents[0].request.segments[0].lengthMm")).isEqualTo(300L);
         assertThat(js("return window.__airEvents[0].response.resonances.length")).isEqualTo((long) f.size());
-        screenshot("bore-bench-cylinder");
+        // Phase on demand: a second dataset on its own axis.
+        assertThat(js("return Chart.getChart(document.getElementById('impedance-chart')).data.datasets[1].hidden"))
+                .isEqualTo(true);
+        driver.findElement(By.id("show-phase")).click();
+        wait.until(d -> Boolean.FALSE.equals(
+                js("return Chart.getChart(document.getElementById('impedance-chart')).data.datasets[1].hidden")));
+        fullPageScreenshot("bore-bench-cylinder");
 
         // Inches on screen, millimetres on the wire: same resonances.
         String beforeUnits = analyzed();
@@ -97,7 +104,7 @@ class BoreBenchIT extends BrowserTestBase {
         // An open tone hole shortens the acoustic length (common practice): closing it lowers f1,
         // here by far more than a semitone since the hole is a third of the way from the end.
         assertThat(cents(open, closed)).isGreaterThan(100.0);
-        screenshot("bore-bench-hole-closed");
+        fullPageScreenshot("bore-bench-hole-closed");
     }
 
     @Test
@@ -116,7 +123,7 @@ class BoreBenchIT extends BrowserTestBase {
         assertThat(driver.findElements(By.cssSelector("#segment-rows tr"))).hasSize(2);
         assertThat(bad.getDomProperty("value")).isEqualTo("-40");
         assertThat(field("segments[0].lengthMm").getDomProperty("value")).isEqualTo("300");
-        screenshot("bore-bench-bad-row");
+        fullPageScreenshot("bore-bench-bad-row");
 
         // Text that is not a number is caught in the page, on its own field.
         String again = rejected();
@@ -148,7 +155,7 @@ class BoreBenchIT extends BrowserTestBase {
         double f1 = resonanceColumn(1).get(0);
         assertThat(cents(f1, c / (4 * (0.300 + 0.6133 * 0.0125)))).isCloseTo(0.0, within(15.0));
         assertThat(cell(2, 6)).isEqualTo("3·f1");
-        screenshot("bore-bench-stopped-pipe");
+        fullPageScreenshot("bore-bench-stopped-pipe");
 
         String beforeWhistle = analyzed();
         new Select(driver.findElement(By.id("preset-select"))).selectByValue("six-hole-whistle");
@@ -166,10 +173,20 @@ class BoreBenchIT extends BrowserTestBase {
         double d5 = Double.parseDouble(rows.get(0).findElement(By.cssSelector("td.predicted")).getText());
         double d6 = Double.parseDouble(rows.get(7).findElement(By.cssSelector("td.predicted")).getText());
         assertThat(cents(d6, 2 * d5)).isCloseTo(0.0, within(50.0));
-        screenshot("bore-bench-whistle");
+        fullPageScreenshot("bore-bench-whistle");
     }
 
     // ---- helpers -------------------------------------------------------------------------
+
+    /** A screenshot of the whole page: the window is stretched to the page's height for it. */
+    private void fullPageScreenshot(String name) throws Exception {
+        Dimension before = driver.manage().window().getSize();
+        long height = (Long) js("return Math.ceil(document.documentElement.scrollHeight)");
+        driver.manage().window().setSize(new Dimension(before.getWidth(), (int) Math.min(height + 120, 4000)));
+        Thread.sleep(300); // let the charts redraw at the new size
+        screenshot(name);
+        driver.manage().window().setSize(before);
+    }
 
     /** Clears the editor down to one cylinder of the given length and bore, in millimetres. */
     private void buildCylinder(double lengthMm, double boreMm) {
