@@ -4,6 +4,8 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import org.nodewright.physics.strings.Fret;
+import org.nodewright.physics.strings.Frets;
 
 /**
  * A fret slotting template: nut line (fret 0), one line per fret, the saddle line at the scale
@@ -45,9 +47,13 @@ public record FretTemplate(double scaleLengthMm, int count, int divisionsPerOcta
         }
     }
 
-    /** Distance of fret n from the nut. */
-    public double fretMm(int n) {
-        return EqualDivisionFrets.fromNutMm(scaleLengthMm, n, divisionsPerOctave);
+    /** Distances of frets 0 (the nut) to count from the nut, mm, from the string core's equal divisions. */
+    public double[] fretsMm() {
+        double[] x = new double[count + 1];
+        for (Fret f : Frets.equalDivisions(scaleLengthMm * 1e-3, count, divisionsPerOctave)) {
+            x[f.fret()] = f.fromNutM() * 1e3;
+        }
+        return x;
     }
 
     /** Draws the template on a sheet wide enough for the saddle line (or the farthest position). */
@@ -64,6 +70,7 @@ public record FretTemplate(double scaleLengthMm, int count, int divisionsPerOcta
         double rulerBase = positionsRow + (positions.isEmpty() ? 0 : 10.0) + CalibrationRuler.MAJOR_TICK_MM + 4.0;
         double height = rulerBase + CalibrationRuler.HEIGHT_MM + MARGIN_MM;
 
+        double[] frets = fretsMm();
         List<Mark> marks = new ArrayList<>();
         double x0 = MARGIN_MM;
         double mid = (top + bottom) / 2;
@@ -71,11 +78,11 @@ public record FretTemplate(double scaleLengthMm, int count, int divisionsPerOcta
         marks.add(new Mark.Stroke(x0, top, x0, bottom, 0.3, Mark.Role.NUT, Map.of("fret", "0")));
         marks.add(Mark.Caption.of(x0, top - 3, "nut", 2.5, Mark.Caption.Anchor.MIDDLE));
         for (int n = 1; n <= count; n++) {
-            double x = x0 + fretMm(n);
+            double x = x0 + frets[n];
             marks.add(new Mark.Stroke(x, top, x, bottom, 0.2, Mark.Role.FRET, Map.of("fret", Integer.toString(n))));
             marks.add(new Mark.Caption(x, top - 3 - (n % 2 == 0 ? 4 : 0), Integer.toString(n), 2.5,
                     Mark.Caption.Anchor.MIDDLE, Mark.Role.TEXT, Map.of("fret-label", Integer.toString(n))));
-            marks.add(Mark.Caption.of(x, textRow + (n % 2 == 0 ? 3.5 : 0), mm(fretMm(n)), 1.8,
+            marks.add(Mark.Caption.of(x, textRow + (n % 2 == 0 ? 3.5 : 0), mm(frets[n]), 1.8,
                     Mark.Caption.Anchor.MIDDLE));
         }
         double xs = x0 + scaleLengthMm;
