@@ -56,8 +56,8 @@ public final class Radiation {
         double mod = flanged ? flangedModulus(ka) : unflangedModulus(ka);
         double l = flanged ? flangedEndCorrection(ka) : unflangedEndCorrection(ka);
         double phi = -2 * ka * l; // R = -|R| e^{j phi}
-        double rr = -mod * Math.cos(phi);
-        double ri = -mod * Math.sin(phi);
+        double rr = -mod * SmallAngle.cos(phi);
+        double ri = -mod * SmallAngle.sin(phi);
         // (1 + R) / (1 - R)
         double nr = 1 + rr;
         double ni = ri;
