@@ -58,9 +58,12 @@ function addRow(spec) {
   const material = materialSelect('material');
   if (spec.material) material.value = spec.material;
   cell(material);
-  const gauge = textInput('gauge', 'length');
-  if (spec.diameterMm != null) io.writeLength(gauge, spec.diameterMm);
-  cell(gauge, 'narrow');
+  const lengthCell = (cls, mm) => {
+    const input = textInput(cls, 'length');
+    if (mm != null) io.writeLength(input, mm);
+    cell(input, 'narrow');
+  };
+  lengthCell('gauge', spec.diameterMm);
   const wound = document.createElement('input');
   wound.type = 'checkbox';
   wound.className = 'wound';
@@ -69,12 +72,8 @@ function addRow(spec) {
   const wrap = materialSelect('wrap-material');
   wrap.value = spec.wrapMaterial || defaultWrap(state.materials);
   cell(wrap);
-  const wrapGauge = textInput('wrap-gauge', 'length');
-  if (spec.wrapDiameterMm != null) io.writeLength(wrapGauge, spec.wrapDiameterMm);
-  cell(wrapGauge, 'narrow');
-  const own = textInput('own-length', 'length');
-  if (spec.lengthMm != null) io.writeLength(own, spec.lengthMm);
-  cell(own, 'narrow');
+  lengthCell('wrap-gauge', spec.wrapDiameterMm);
+  lengthCell('own-length', spec.lengthMm);
   const remove = document.createElement('button');
   remove.type = 'button';
   remove.className = 'secondary remove-string';

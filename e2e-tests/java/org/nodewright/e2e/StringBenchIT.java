@@ -13,7 +13,7 @@ import org.openqa.selenium.WebElement;
 import org.openqa.selenium.interactions.Actions;
 
 /** The string bench in a real headless Chromium: form, four charts, movable markers, field errors. */
-class StringBenchIT extends BrowserTestBase {
+class StringBenchIT extends StringPageTestBase {
 
     private static final double LENGTH_MM = 650.0;
 
@@ -42,12 +42,6 @@ class StringBenchIT extends BrowserTestBase {
         wait.until(d -> Boolean.TRUE.equals(js("return document.getElementById('busy').hidden;")));
     }
 
-    @SuppressWarnings("unchecked")
-    private List<Map<String, Object>> datasets(String canvasId) {
-        Map<String, Object> data = (Map<String, Object>) chartData(canvasId);
-        return (List<Map<String, Object>>) data.get("datasets");
-    }
-
     private static List<Map<String, Object>> ofKind(List<Map<String, Object>> sets, String kind) {
         return sets.stream().filter(d -> kind.equals(d.get("kind"))).toList();
     }
@@ -55,10 +49,6 @@ class StringBenchIT extends BrowserTestBase {
     @SuppressWarnings("unchecked")
     private static List<Map<String, Object>> points(Map<String, Object> dataset) {
         return (List<Map<String, Object>>) dataset.get("data");
-    }
-
-    private static double num(Object o) {
-        return ((Number) o).doubleValue();
     }
 
     @Test
@@ -261,12 +251,20 @@ class StringBenchIT extends BrowserTestBase {
         screenshot("string-bench-clamped");
     }
 
-    /** Waits for the inline message of a field (re-read each time: the page rewrites it per answer). */
-    private String errorText(String field) {
-        return wait.until(d -> {
-            Object text = js("const e = document.querySelector('[data-error-for=\"' + CSS.escape(arguments[0]) + '\"]');"
-                    + "return e && e.textContent.trim() ? e.textContent : null;", field);
-            return (String) text;
-        });
+    @Test
+    void aStringPastItsStrengthShowsAStrongWarningBesideTheCaution() throws Exception {
+        driver.findElement(By.cssSelector("input[name='drive'][value='tension']")).click();
+        type("diameterMm", "0.25");
+        type("tensionN", "300");
+        analyze();
+        // 300 N on a 0.25 mm wire is 300 / (pi 0.25^2 / 4) = 6112 MPa, far past any steel wire.
+        assertThat(num(js("return window.lastAnalysis.request.tensionN;"))).isEqualTo(300.0);
+        assertThat(js("return 'targetHz' in window.lastAnalysis.request;")).isEqualTo(false);
+        assertThat(driver.findElement(By.id("summary")).getText()).contains("6112 MPa");
+        assertThat(driver.findElements(By.cssSelector("#warnings li.strong"))).isNotEmpty();
+        assertThat(driver.findElement(By.id("summary-panel")).getAttribute("class")).contains("danger");
+        assertThat(driver.findElement(By.id("string-caution")).isDisplayed()).isTrue();
+        js("window.scrollTo(0, 0);");
+        screenshot("string-bench-over-strength");
     }
 }
