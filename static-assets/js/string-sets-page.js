@@ -18,9 +18,9 @@ const HOUSE_SET = [
   { target: 'E4', material: 'plain-steel', diameterMm: 0.254 },
   { target: 'B3', material: 'plain-steel', diameterMm: 0.330 },
   { target: 'G3', material: 'plain-steel', diameterMm: 0.432 },
-  { target: 'D3', material: 'plain-steel', diameterMm: 0.380, wrapDiameterMm: 0.230 },
-  { target: 'A2', material: 'plain-steel', diameterMm: 0.430, wrapDiameterMm: 0.320 },
-  { target: 'E2', material: 'plain-steel', diameterMm: 0.500, wrapDiameterMm: 0.400 },
+  { target: 'D3', material: 'plain-steel', diameterMm: 0.300, wrapDiameterMm: 0.160 },
+  { target: 'A2', material: 'plain-steel', diameterMm: 0.360, wrapDiameterMm: 0.235 },
+  { target: 'E2', material: 'plain-steel', diameterMm: 0.430, wrapDiameterMm: 0.325 },
 ];
 
 function rows() {

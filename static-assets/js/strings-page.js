@@ -11,6 +11,7 @@ const TEXT = Object.fromEntries([...document.querySelectorAll('#page-text [data-
 
 const SPECTRUM_FLOOR_DB = -80;      // lowest level drawn on the spectrum chart
 const SHAPE_HALF_HEIGHT = 0.42;     // each mode shape is drawn ±0.42 around its row of the ladder
+const DEFAULT_WRAP_MM = 0.25;       // a starting wrap wire when a plain string is switched to wound
 const io = unitInputs();
 const state = { seq: 0, last: null, timer: null };
 const { readLength, readForce, writeLength, writeForce } = io;
@@ -280,6 +281,19 @@ function interpolate(samples, xMm) {
   return samples.length ? samples[samples.length - 1].y : 0;
 }
 
+/**
+ * Pluck and pickups where the form has them now: while a marker is dragged, an answer to an
+ * earlier request must not pull the line back to where it was.
+ */
+function liveMarkers(request) {
+  const live = buildRequest();
+  const ok = (v) => typeof v === 'number' && Number.isFinite(v);
+  const pluck = ok(live.pluck.positionMm) ? live.pluck : request.pluck;
+  const pickups = live.pickups.length === request.pickups.length && live.pickups.every((p) => ok(p.positionMm) && ok(p.apertureMm))
+    ? live.pickups : request.pickups;
+  return { pluck, pickups };
+}
+
 /** One tick per mode row (1..count), whatever the axis padding. */
 function modeTicks(count) {
   return Array.from({ length: count }, (_, i) => ({ value: i + 1 }));
@@ -328,7 +342,7 @@ function drawModeShapes(request, response) {
   datasets.push({ kind: 'antinodes', label: TEXT.antinodes, data: antinodes, showLine: false, pointStyle: 'triangle', pointRadius: 4, backgroundColor: '#fbf8f1', borderColor: '#a86400', borderWidth: 1.5 });
   const options = baseOptions({});
   options.plugins.legend.labels.filter = (item, data) => data.datasets[item.datasetIndex].kind !== 'mode';
-  options.plugins.annotation.annotations = markerAnnotations(request);
+  options.plugins.annotation.annotations = markerAnnotations(liveMarkers(request));
   options.plugins.tooltip = { callbacks: { label: (ctx) => `${ctx.dataset.label} · ${ctx.parsed.x.toFixed(2)} ${io.units.length}` } };
   options.scales.x = lengthAxis(lengthMm);
   options.scales.y = {
@@ -347,7 +361,7 @@ function drawNodeMap(request, response) {
     pointRadius: 4, pointStyle: 'circle', backgroundColor: colour(mode.n - 1), borderColor: colour(mode.n - 1), showLine: false,
   }));
   const options = baseOptions({ legend: false });
-  options.plugins.annotation.annotations = markerAnnotations(request);
+  options.plugins.annotation.annotations = markerAnnotations(liveMarkers(request));
   options.plugins.tooltip = { callbacks: { label: (ctx) => `${TEXT.mode} ${ctx.parsed.y} · ${TEXT.nodes} ${ctx.parsed.x.toFixed(2)} ${io.units.length}` } };
   options.scales.x = lengthAxis(request.lengthMm);
   options.scales.y = {
@@ -526,6 +540,7 @@ function wire() {
     if (t.type === 'range') return;
     showConstruction();
     if (t.id === 'pluckKind') buildSliders();
+    if (t.id === 'construction' && wound() && $('wrapDiameterMm').value.trim() === '') writeLength($('wrapDiameterMm'), DEFAULT_WRAP_MM);
     if (t.id === 'lengthMm') syncSliders();
     analyzeSoon(0);
   });

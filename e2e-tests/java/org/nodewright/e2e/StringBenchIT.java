@@ -267,4 +267,18 @@ class StringBenchIT extends StringPageTestBase {
         js("window.scrollTo(0, 0);");
         screenshot("string-bench-over-strength");
     }
+
+    @Test
+    void aWoundStringSendsItsWrapAndWeighsMoreThanItsCore() throws Exception {
+        type("diameterMm", "0.4");
+        analyze();
+        double plain = num(js("return window.lastAnalysis.response.linearDensityKgPerM;"));
+        new org.openqa.selenium.support.ui.Select(driver.findElement(By.id("construction"))).selectByValue("wound");
+        assertThat(driver.findElement(By.id("wrapDiameterMm")).isDisplayed()).isTrue();
+        analyze();
+        assertThat(js("return window.lastAnalysis.request.wrapMaterial;")).isNotNull();
+        assertThat(num(js("return window.lastAnalysis.request.wrapDiameterMm;"))).isEqualTo(0.25);
+        // A wrap can only add mass: the wound string is heavier per metre than its bare core.
+        assertThat(num(js("return window.lastAnalysis.response.linearDensityKgPerM;"))).isGreaterThan(plain);
+    }
 }
