@@ -281,4 +281,29 @@ class StringBenchIT extends StringPageTestBase {
         // A wrap can only add mass: the wound string is heavier per metre than its bare core.
         assertThat(num(js("return window.lastAnalysis.response.linearDensityKgPerM;"))).isGreaterThan(plain);
     }
+
+    @Test
+    void aSavedDesignComesBackIntoTheFormThroughTheDesignBar() throws Exception {
+        type("lengthMm", "640");
+        type("modeCount", "5");
+        analyze();
+        WebElement name = waitFor(By.cssSelector("#design-bar [data-role='name']"));
+        name.sendKeys("Harrowgate Lane parlour, first string");
+        driver.findElement(By.cssSelector("#design-bar [data-role='save']")).click();
+        wait.until(d -> driver.getCurrentUrl().contains("design="));
+        String designUrl = driver.getCurrentUrl();
+
+        driver.get(url("/strings"));
+        waitFor(By.id("string-form"));
+        wait.until(d -> "650".equals(driver.findElement(By.id("lengthMm")).getAttribute("value")));
+        driver.get(designUrl);
+        wait.until(d -> "640".equals(driver.findElement(By.id("lengthMm")).getAttribute("value")));
+        assertThat(driver.findElement(By.id("modeCount")).getAttribute("value")).isEqualTo("5");
+        wait.until(d -> {
+            Object count = js("const c = Chart.getChart(document.getElementById('partials-chart'));"
+                    + "return c ? c.data.datasets[0].data.length : 0;");
+            return ((Number) count).intValue() == 5;
+        });
+        screenshot("string-bench-saved-design");
+    }
 }
