@@ -60,7 +60,8 @@ function addRow(spec) {
   cell(material);
   const lengthCell = (cls, mm) => {
     const input = textInput(cls, 'length');
-    if (mm != null) io.writeLength(input, mm);
+    if (typeof mm === 'number') io.writeLength(input, mm);
+    else if (mm != null) input.value = String(mm);   // shown as it came, for the server to judge
     cell(input, 'narrow');
   };
   lengthCell('gauge', spec.diameterMm);

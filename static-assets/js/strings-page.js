@@ -60,33 +60,45 @@ function buildRequest() {
   return request;
 }
 
+/** A target frequency as the user would write it: its note name when it is one exactly, else Hz. */
+function pitchText(hz) {
+  if (typeof hz !== 'number') return String(hz);
+  const a4 = readNumber($('referenceA4Hz'));
+  const note = nearestNote(hz, typeof a4 === 'number' && a4 > 0 ? a4 : 440);
+  return Math.abs(note.cents) < 1e-6 ? note.name : String(hz);
+}
+
 function setIfPresent(p, key, apply) {
   if (Object.prototype.hasOwnProperty.call(p, key) && p[key] !== undefined) apply(p[key]);
 }
 
 /** Fills the form from a request body (all of it, or only the keys a partial one carries). */
 function fillForm(p, partial) {
-  const clearable = (input, value, write) => {
-    if (value === null) { input.value = ''; delete input.dataset.canonical; } else write(value);
+  // Numbers go in through the unit converters; anything else is shown as it came, for the server to judge.
+  const put = (input, v, write) => {
+    if (typeof v === 'number') { write(input, v); return; }
+    input.value = v == null ? '' : String(v);
+    delete input.dataset.canonical;
   };
-  setIfPresent(p, 'lengthMm', (v) => writeLength($('lengthMm'), v));
+  setIfPresent(p, 'referenceA4Hz', (v) => { $('referenceA4Hz').value = v === null ? '440' : String(v); });
+  setIfPresent(p, 'lengthMm', (v) => put($('lengthMm'), v, writeLength));
   setIfPresent(p, 'targetHz', (v) => {
     if (v === null) return;
-    $('targetHz').value = String(v);
+    $('targetHz').value = pitchText(v);
     form.querySelector('input[name="drive"][value="pitch"]').checked = true;
   });
   setIfPresent(p, 'tensionN', (v) => {
     if (v === null) return;
-    writeForce($('tensionN'), v);
+    put($('tensionN'), v, writeForce);
     if (!partial || p.targetHz == null) form.querySelector('input[name="drive"][value="tension"]').checked = true;
   });
   setIfPresent(p, 'material', (v) => { if (v !== null) $('material').value = v; });
-  setIfPresent(p, 'diameterMm', (v) => clearable($('diameterMm'), v, (x) => writeLength($('diameterMm'), x)));
+  setIfPresent(p, 'diameterMm', (v) => put($('diameterMm'), v, writeLength));
   if (!partial || 'wrapMaterial' in p || 'wrapDiameterMm' in p) {
     const isWound = p.wrapMaterial != null || p.wrapDiameterMm != null;
     $('construction').value = isWound ? 'wound' : 'plain';
     if (p.wrapMaterial != null) $('wrapMaterial').value = p.wrapMaterial;
-    if (p.wrapDiameterMm != null) writeLength($('wrapDiameterMm'), p.wrapDiameterMm);
+    if (p.wrapDiameterMm != null) put($('wrapDiameterMm'), p.wrapDiameterMm, writeLength);
   }
   const overrides = (key, input, factor) => {
     if (partial && !(key in p)) return;
@@ -100,17 +112,17 @@ function fillForm(p, partial) {
   overrides('linearDensityKgPerM', $('linearDensity'), 1000);   // kg/m → g/m
   overrides('youngsModulusPa', $('youngsModulus'), 1e-9);       // Pa → GPa
   setIfPresent(p, 'endCondition', (v) => { if (v !== null) $('endCondition').value = v; });
-  setIfPresent(p, 'stiffness', (v) => { $('stiffness').checked = v !== false; });
+  setIfPresent(p, 'stiffness', (v) => { $('stiffness').checked = v === true; });   // the server's default is off
   setIfPresent(p, 'modeCount', (v) => { if (v !== null) $('modeCount').value = String(v); });
-  setIfPresent(p, 'referenceA4Hz', (v) => { $('referenceA4Hz').value = v === null ? '440' : String(v); });
   setIfPresent(p, 'pluck', (v) => {
     if (!v) return;
     if (v.kind) $('pluckKind').value = v.kind;
-    if (v.positionMm != null) writeLength($('pluckPosition'), v.positionMm);
+    if (v.positionMm != null) put($('pluckPosition'), v.positionMm, writeLength);
   });
   setIfPresent(p, 'pickups', (list) => {
     $('pickup-list').replaceChildren();
-    (list || []).forEach((pu) => addPickupRow(pu.positionMm, pu.apertureMm ?? 0));
+    (list || []).filter((pu) => pu && typeof pu.positionMm === 'number')
+      .forEach((pu) => addPickupRow(pu.positionMm, typeof pu.apertureMm === 'number' ? pu.apertureMm : 0));
   });
   showConstruction();
 }

@@ -42,6 +42,12 @@ class StringBenchIT extends StringPageTestBase {
         wait.until(d -> Boolean.TRUE.equals(js("return document.getElementById('busy').hidden;")));
     }
 
+    /** Clicks Analyse and waits until every request the form has sent is answered. */
+    private void submitAndWaitIdle() {
+        driver.findElement(By.id("analyze-button")).click();
+        wait.until(d -> Boolean.TRUE.equals(js("return document.getElementById('busy').hidden;")));
+    }
+
     private static List<Map<String, Object>> ofKind(List<Map<String, Object>> sets, String kind) {
         return sets.stream().filter(d -> kind.equals(d.get("kind"))).toList();
     }
@@ -170,7 +176,7 @@ class StringBenchIT extends StringPageTestBase {
     void badValueGetsAnInlineErrorAndKeepsWhatWasTyped() throws Exception {
         // Text where a number belongs: the server's problem document names diameterMm.
         type("diameterMm", "abc");
-        driver.findElement(By.id("analyze-button")).click();
+        submitAndWaitIdle();
         assertThat(errorText("diameterMm")).isNotBlank();
         WebElement diameter = driver.findElement(By.id("diameterMm"));
         assertThat(diameter.getAttribute("class")).contains("invalid");
@@ -179,12 +185,13 @@ class StringBenchIT extends StringPageTestBase {
         // A negative length: named lengthMm, and the typed value stays in the field.
         type("diameterMm", "0.25");
         type("lengthMm", "-650");
-        driver.findElement(By.id("analyze-button")).click();
+        submitAndWaitIdle();
         assertThat(errorText("lengthMm")).isNotBlank();
         WebElement length = driver.findElement(By.id("lengthMm"));
         assertThat(length.getAttribute("class")).contains("invalid");
         assertThat(length.getAttribute("value")).isEqualTo("-650");
         assertThat(driver.findElements(By.cssSelector("[data-error-for='diameterMm']"))).isEmpty();
+        js("document.getElementById('lengthMm').scrollIntoView({block: 'center'});");
         screenshot("string-bench-field-error");
 
         // Fixing the value clears the error and draws again.
