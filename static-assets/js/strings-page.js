@@ -243,6 +243,7 @@ async function analyze() {
   if (mine !== state.seq) return;   // a newer request is on its way; drop this answer
   $('busy').hidden = true;
   if (!result.ok) {
+    document.querySelectorAll('.bench-results, #modes-panel').forEach((el) => el.classList.add('stale'));
     const unclaimed = showFieldErrors(form, result.problem);
     const detail = result.problem && result.problem.detail ? ` ${result.problem.detail}` : '';
     $('form-problem').textContent = `${TEXT.fixFields}${detail}${unclaimed.length ? ` ${unclaimed.join('; ')}` : ''}`;
@@ -250,6 +251,7 @@ async function analyze() {
   }
   clearFieldErrors(form);
   $('form-problem').textContent = '';
+  document.querySelectorAll('.bench-results, #modes-panel').forEach((el) => el.classList.remove('stale'));
   state.last = { request, response: result.data };
   render(request, result.data);
   document.dispatchEvent(new CustomEvent('nodewright:string-analyzed', { detail: { request, response: result.data } }));
@@ -430,6 +432,13 @@ function drawSpectrum(response) {
   drawChart($('spectrum-chart'), { type: 'bar', data: { labels: response.modes.map((m) => String(m.n)), datasets }, options });
 }
 
+/** A signed figure without a "-0.0" for values that round to zero. */
+function signed(value, digits) {
+  const text = Math.abs(value).toFixed(digits);
+  if (Number(text) === 0) return `±${text}`;
+  return `${value > 0 ? '+' : '−'}${text}`;
+}
+
 function drawSummary(request, response) {
   const a4 = typeof request.referenceA4Hz === 'number' ? request.referenceA4Hz : 440;
   const note = response.note || nearestNote(response.fundamentalHz, a4);
@@ -437,7 +446,7 @@ function drawSummary(request, response) {
   const rows = [
     [TEXT.tension, `${fromNewton(response.tensionN, io.units.force).toFixed(io.units.force === "N" ? 2 : 3)} ${io.units.force}`],
     [TEXT.fundamental, `${response.fundamentalHz.toFixed(3)} Hz`],
-    [TEXT.note, `${note.name} ${(note.centsOff ?? note.cents) >= 0 ? '+' : ''}${(note.centsOff ?? note.cents).toFixed(1)} ¢`],
+    [TEXT.note, `${note.name} ${signed(note.centsOff ?? note.cents, 1)} ¢`],
     [TEXT.linearDensity, `${(response.linearDensityKgPerM * 1000).toFixed(4)} g/m`],
     [TEXT.waveSpeed, `${response.waveSpeedMps.toFixed(1)} m/s`],
     [TEXT.inharmonicity, response.inharmonicityB.toExponential(3)],
@@ -472,8 +481,8 @@ function drawTable(request, response) {
     const note = nearestNote(m.frequencyHz, a4);
     const c = cents(m);
     const cells = [
-      String(m.n), m.frequencyHz.toFixed(3), m.harmonicHz.toFixed(3), `${c >= 0 ? '+' : ''}${c.toFixed(2)}`,
-      `${note.name} ${note.cents >= 0 ? '+' : ''}${note.cents.toFixed(1)}`,
+      String(m.n), m.frequencyHz.toFixed(3), m.harmonicHz.toFixed(3), signed(c, 2),
+      `${note.name} ${signed(note.cents, 1)}`,
       m.nodesMm.map(fmtLen).join(', '),
       (m.nodesFromBridgeMm || [...m.nodesMm].reverse().map((x) => length - x)).map(fmtLen).join(', '),
       m.antinodesMm.map(fmtLen).join(', '),
