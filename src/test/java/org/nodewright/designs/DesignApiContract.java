@@ -37,6 +37,10 @@ import tools.jackson.databind.json.JsonMapper;
 abstract class DesignApiContract {
 
     /** A string as the contract's example request gives it (650 mm plain steel 0.30 mm at 70 N). */
+    static final String AIR_PARAMS = """
+            {"segments": [{"lengthMm": 300.0, "inputDiameterMm": 15.0, "outputDiameterMm": 15.0}],
+             "inputEnd": "closed", "outputEnd": "ideal-open", "fMinHz": 20.0, "fMaxHz": 2000.0, "points": 400}""";
+
     static final String STRING_PARAMS = """
             {"lengthMm": 650.0, "tensionN": 70.0, "material": "plain-steel", "diameterMm": 0.30,
              "endCondition": "pinned", "stiffness": true, "modeCount": 12}""";
@@ -100,7 +104,7 @@ abstract class DesignApiContract {
     void listSearchesByNameTagAndKind() throws Exception {
         create("Parlour top E", "string", STRING_PARAMS, "[\"steel\", \"Parlour\"]");
         create("Parlour bottom E", "string", STRING_PARAMS, "[\"wound\"]");
-        create("Alto recorder bore", "air-column", "{\"segments\": []}", "[\"parlour\"]");
+        create("Alto recorder bore", "air-column", AIR_PARAMS, "[\"parlour\"]");
         create("100%_odd name", "string", STRING_PARAMS, "[]");
 
         mvc.perform(get("/api/v1/designs")).andExpect(jsonPath("$.length()").value(4));
@@ -234,7 +238,7 @@ abstract class DesignApiContract {
         long a = create("Top E", "string", STRING_PARAMS, "[]").get("id").asLong();
         long b = create("Top E long scale", "string", STRING_PARAMS.replace("650.0", "648").replace("70.0", "75.0"),
                 "[]").get("id").asLong();
-        long bore = create("Bore", "air-column", "{\"segments\": []}", "[]").get("id").asLong();
+        long bore = create("Bore", "air-column", AIR_PARAMS, "[]").get("id").asLong();
         mvc.perform(get("/api/v1/designs/compare").param("a", "" + a).param("b", "" + b))
                 .andExpect(status().isOk())
                 .andExpect(jsonPath("$.differences.length()").value(2))
