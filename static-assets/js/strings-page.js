@@ -308,6 +308,11 @@ function liveMarkers(request) {
   return { pluck, pickups };
 }
 
+/** Gives a chart with one row per mode room for every row (Chart.js follows its box's size). */
+function fitHeight(canvasId, minPx, perModePx, count) {
+  $(canvasId).parentElement.style.height = `${Math.max(minPx, perModePx * count + 90)}px`;
+}
+
 /** One tick per mode row (1..count), whatever the axis padding. */
 function modeTicks(count) {
   return Array.from({ length: count }, (_, i) => ({ value: i + 1 }));
@@ -364,6 +369,7 @@ function drawModeShapes(request, response) {
     afterBuildTicks: (axis) => { axis.ticks = modeTicks(count); },
     grid: { color: 'rgba(0,0,0,0.06)' },
   };
+  fitHeight('mode-shapes-chart', 360, 40, count);
   drawChart($('mode-shapes-chart'), { type: 'scatter', data: { datasets }, options });
 }
 
@@ -382,6 +388,7 @@ function drawNodeMap(request, response) {
     reverse: true, min: 0.5, max: count + 0.5, title: { display: true, text: TEXT.modeNumber },
     afterBuildTicks: (axis) => { axis.ticks = modeTicks(count); },
   };
+  fitHeight('node-map-chart', 300, 18, count);
   drawChart($('node-map-chart'), { type: 'scatter', data: { datasets }, options });
 }
 
