@@ -208,6 +208,7 @@ async function analyze() {
   $('form-problem').textContent = '';
   state.last = { request, response: result.data };
   render(request, result.data);
+  form.dataset.analyses = String(Number(form.dataset.analyses || 0) + 1);   // lets tests and neighbours see a fresh answer
 }
 
 async function start() {

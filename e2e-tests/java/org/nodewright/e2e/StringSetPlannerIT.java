@@ -105,4 +105,26 @@ class StringSetPlannerIT extends StringPageTestBase {
         js("document.getElementById('set-total').scrollIntoView();");
         screenshot("set-planner-over-strength");
     }
+
+    @Test
+    void kilogramsForceAndInchesAreOnlyADisplay() throws Exception {
+        double totalN = totalShownN();
+        new org.openqa.selenium.support.ui.Select(driver.findElement(By.id("force-unit"))).selectByValue("kgf");
+        new org.openqa.selenium.support.ui.Select(driver.findElement(By.id("length-unit"))).selectByValue("inch");
+        // 1 kgf = 9.80665 N (standard gravity, 3rd CGPM 1901; NIST SP 811); 650 mm = 25.59055 inch (1 inch = 25.4 mm).
+        wait.until(d -> driver.findElement(By.id("set-total")).getText().endsWith(" kgf"));
+        String kgf = driver.findElement(By.id("set-total")).getText().replace(" kgf", "");
+        assertThat(Double.parseDouble(kgf)).isCloseTo(totalN / 9.80665, within(0.01));
+        assertThat(driver.findElement(By.id("setLengthMm")).getAttribute("value")).isEqualTo("25.59055");
+        assertThat(rows().get(0).findElement(By.cssSelector(".gauge")).getAttribute("value")).isEqualTo("0.01");
+        // Analysing again in these units sends the same millimetres, so the bars do not move.
+        List<Object> before = bars();
+        String count = driver.findElement(By.id("set-form")).getAttribute("data-analyses");
+        driver.findElement(By.id("analyze-set")).click();
+        wait.until(d -> !count.equals(driver.findElement(By.id("set-form")).getAttribute("data-analyses")));
+        List<Object> after = bars();
+        for (int i = 0; i < before.size(); i++) {
+            assertThat(num(after.get(i))).isCloseTo(num(before.get(i)), within(1e-9));
+        }
+    }
 }
