@@ -174,6 +174,15 @@ class BoreBenchIT extends BrowserTestBase {
         double d6 = Double.parseDouble(rows.get(7).findElement(By.cssSelector("td.predicted")).getText());
         assertThat(cents(d6, 2 * d5)).isCloseTo(0.0, within(50.0));
         fullPageScreenshot("bore-bench-whistle");
+
+        // A target the server cannot read is marked on that fingering's target, the rows kept.
+        String beforeBad = rejected();
+        WebElement target = driver.findElement(By.cssSelector("#fingering-rows tr:nth-child(2) input[data-key='target']"));
+        type(target, "H9");
+        wait.until(d -> !beforeBad.equals(rejected()));
+        assertThat(waitFor(By.cssSelector("[data-error-for='fingerings[1].targetNote']")).getText()).isNotBlank();
+        assertThat(driver.findElements(By.cssSelector("#fingering-rows tr"))).hasSize(9);
+        assertThat(target.getDomProperty("value")).isEqualTo("H9");
     }
 
     // ---- helpers -------------------------------------------------------------------------
