@@ -48,12 +48,14 @@ export const PRESETS = {
       { name: 'E6', closedHoles: [0, 1, 2, 3, 4], targetNote: 'E6', register: 2 },
     ],
   },
-  // A conical reed bore (a chanter-like cone, 3 % taper), closed at its narrow reed end: a
-  // nearly complete harmonic series, unlike the stopped cylinder.
+  // A conical reed bore (a chanter-like cone, the diameter growing 0.03 mm per mm) closed at its
+  // narrow reed end, in two sections of one taper: a nearly complete harmonic series, unlike the
+  // stopped cylinder. The cut-off tip (50 mm short of the apex) stretches the upper resonances a
+  // little, as tan kL = -k x1 says.
   'conical-chanter': {
     segments: [
-      { lengthMm: 300.0, inputDiameterMm: 4.0, outputDiameterMm: 13.0 },
-      { lengthMm: 250.0, inputDiameterMm: 13.0, outputDiameterMm: 20.5 },
+      { lengthMm: 300.0, inputDiameterMm: 1.5, outputDiameterMm: 10.5 },
+      { lengthMm: 250.0, inputDiameterMm: 10.5, outputDiameterMm: 18.0 },
     ],
     inputEnd: 'closed', outputEnd: 'open-unflanged', holes: [],
     ...AIR, fMinHz: 50.0, fMaxHz: 3000.0, points: 3000, fingerings: [],

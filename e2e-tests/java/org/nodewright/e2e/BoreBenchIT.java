@@ -185,6 +185,53 @@ class BoreBenchIT extends BrowserTestBase {
         assertThat(target.getDomProperty("value")).isEqualTo("H9");
     }
 
+    @Test
+    void theConicalPresetFollowsTheTruncatedConeFormula() throws Exception {
+        String before = analyzed();
+        new Select(driver.findElement(By.id("preset-select"))).selectByValue("conical-chanter");
+        waitForAnalysisAfter(before);
+        assertThat(driver.findElements(By.cssSelector("#segment-rows tr"))).hasSize(2);
+        // Nearly the full harmonic series for a cone closed at its tip: the second resonance near 2 f1.
+        assertThat(cell(2, 6)).isEqualTo("2·f1");
+        fullPageScreenshot("bore-bench-cone");
+
+        // Lossless, p = 0 at the wide end: a cone truncated x1 = 50 mm from its apex and closed there
+        // resonates where tan kL = -k x1 (Fletcher & Rossing, The Physics of Musical Instruments,
+        // 2nd ed., sec. 8.7); L = 550 mm here. The roots are found below by bisection.
+        setChecked(driver.findElement(By.id("auto-analyze")), false);
+        setChecked(driver.findElement(By.id("losses")), false);
+        new Select(driver.findElement(By.id("output-end"))).selectByValue("ideal-open");
+        String lossless = analyzed();
+        driver.findElement(By.id("analyze")).click();
+        waitForAnalysisAfter(lossless);
+        double c = speedOfSound();
+        List<Double> f = resonanceColumn(1);
+        for (int n = 1; n <= 3; n++) {
+            double kl = truncatedConeRoot(n, 50.0 / 550.0);
+            double expected = kl / (2 * Math.PI * 0.550) * c;
+            assertThat(cents(f.get(n - 1), expected)).as("resonance %d", n).isCloseTo(0.0, within(1.0));
+        }
+    }
+
+    /** The n-th root in kL of sin kL + (x1/L)(kL) cos kL = 0, between (n - 1/2)pi and n pi. */
+    private static double truncatedConeRoot(int n, double x1OverL) {
+        double lo = (n - 0.5) * Math.PI;
+        double hi = n * Math.PI;
+        java.util.function.DoubleUnaryOperator g = kl -> Math.sin(kl) + x1OverL * kl * Math.cos(kl);
+        double glo = g.applyAsDouble(lo);
+        for (int i = 0; i < 200; i++) {
+            double mid = 0.5 * (lo + hi);
+            double gm = g.applyAsDouble(mid);
+            if (Math.signum(gm) == Math.signum(glo)) {
+                lo = mid;
+                glo = gm;
+            } else {
+                hi = mid;
+            }
+        }
+        return 0.5 * (lo + hi);
+    }
+
     // ---- helpers -------------------------------------------------------------------------
 
     /** A screenshot of the whole page: the window is stretched to the page's height for it. */
