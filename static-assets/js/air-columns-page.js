@@ -166,7 +166,7 @@ function fillResonanceTable() {
     cells.forEach((c, k) => {
       const td = document.createElement('td');
       td.textContent = String(c);
-      if (k === 7) td.className = Math.abs(align[i].centsFromSeries) <= 10 ? 'aligned' : 'misaligned';
+      if (k === 7) td.className = Math.abs(align[i].centsFromSeries) <= tolerance() ? 'aligned' : 'misaligned';
       if (k === 8) td.className = 'nodes';
       tr.append(td);
     });
@@ -243,6 +243,7 @@ function drawCurrentBore() {
   const current = state.response && !root.classList.contains('stale');
   drawBore($('bore-drawing'), segments, holes, {
     widen: Number($('drawing-widen').value),
+    unit: $('units').value,
     inputEnd: $('input-end').value,
     outputEnd: $('output-end').value,
     nodesMm: current ? state.response.resonances?.[i]?.pressureNodesMm ?? [] : [],
@@ -290,6 +291,7 @@ $('preset-select').addEventListener('change', loadPreset);
 $('units').addEventListener('change', () => {
   const unit = $('units').value;
   editor.setUnit(unit);
+  drawCurrentBore();
   document.querySelectorAll('.unit-label').forEach((el) => { el.textContent = unit === 'inch' ? t('unitInch') : t('unitMm'); });
   if (state.response) { fillResonanceTable(); showProfile(); }
 });
@@ -300,7 +302,10 @@ $('drawing-widen').addEventListener('change', drawCurrentBore);
 $('show-phase').addEventListener('change', () => { if (state.response) showResults(); });
 $('series').addEventListener('change', () => { if (state.response) fillResonanceTable(); });
 $('profile-resonance').addEventListener('change', showProfile);
-$('cents-tolerance').addEventListener('input', () => fingerings.show(state.predictions, tolerance(), a4()));
+$('cents-tolerance').addEventListener('input', () => {
+  fingerings.show(state.predictions, tolerance(), a4());
+  if (state.response) fillResonanceTable();
+});
 $('reference-a4').addEventListener('input', changed);
 window.addEventListener('resize', () => drawCurrentBore());
 

@@ -213,6 +213,28 @@ class BoreBenchIT extends BrowserTestBase {
         }
     }
 
+    @Test
+    void reorderingHolesCarriesTheFingeringsAlong() throws Exception {
+        String before = analyzed();
+        new Select(driver.findElement(By.id("preset-select"))).selectByValue("six-hole-whistle");
+        waitForAnalysisAfter(before);
+        // E5 closes holes 1-5; move hole 5 below hole 6: E5 must now close holes 1-4 and 6.
+        driver.findElement(By.cssSelector("#hole-rows tr:nth-child(5) button.down")).click();
+        assertThat(field("holes[5].positionMm").getDomProperty("value")).isEqualTo("215.5");
+        List<Boolean> closed = driver.findElements(By.cssSelector("#fingering-rows tr:nth-child(2) .fingering-holes input"))
+                .stream().map(WebElement::isSelected).toList();
+        assertThat(closed).containsExactly(true, true, true, true, false, true);
+        // Removing hole 1 drops it from every fingering and renumbers the rest.
+        driver.findElement(By.cssSelector("#hole-rows tr:nth-child(1) button.remove")).click();
+        List<Boolean> after = driver.findElements(By.cssSelector("#fingering-rows tr:nth-child(2) .fingering-holes input"))
+                .stream().map(WebElement::isSelected).toList();
+        assertThat(after).containsExactly(true, true, true, false, true);
+        // Inches on screen: 203 mm shows as 7.99213 in.
+        new Select(driver.findElement(By.id("units"))).selectByValue("inch");
+        assertThat(field("holes[2].positionMm").getDomProperty("value")).isEqualTo("7.99213");
+        fullPageScreenshot("bore-bench-reordered-inch");
+    }
+
     /** The n-th root in kL of sin kL + (x1/L)(kL) cos kL = 0, between (n - 1/2)pi and n pi. */
     private static double truncatedConeRoot(int n, double x1OverL) {
         double lo = (n - 0.5) * Math.PI;
