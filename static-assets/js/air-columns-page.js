@@ -24,7 +24,11 @@ const editor = new BoreEditor({
   onChange: () => changed(),
   onStructure: (holeOrder) => fingerings.holesChanged(editor.holes.length, holeOrder),
 });
-const fingerings = new FingeringTable({ body: $('fingering-rows'), onChange: () => changed() });
+const fingerings = new FingeringTable({
+  body: $('fingering-rows'),
+  onChange: () => changed(),
+  onApply: (closedHoles) => editor.setClosedHoles(closedHoles),
+});
 
 // ---- the request ------------------------------------------------------------------------
 

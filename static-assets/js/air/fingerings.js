@@ -7,15 +7,21 @@ import { cents, nearestNote, targetHz } from './tuning.js';
 import { t } from './text.js';
 
 export class FingeringTable {
-  constructor({ body, onChange }) {
+  constructor({ body, onChange, onApply }) {
     this.body = body;
     this.onChange = onChange;
+    this.onApply = onApply;
     this.rows = [];
     this.holeCount = 0;
     this.predictions = [];
     body.addEventListener('input', (e) => this.#typed(e));
     body.addEventListener('change', (e) => this.#changed(e));
     body.addEventListener('click', (e) => {
+      const apply = e.target.closest('button[data-action=apply]');
+      if (apply) {
+        this.onApply?.(this.rows[Number(apply.dataset.row)].closedHoles);
+        return;
+      }
       const b = e.target.closest('button[data-action=remove]');
       if (!b) return;
       this.rows.splice(Number(b.dataset.row), 1);
@@ -133,10 +139,14 @@ export class FingeringTable {
       td('—', 'predicted'); td('—'); td('—', 'cents');
       td(p === undefined ? '' : t('noPrediction'), 'verdict');
     }
+    const apply = document.createElement('button');
+    apply.type = 'button'; apply.className = 'secondary tiny apply'; apply.dataset.action = 'apply'; apply.dataset.row = String(i);
+    apply.textContent = '⇧'; apply.title = t('applyFingering'); apply.setAttribute('aria-label', t('applyFingering'));
     const rm = document.createElement('button');
     rm.type = 'button'; rm.className = 'secondary tiny remove'; rm.dataset.action = 'remove'; rm.dataset.row = String(i);
     rm.textContent = '✕'; rm.title = t('remove'); rm.setAttribute('aria-label', t('remove'));
-    td(rm);
+    const actions = td(apply, 'row-actions');
+    actions.append(rm);
     return tr;
   }
 
