@@ -235,6 +235,35 @@ class BoreBenchIT extends BrowserTestBase {
         fullPageScreenshot("bore-bench-reordered-inch");
     }
 
+    @Test
+    void aBoreSavedFromTheDesignBarComesBackWithItsFingerings() throws Exception {
+        wait.until(d -> "true".equals(js("return document.getElementById('design-bar').dataset.ready || ''")));
+        String before = analyzed();
+        new Select(driver.findElement(By.id("preset-select"))).selectByValue("stopped-pipe");
+        waitForAnalysisAfter(before);
+        driver.findElement(By.id("add-fingering")).click();
+        type(driver.findElement(By.cssSelector("#fingering-rows tr:nth-child(1) input[data-key='target']")), "C#4");
+        type(driver.findElement(By.id("temperature")), "28");
+        String changed = analyzed();
+        driver.findElement(By.id("analyze")).click();
+        waitForAnalysisAfter(changed);
+        type(driver.findElement(By.cssSelector("#design-bar [data-role='name']")), "Harrowgate stopped pipe, warm room");
+        driver.findElement(By.cssSelector("#design-bar [data-role='save']")).click();
+        wait.until(d -> !String.valueOf(js("return document.getElementById('design-bar').dataset.designId || ''")).isEmpty());
+        String id = String.valueOf(js("return document.getElementById('design-bar').dataset.designId"));
+
+        driver.get(url("/air-columns?design=" + id));
+        wait.until(d -> "true".equals(js("return document.getElementById('design-bar').dataset.ready || ''")));
+        wait.until(d -> "28".equals(driver.findElement(By.id("temperature")).getDomProperty("value")));
+        assertThat(field("segments[0].inputDiameterMm").getDomProperty("value")).isEqualTo("25");
+        assertThat(driver.findElements(By.cssSelector("#hole-rows tr"))).isEmpty();
+        assertThat(driver.findElement(By.cssSelector("#fingering-rows tr:nth-child(1) input[data-key='target']"))
+                .getDomProperty("value")).isEqualTo("C#4");
+        wait.until(d -> !driver.findElements(By.cssSelector("#fingering-rows tr:nth-child(1) td.predicted")).isEmpty()
+                && driver.findElement(By.cssSelector("#fingering-rows tr:nth-child(1) td.predicted")).getText().matches("\\d+\\.\\d"));
+        fullPageScreenshot("bore-bench-saved-design");
+    }
+
     /** The n-th root in kL of sin kL + (x1/L)(kL) cos kL = 0, between (n - 1/2)pi and n pi. */
     private static double truncatedConeRoot(int n, double x1OverL) {
         double lo = (n - 0.5) * Math.PI;
