@@ -167,7 +167,28 @@ class LibraryIT extends BrowserTestBase {
         WebElement differs = driver.findElement(By.cssSelector("#compare-table tr.differs"));
         assertThat(differs.getAttribute("data-path")).isEqualTo("tensionN");
         assertThat(differs.getText()).contains("70").contains("72.5");
+        // Both designs analysed by the string bench's endpoint: twelve partials each, in one chart.
+        wait.until(d -> chartData("compare-chart") != null);
+        @SuppressWarnings("unchecked")
+        java.util.List<java.util.Map<String, Object>> datasets = (java.util.List<java.util.Map<String, Object>>)
+                ((java.util.Map<String, Object>) chartData("compare-chart")).get("datasets");
+        assertThat(datasets).hasSize(2);
+        assertThat((java.util.List<?>) datasets.get(0).get("data")).hasSize(12);
+        assertThat((java.util.List<?>) datasets.get(1).get("data")).hasSize(12);
         screenshot("library-compare");
+    }
+
+    @Test
+    void aRefusedSaveMarksTheBenchFieldAndSavesNothing() throws Exception {
+        openBench(driver, "");
+        type(driver, "[data-role=name]", "Harrowgate Lane negative scale");
+        type(driver, "#lengthMm", "-650");
+        driver.findElement(By.cssSelector("[data-role=save]")).click();
+        WebElement length = driver.findElement(By.id("lengthMm"));
+        wait.until(d -> length.getAttribute("class") != null && length.getAttribute("class").contains("invalid"));
+        assertThat(driver.findElement(By.cssSelector("[data-error-for=lengthMm]")).getText()).isNotBlank();
+        assertThat(driver.findElement(By.id("design-bar")).getAttribute("data-design-id")).isNull();
+        assertThat(get("/api/v1/designs?name=negative")).isEqualTo("[]");
     }
 
     // ---------- helpers ----------

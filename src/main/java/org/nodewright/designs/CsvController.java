@@ -19,14 +19,13 @@ import org.springframework.web.bind.annotation.GetMapping;
 import org.springframework.web.bind.annotation.PathVariable;
 import org.springframework.web.bind.annotation.PostMapping;
 import org.springframework.web.bind.annotation.RestController;
-import org.springframework.web.util.ContentCachingResponseWrapper;
 import tools.jackson.databind.JsonNode;
 import tools.jackson.databind.json.JsonMapper;
 
 /**
  * CSV of any partial, resonance, string-set or fret table. Each endpoint takes what the analysis
  * endpoint takes (or a saved design's id), runs that very endpoint inside this request (a servlet
- * forward, so validation and problem documents are the bench's own) and writes its table as CSV:
+ * include into a captured response, so validation and problem documents are the bench's own) and writes its table as CSV:
  * one row per partial, resonance, string or fret; array cells are joined with ';'.
  */
 @RestController
@@ -61,7 +60,7 @@ class CsvController {
     @GetMapping("/api/v1/frets.csv")
     void frets(HttpServletRequest request, HttpServletResponse response) throws Exception {
         String query = request.getQueryString() == null ? "" : "?" + request.getQueryString();
-        forwardAndWrite(request, new BodyRequest(request, "GET", new byte[0]), response, "/api/v1/frets" + query,
+        runAndWrite(request, new BodyRequest(request, "GET", new byte[0]), response, "/api/v1/frets" + query,
                 "", "frets.csv");
     }
 
@@ -79,18 +78,19 @@ class CsvController {
             case AIR_COLUMN -> "resonances";
             case STRING_SET -> "strings";
         };
-        forwardAndWrite(request, new BodyRequest(request, "POST", body), response, kind.analyzePath(), rows, filename);
+        runAndWrite(request, new BodyRequest(request, "POST", body), response, kind.analyzePath(), rows, filename);
     }
 
-    private void forwardAndWrite(HttpServletRequest original, HttpServletRequest inner, HttpServletResponse response,
+    private void runAndWrite(HttpServletRequest original, HttpServletRequest inner, HttpServletResponse response,
             String path, String rowsField, String filename) throws ServletException, IOException {
-        ContentCachingResponseWrapper captured = new ContentCachingResponseWrapper(response);
-        original.getRequestDispatcher(path).forward(inner, captured);
-        byte[] json = captured.getContentAsByteArray();
+        CapturedResponse captured = new CapturedResponse(response);
+        original.getRequestDispatcher(path).include(inner, captured);
+        byte[] json = captured.body();
         if (captured.getStatus() != 200) {
             // The bench's own answer (a 400 problem document naming the field, a 404...) goes back as is.
             response.setStatus(captured.getStatus());
-            response.setContentType(captured.getContentType());
+            response.setContentType(captured.getContentType() == null ? "application/problem+json"
+                    : captured.getContentType());
             response.getOutputStream().write(json);
             return;
         }
