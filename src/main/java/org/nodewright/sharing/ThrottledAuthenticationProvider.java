@@ -37,14 +37,16 @@ final class ThrottledAuthenticationProvider implements AuthenticationProvider {
 
     @Override
     public Authentication authenticate(Authentication authentication) throws AuthenticationException {
-        String userKey = "user:" + authentication.getName().toLowerCase(Locale.ROOT);
+        String name = authentication.getName() == null ? "" : authentication.getName().toLowerCase(Locale.ROOT);
+        // Keys stay short whatever a client sends (names are at most 40 characters anyway).
+        String userKey = "user:" + (name.length() > 64 ? name.substring(0, 64) : name);
         String addressKey = "address:" + remoteAddress(authentication);
         Optional<Duration> locked = throttle.lockedFor(userKey).or(() -> throttle.lockedFor(addressKey));
         if (locked.isPresent()) {
             throw new SignInLockedException(locked.get());
         }
         UsernamePasswordAuthenticationToken normalised = UsernamePasswordAuthenticationToken.unauthenticated(
-                authentication.getName().toLowerCase(Locale.ROOT), authentication.getCredentials());
+                name, authentication.getCredentials());
         normalised.setDetails(authentication.getDetails());
         try {
             Authentication result = delegate.authenticate(normalised);
