@@ -3,6 +3,8 @@ package org.nodewright.sharing;
 import java.time.Duration;
 import java.util.Locale;
 import java.util.Optional;
+import org.slf4j.Logger;
+import org.slf4j.LoggerFactory;
 import org.springframework.security.authentication.AuthenticationProvider;
 import org.springframework.security.authentication.BadCredentialsException;
 import org.springframework.security.authentication.DisabledException;
@@ -21,6 +23,8 @@ import org.springframework.security.web.authentication.WebAuthenticationDetails;
  * refusing at once while the username or the remote address is locked out.
  */
 final class ThrottledAuthenticationProvider implements AuthenticationProvider {
+
+    private static final Logger log = LoggerFactory.getLogger(ThrottledAuthenticationProvider.class);
 
     private final DaoAuthenticationProvider delegate;
     private final LoginThrottle throttle;
@@ -55,6 +59,9 @@ final class ThrottledAuthenticationProvider implements AuthenticationProvider {
         } catch (BadCredentialsException | DisabledException e) {
             throttle.failed(userKey);
             throttle.failed(addressKey);
+            if (throttle.lockedFor(userKey).isPresent() || throttle.lockedFor(addressKey).isPresent()) {
+                log.warn("Too many failed sign-ins: {} and {} locked out for a while", userKey, addressKey);
+            }
             // One answer for a wrong password, an unknown name and a disabled account.
             throw new BadCredentialsException("Wrong username or password, or the account is disabled");
         }
