@@ -4,9 +4,6 @@ import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.Comparator;
 import java.util.List;
-import org.hipparchus.transform.DftNormalization;
-import org.hipparchus.transform.FastFourierTransformer;
-import org.hipparchus.transform.TransformType;
 
 /**
  * Finds the spectral peaks of a recording: from the onset, a Blackman–Harris window, zero-padding
@@ -64,24 +61,17 @@ public final class PeakFinder {
         size *= PADDING;
         int rise = (int) Math.min(n / 8, Math.round(RISE_SECONDS * recording.sampleRateHz()));
         double[] w = BlackmanHarrisWindow.decaying(n, rise);
-        double[][] data = new double[2][size];
         double wsum = 0;
+        double[] windowed = new double[n];
         for (int i = 0; i < n; i++) {
-            data[0][i] = x[start + i] * w[i];
+            windowed[i] = x[start + i] * w[i];
             wsum += w[i];
         }
-        FastFourierTransformer.transformInPlace(data, DftNormalization.STANDARD, TransformType.FORWARD);
-        int half = size / 2;
-        double[] db = new double[half + 1];
+        double[] power = RealSpectrum.power(windowed, size);
         // Scale so that a full-scale steady sine reads 0 dB: |X| = A * sum(w) / 2.
         double scale = 2.0 / wsum;
-        for (int k = 0; k <= half; k++) {
-            double re = data[0][k];
-            double im = data[1][k];
-            double mag = Math.sqrt(re * re + im * im) * scale;
-            db[k] = 20 * Math.log10(mag + 1e-300);
-        }
-        return pickPeaks(db, recording.sampleRateHz() / size, (int) Math.ceil(GUARD_BINS * size / n), maxPeaks);
+        return pickPeaks(power, scale * scale, recording.sampleRateHz() / size, (int) Math.ceil(GUARD_BINS * size / n),
+                maxPeaks);
     }
 
     /**
@@ -132,22 +122,28 @@ public final class PeakFinder {
         return 0;
     }
 
-    private static List<SpectralPeak> pickPeaks(double[] db, double binHz, int guard, int maxPeaks) {
-        double floor = median(db);
-        double max = Double.NEGATIVE_INFINITY;
-        for (int k = guard; k < db.length - 1; k++) {
-            max = Math.max(max, db[k]);
+    /**
+     * Local maxima of the power spectrum above the thresholds; levels in dB are taken only for the
+     * three bins around each candidate (a logarithm per bin of a million-point spectrum would cost
+     * more than the rest of the picking).
+     */
+    private static List<SpectralPeak> pickPeaks(double[] power, double scale2, double binHz, int guard, int maxPeaks) {
+        double floor = median(power);
+        double max = 0;
+        for (int k = guard; k < power.length - 1; k++) {
+            max = Math.max(max, power[k]);
         }
-        double threshold = Math.max(floor + FLOOR_MARGIN_DB, max - DYNAMIC_RANGE_DB);
+        double threshold = Math.max(floor * Math.pow(10, FLOOR_MARGIN_DB / 10), max * Math.pow(10, -DYNAMIC_RANGE_DB / 10));
         List<SpectralPeak> peaks = new ArrayList<>();
         // Skip the DC lobe: bins closer to 0 Hz than one main-lobe half-width.
-        for (int k = Math.max(guard, 1); k < db.length - 1; k++) {
-            double b = db[k];
-            if (b < threshold || b < db[k - 1] || b <= db[k + 1] || !highestWithin(db, k, guard)) {
+        for (int k = Math.max(guard, 1); k < power.length - 1; k++) {
+            double pb = power[k];
+            if (pb < threshold || pb < power[k - 1] || pb <= power[k + 1] || !highestWithin(power, k, guard)) {
                 continue;
             }
-            double a = db[k - 1];
-            double c = db[k + 1];
+            double a = db(power[k - 1], scale2);
+            double b = db(pb, scale2);
+            double c = db(power[k + 1], scale2);
             // Quadratic through (−1, a), (0, b), (1, c): vertex offset p and height (Smith & Serra 1987).
             double p = 0.5 * (a - c) / (a - 2 * b + c);
             double level = b - 0.25 * (a - c) * p;
@@ -159,6 +155,10 @@ public final class PeakFinder {
         }
         peaks.sort(Comparator.comparingDouble(SpectralPeak::frequencyHz));
         return List.copyOf(peaks);
+    }
+
+    private static double db(double power, double scale2) {
+        return 10 * Math.log10(power * scale2 + 1e-300);
     }
 
     /** True when bin k is the highest within ±guard bins: side lobes and ripples do not count. */
