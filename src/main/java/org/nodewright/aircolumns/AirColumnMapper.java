@@ -1,0 +1,90 @@
+package org.nodewright.aircolumns;
+
+import java.util.ArrayList;
+import java.util.HashSet;
+import java.util.List;
+import org.nodewright.physics.aircolumn.AirColumn;
+import org.nodewright.physics.aircolumn.AirColumnAnalysis;
+import org.nodewright.physics.aircolumn.AirProperties;
+import org.nodewright.physics.aircolumn.BoreSegment;
+import org.nodewright.physics.aircolumn.Fingering;
+import org.nodewright.physics.aircolumn.NoteName;
+import org.nodewright.physics.aircolumn.StandingWaveProfile;
+import org.nodewright.physics.aircolumn.ToneHole;
+
+/** Turns a validated request into core values (millimetres to metres) and the analysis into JSON. */
+final class AirColumnMapper {
+
+    private static final double MM = 1e-3;
+
+    private AirColumnMapper() {
+    }
+
+    static AirColumn column(AirColumnRequest r) {
+        List<BoreSegment> segs = new ArrayList<>();
+        for (AirColumnRequest.Segment s : r.segments()) {
+            segs.add(new BoreSegment(s.lengthMm() * MM, s.inputDiameterMm() * MM / 2, s.outputDiameterMm() * MM / 2));
+        }
+        List<ToneHole> holes = new ArrayList<>();
+        for (AirColumnRequest.Hole h : r.holesOrEmpty()) {
+            holes.add(new ToneHole(h.positionMm() * MM, h.diameterMm() * MM / 2, h.chimneyMm() * MM,
+                    h.open() == null || h.open()));
+        }
+        AirProperties air = AirProperties.at(r.temperatureOrDefault(), r.humidityOrDefault());
+        return new AirColumn(segs, holes, r.inputEnd().core(), r.outputEnd().core(), air, r.lossesOrDefault());
+    }
+
+    static List<Fingering> fingerings(AirColumnRequest r) {
+        List<Fingering> out = new ArrayList<>();
+        for (AirColumnRequest.FingeringSpec f : r.fingeringsOrEmpty()) {
+            double target = f.targetHz() != null ? f.targetHz()
+                    : NoteName.frequencyOf(f.targetNote(), r.referenceA4OrDefault());
+            out.add(new Fingering(f.name(), new HashSet<>(f.closedHoles()), target,
+                    f.register() == null ? 1 : f.register()));
+        }
+        return out;
+    }
+
+    static AirColumnResponse response(AirColumnRequest req, AirColumnAnalysis a) {
+        AirProperties air = a.air();
+        List<AirColumnResponse.ResonanceItem> items = new ArrayList<>();
+        List<AirColumnResponse.Profile> profiles = new ArrayList<>();
+        for (AirColumnAnalysis.ResonanceResult rr : a.resonances()) {
+            StandingWaveProfile p = rr.profile();
+            items.add(new AirColumnResponse.ResonanceItem(rr.resonance().n(), rr.resonance().frequencyHz(),
+                    finiteOrNull(rr.resonance().q()), rr.resonance().magnitude(), note(rr.note()), rr.ratioToFirst(),
+                    rr.seriesMember(), rr.centsFromSeries(), mm(p.pressureNodes()), mm(p.pressureAntinodes())));
+            double[] x = new double[p.positions().length];
+            for (int i = 0; i < x.length; i++) {
+                x[i] = p.positions()[i] / MM;
+            }
+            profiles.add(new AirColumnResponse.Profile(rr.resonance().n(), rr.resonance().frequencyHz(), x,
+                    p.pressure(), p.flow()));
+        }
+        List<AirColumnResponse.FingeringItem> fs = new ArrayList<>();
+        List<AirColumnRequest.FingeringSpec> specs = req.fingeringsOrEmpty();
+        for (int i = 0; i < a.fingerings().size(); i++) {
+            AirColumnAnalysis.FingeringResult f = a.fingerings().get(i);
+            fs.add(new AirColumnResponse.FingeringItem(i, f.fingering().name(), specs.get(i).closedHoles(),
+                    f.fingering().targetHz(), f.fingering().register(), finiteOrNull(f.predictedHz()),
+                    finiteOrNull(f.centsFromTarget()), f.note() == null ? null : note(f.note()), finiteOrNull(f.q())));
+        }
+        return new AirColumnResponse(air.speedOfSound(),
+                new AirColumnResponse.Air(air.temperatureC(), air.relativeHumidityPct(), air.density(),
+                        air.viscosity(), air.thermalConductivity(), air.gamma(), air.specificHeatCp()),
+                items, new AirColumnResponse.Impedance(a.frequencyHz(), a.magnitude(), a.phaseRad()),
+                a.series().name().toLowerCase(java.util.Locale.ROOT), profiles, fs, a.warnings());
+    }
+
+    private static AirColumnResponse.Note note(NoteName n) {
+        return new AirColumnResponse.Note(n.name(), n.centsOff());
+    }
+
+    private static List<Double> mm(List<Double> metres) {
+        return metres.stream().map(v -> v / MM).toList();
+    }
+
+    private static Double finiteOrNull(double v) {
+        return Double.isFinite(v) ? v : null;
+    }
+}

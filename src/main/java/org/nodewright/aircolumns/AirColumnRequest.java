@@ -1,0 +1,109 @@
+package org.nodewright.aircolumns;
+
+import jakarta.validation.Valid;
+import jakarta.validation.constraints.DecimalMax;
+import jakarta.validation.constraints.DecimalMin;
+import jakarta.validation.constraints.Max;
+import jakarta.validation.constraints.Min;
+import jakarta.validation.constraints.NotNull;
+import jakarta.validation.constraints.Positive;
+import jakarta.validation.constraints.PositiveOrZero;
+import jakarta.validation.constraints.Size;
+import java.util.List;
+import org.nodewright.web.Finite;
+
+/**
+ * The body of {@code POST /api/v1/air-columns/analyze}, also the parameters of a saved air-column
+ * design. Lengths in millimetres, frequencies in hertz. Validating this record alone (Bean
+ * Validation) finds every problem, cross-field rules included ({@link ValidAirColumn}), each
+ * reported with its dotted path such as {@code segments[2].lengthMm}.
+ *
+ * <p>Optional fields and their defaults: {@code holes} none, {@code temperatureC} 20,
+ * {@code relativeHumidityPct} 0, {@code losses} true, {@code points} 2000, {@code referenceA4Hz}
+ * 440, {@code profileSamples} 201, {@code fingerings} none.
+ */
+@ValidAirColumn
+public record AirColumnRequest(
+        @NotNull @Size(min = 1, max = MAX_SEGMENTS) List<@NotNull @Valid Segment> segments,
+        @NotNull InputEndWord inputEnd,
+        @NotNull OutputEndWord outputEnd,
+        @Size(max = MAX_HOLES) List<@NotNull @Valid Hole> holes,
+        @Finite @DecimalMin("-50") @DecimalMax("60") Double temperatureC,
+        @Finite @DecimalMin("0") @DecimalMax("100") Double relativeHumidityPct,
+        Boolean losses,
+        @NotNull @Finite @Positive @DecimalMax("20000") Double fMinHz,
+        @NotNull @Finite @Positive @DecimalMax("20000") Double fMaxHz,
+        @Min(2) @Max(MAX_POINTS) Integer points,
+        @Finite @DecimalMin("200") @DecimalMax("1000") Double referenceA4Hz,
+        @Min(2) @Max(2001) Integer profileSamples,
+        @Size(max = MAX_FINGERINGS) List<@NotNull @Valid FingeringSpec> fingerings) {
+
+    public static final int MAX_SEGMENTS = 1000;
+    public static final int MAX_HOLES = 64;
+    public static final int MAX_POINTS = 20000;
+    public static final int MAX_FINGERINGS = 32;
+    /** Longest bore accepted, millimetres. */
+    public static final double MAX_TOTAL_LENGTH_MM = 20_000;
+
+    /**
+     * One bore segment: a cylinder when the diameters are equal, else a conical frustum.
+     */
+    public record Segment(
+            @NotNull @Finite @Positive @DecimalMax("20000") Double lengthMm,
+            @NotNull @Finite @Positive @DecimalMax("2000") Double inputDiameterMm,
+            @NotNull @Finite @Positive @DecimalMax("2000") Double outputDiameterMm) {
+    }
+
+    /** One side hole, positioned by its centre from the input end. {@code open} defaults to true. */
+    public record Hole(
+            @NotNull @Finite @Positive @DecimalMax("20000") Double positionMm,
+            @NotNull @Finite @Positive @DecimalMax("2000") Double diameterMm,
+            @NotNull @Finite @PositiveOrZero @DecimalMax("2000") Double chimneyMm,
+            Boolean open) {
+    }
+
+    /**
+     * A fingering: the holes it closes (indices into {@code holes}; all others open), its target
+     * as {@code targetHz} or {@code targetNote} ("D5", "F#4", "Bb3"), and the register wanted
+     * (1 = the lowest resonance in fMinHz..fMaxHz; default 1).
+     */
+    public record FingeringSpec(
+            @Size(max = 80) String name,
+            @NotNull @Size(max = MAX_HOLES) List<@NotNull @Min(0) Integer> closedHoles,
+            @Size(max = 8) String targetNote,
+            @Finite @Positive @DecimalMax("20000") Double targetHz,
+            @Min(1) @Max(16) Integer register) {
+    }
+
+    double temperatureOrDefault() {
+        return temperatureC == null ? 20.0 : temperatureC;
+    }
+
+    double humidityOrDefault() {
+        return relativeHumidityPct == null ? 0.0 : relativeHumidityPct;
+    }
+
+    boolean lossesOrDefault() {
+        return losses == null || losses;
+    }
+
+    int pointsOrDefault() {
+        return points == null ? 2000 : points;
+    }
+
+    double referenceA4OrDefault() {
+        return referenceA4Hz == null ? 440.0 : referenceA4Hz;
+    }
+
+    int profileSamplesOrDefault() {
+        return profileSamples == null ? 201 : profileSamples;
+    }
+
+    List<Hole> holesOrEmpty() {
+        return holes == null ? List.of() : holes;
+    }
+
+    List<FingeringSpec> fingeringsOrEmpty() {
+        return fingerings == null ? List.of() : fingerings;
+    }
+}

@@ -1,0 +1,51 @@
+package org.nodewright.aircolumns;
+
+import java.util.List;
+
+/**
+ * The answer of {@code POST /api/v1/air-columns/analyze}. Contract fields: speedOfSoundMps,
+ * resonances[n, frequencyHz, q, pressureNodesMm, pressureAntinodesMm], impedance. The others are
+ * additions: air properties, notes, register alignment, profiles, fingerings and warnings.
+ */
+public record AirColumnResponse(
+        double speedOfSoundMps,
+        Air air,
+        List<ResonanceItem> resonances,
+        Impedance impedance,
+        String series,
+        List<Profile> profiles,
+        List<FingeringItem> fingerings,
+        List<String> warnings) {
+
+    /** The air the bore was analysed in (SI). */
+    public record Air(double temperatureC, double relativeHumidityPct, double densityKgPerM3, double viscosityPaS,
+            double thermalConductivityWPerMK, double ratioOfSpecificHeats, double specificHeatJPerKgK) {
+    }
+
+    /** Nearest equal-tempered note. */
+    public record Note(String name, double centsOff) {
+    }
+
+    /**
+     * One resonance. {@code q} is null when the peak has no finite bandwidth (lossless and
+     * non-radiating). {@code ratioToFirst}, {@code seriesMember} and {@code centsFromSeries} give
+     * the register alignment against the series named in the response's {@code series}.
+     */
+    public record ResonanceItem(int n, double frequencyHz, Double q, double magnitude, Note note,
+            double ratioToFirst, int seriesMember, double centsFromSeries, List<Double> pressureNodesMm,
+            List<Double> pressureAntinodesMm) {
+    }
+
+    /** Input impedance / (rho c / S_input): magnitude and phase on the requested grid. */
+    public record Impedance(double[] frequencyHz, double[] magnitude, double[] phaseRad) {
+    }
+
+    /** Signed standing-wave shapes (largest magnitude 1) of pressure and volume flow at resonance n. */
+    public record Profile(int n, double frequencyHz, double[] xMm, double[] pressure, double[] flow) {
+    }
+
+    /** A fingering's predicted pitch (null fields when its register was not found in range). */
+    public record FingeringItem(int index, String name, List<Integer> closedHoles, double targetHz, int register,
+            Double predictedHz, Double centsFromTarget, Note note, Double q) {
+    }
+}

@@ -1,0 +1,30 @@
+package org.nodewright.physics.aircolumn;
+
+import java.util.List;
+
+/**
+ * Everything computed for one bore: the impedance curve (divided by rho c / S_input), the
+ * refined resonances with their profiles, the register alignment and the fingering predictions.
+ */
+public record AirColumnAnalysis(AirProperties air, double[] frequencyHz, double[] magnitude, double[] phaseRad,
+        List<ResonanceResult> resonances, HarmonicSeries series, List<FingeringResult> fingerings,
+        List<String> warnings) {
+
+    /**
+     * One resonance with its nearest note, standing wave and register alignment.
+     *
+     * @param ratioToFirst    f_n / f_1
+     * @param seriesMember    m in the ideal series (n, or 2n - 1 for the odd series)
+     * @param centsFromSeries 1200 log2(f_n / (m f_1 / m_1)), m_1 the first member (1)
+     */
+    public record ResonanceResult(Resonance resonance, NoteName note, StandingWaveProfile profile,
+            double ratioToFirst, int seriesMember, double centsFromSeries) {
+    }
+
+    /**
+     * The predicted sounding pitch of a fingering (NaN when the wanted register was not found).
+     */
+    public record FingeringResult(Fingering fingering, double predictedHz, double centsFromTarget, NoteName note,
+            double q) {
+    }
+}
