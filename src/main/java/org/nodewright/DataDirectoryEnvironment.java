@@ -4,28 +4,45 @@ import java.io.IOException;
 import java.io.UncheckedIOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.Map;
 import org.springframework.boot.EnvironmentPostProcessor;
 import org.springframework.boot.SpringApplication;
 import org.springframework.core.env.ConfigurableEnvironment;
-import org.springframework.core.env.MapPropertySource;
+import org.springframework.core.env.PropertySource;
 
 /**
- * Resolves {@code app.data-dir} (default {@code ./data}) to an absolute, existing folder and
- * publishes it as {@code app.data-dir.absolute}, since H2 refuses a bare relative file path.
+ * Publishes {@code app.data-dir.absolute}: {@code app.data-dir} (default {@code ./data}) as an
+ * absolute, existing folder, since H2 refuses a bare relative file path. The value is resolved
+ * when it is read, not when this post-processor runs, so property sources added later (test
+ * {@code @DynamicPropertySource}, for one) are honoured.
  */
 public class DataDirectoryEnvironment implements EnvironmentPostProcessor {
 
+    static final String PROPERTY = "app.data-dir.absolute";
+
     @Override
     public void postProcessEnvironment(ConfigurableEnvironment environment, SpringApplication application) {
-        String configured = environment.getProperty("app.data-dir", "./data");
-        Path dir = Path.of(configured).toAbsolutePath().normalize();
-        try {
-            Files.createDirectories(dir);
-        } catch (IOException e) {
-            throw new UncheckedIOException("Cannot create the data directory " + dir, e);
+        environment.getPropertySources().addLast(new AbsoluteDataDirectory(environment));
+    }
+
+    private static final class AbsoluteDataDirectory extends PropertySource<ConfigurableEnvironment> {
+
+        AbsoluteDataDirectory(ConfigurableEnvironment environment) {
+            super("nodewrightDataDirectory", environment);
         }
-        environment.getPropertySources().addLast(new MapPropertySource("nodewrightDataDirectory",
-                Map.of("app.data-dir.absolute", dir.toString().replace('\\', '/'))));
+
+        @Override
+        public Object getProperty(String name) {
+            if (!PROPERTY.equals(name)) {
+                return null;
+            }
+            String configured = getSource().getProperty("app.data-dir", "./data");
+            Path dir = Path.of(configured).toAbsolutePath().normalize();
+            try {
+                Files.createDirectories(dir);
+            } catch (IOException e) {
+                throw new UncheckedIOException("Cannot create the data directory " + dir, e);
+            }
+            return dir.toString().replace('\\', '/');
+        }
     }
 }

@@ -1,0 +1,35 @@
+package org.nodewright.designs;
+
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import tools.jackson.databind.JsonNode;
+
+/** What a save writes: everything of a design that its author edits. Tags are trimmed and de-duplicated. */
+record DesignContent(String name, DesignKind kind, JsonNode parameters, String notes, List<String> tags) {
+
+    DesignContent {
+        name = name.strip();
+        notes = notes == null ? "" : notes;
+        tags = normalise(tags);
+    }
+
+    static String tagKey(String tag) {
+        return tag.strip().toLowerCase(Locale.ROOT);
+    }
+
+    private static List<String> normalise(List<String> tags) {
+        if (tags == null) {
+            return List.of();
+        }
+        Map<String, String> byKey = new LinkedHashMap<>();
+        for (String t : tags) {
+            if (t != null && !t.isBlank()) {
+                byKey.putIfAbsent(tagKey(t), t.strip());
+            }
+        }
+        return List.copyOf(new ArrayList<>(byKey.values()));
+    }
+}

@@ -1,0 +1,39 @@
+package org.nodewright.inverse;
+
+import jakarta.validation.Valid;
+import jakarta.validation.constraints.DecimalMax;
+import jakarta.validation.constraints.DecimalMin;
+import jakarta.validation.constraints.NotEmpty;
+import jakarta.validation.constraints.NotNull;
+import jakarta.validation.constraints.Positive;
+import jakarta.validation.constraints.Size;
+import java.util.List;
+import org.nodewright.web.Finite;
+
+/**
+ * Gauges for a set (or one string): each string's pitch (note name or Hz) and target tension, or a
+ * set-wide {@code tensionProfile} from the first string's target to the last's, interpolated
+ * linearly for strings without their own.
+ */
+record GaugeRequest(
+        @NotNull @Finite @Positive @DecimalMax("5000") Double lengthMm,
+        @Finite @DecimalMin("300") @DecimalMax("600") Double referenceA4Hz,
+        @NotEmpty @Size(max = 24) List<@Valid @NotNull StringTarget> strings,
+        @Valid TensionProfile tensionProfile,
+        @Size(min = 1, max = 500) List<@NotNull @Finite @Positive @DecimalMax("20") Double> availableGaugesMm) {
+
+    record StringTarget(
+            @Size(max = 8) String note,
+            @Finite @Positive @DecimalMax("20000") Double targetHz,
+            @Finite @Positive @DecimalMax("2000") Double targetTensionN,
+            @NotNull @Size(max = 40) String material,
+            @Size(max = 40) String wrapMaterial,
+            @Finite @DecimalMin("0.2") @DecimalMax("0.8") Double coreRatio,
+            @Finite @Positive @DecimalMax("5000") Double lengthMm) {
+    }
+
+    record TensionProfile(
+            @NotNull @Finite @Positive @DecimalMax("2000") Double firstN,
+            @NotNull @Finite @Positive @DecimalMax("2000") Double lastN) {
+    }
+}

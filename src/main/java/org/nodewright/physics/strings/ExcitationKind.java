@@ -1,0 +1,9 @@
+package org.nodewright.physics.strings;
+
+/** How the string is set in motion. */
+public enum ExcitationKind {
+    /** Triangular pluck (finger, plectrum). */
+    PLUCK,
+    /** Point impulse (hammer, tangent). */
+    STRIKE
+}

@@ -1,0 +1,19 @@
+package org.nodewright.physics.strings;
+
+/**
+ * One string of a set.
+ *
+ * @param lengthM       its own vibrating length (multi-scale necks give each string its own)
+ * @param targetHz      wanted sounding fundamental
+ * @param construction  how it is made
+ */
+public record SetString(double lengthM, double targetHz, StringConstruction construction) {
+
+    public SetString {
+        Checks.positive("lengthM", lengthM);
+        Checks.positive("targetHz", targetHz);
+        if (construction == null) {
+            throw new IllegalArgumentException("construction is required");
+        }
+    }
+}

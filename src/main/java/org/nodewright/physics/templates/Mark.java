@@ -1,0 +1,71 @@
+package org.nodewright.physics.templates;
+
+import java.util.Map;
+
+/**
+ * One thing drawn on a template sheet. Coordinates are millimetres on the sheet, x to the right,
+ * y downwards (the SVG convention); renderers map them to their own page units at 1:1.
+ */
+public sealed interface Mark permits Mark.Stroke, Mark.Ring, Mark.Caption {
+
+    /** What a mark is for; renderers may style by role and tests find marks by it. */
+    enum Role { FRET, NUT, SADDLE, POSITION, OUTLINE, RULER, RULER_TICK, HOLE, CENTRE, DIMENSION, TEXT, ALIGNMENT }
+
+    Role role();
+
+    /** Extra attributes written as {@code data-*} in SVG (e.g. {@code fret -> 3}); never null. */
+    Map<String, String> data();
+
+    /** A straight line from (x1, y1) to (x2, y2), stroke width in mm. */
+    record Stroke(double x1, double y1, double x2, double y2, double widthMm, Role role, Map<String, String> data)
+            implements Mark {
+        public Stroke {
+            Checks.finite("x1", x1);
+            Checks.finite("y1", y1);
+            Checks.finite("x2", x2);
+            Checks.finite("y2", y2);
+            Checks.positive("widthMm", widthMm);
+            data = Map.copyOf(data);
+        }
+
+        public static Stroke of(double x1, double y1, double x2, double y2, double widthMm, Role role) {
+            return new Stroke(x1, y1, x2, y2, widthMm, role, Map.of());
+        }
+
+        public double length() {
+            return Math.hypot(x2 - x1, y2 - y1);
+        }
+    }
+
+    /** A circle of the given radius centred on (cx, cy), drawn as an outline. */
+    record Ring(double cx, double cy, double radiusMm, double widthMm, Role role, Map<String, String> data)
+            implements Mark {
+        public Ring {
+            Checks.finite("cx", cx);
+            Checks.finite("cy", cy);
+            Checks.positive("radiusMm", radiusMm);
+            Checks.positive("widthMm", widthMm);
+            data = Map.copyOf(data);
+        }
+    }
+
+    /** A line of text whose baseline starts (or centres, or ends) at (x, y); height in mm. */
+    record Caption(double x, double y, String text, double sizeMm, Anchor anchor, Role role, Map<String, String> data)
+            implements Mark {
+        public enum Anchor { START, MIDDLE, END }
+
+        public Caption {
+            Checks.finite("x", x);
+            Checks.finite("y", y);
+            Checks.positive("sizeMm", sizeMm);
+            if (text == null || text.isBlank()) {
+                throw new IllegalArgumentException("caption text must not be blank");
+            }
+            data = Map.copyOf(data);
+        }
+
+        public static Caption of(double x, double y, String text, double sizeMm, Anchor anchor) {
+            return new Caption(x, y, text, sizeMm, anchor, Role.TEXT, Map.of());
+        }
+    }
+}

@@ -1,0 +1,36 @@
+package org.nodewright.strings;
+
+import jakarta.validation.constraints.DecimalMax;
+import jakarta.validation.constraints.DecimalMin;
+import jakarta.validation.constraints.Max;
+import jakarta.validation.constraints.Min;
+import java.util.List;
+import org.nodewright.physics.strings.Frets;
+import org.nodewright.web.Finite;
+import org.springframework.http.MediaType;
+import org.springframework.web.bind.annotation.GetMapping;
+import org.springframework.web.bind.annotation.RequestParam;
+import org.springframework.web.bind.annotation.RestController;
+
+/** Fret positions for equal divisions of the octave. */
+@RestController
+class FretsController {
+
+    static final int MAX_COUNT = 200;
+    static final int MAX_DIVISIONS = 200;
+
+    @GetMapping(path = "/api/v1/frets", produces = MediaType.APPLICATION_JSON_VALUE)
+    List<FretJson> frets(
+            @RequestParam @Finite @DecimalMin(value = "1", message = "must be at least 1 mm")
+            @DecimalMax(value = "100000", message = "must be at most 100000 mm") double scaleLengthMm,
+            @RequestParam(defaultValue = "24") @Min(1) @Max(MAX_COUNT) int count,
+            @RequestParam(defaultValue = "12") @Min(1) @Max(MAX_DIVISIONS) int divisionsPerOctave) {
+        return Frets.equalDivisions(scaleLengthMm * 1e-3, count, divisionsPerOctave).stream()
+                .map(f -> new FretJson(f.fret(), f.fromNutM() * 1e3, f.fromPreviousM() * 1e3))
+                .toList();
+    }
+
+    /** One fret: distances in mm from the nut and from the previous fret. */
+    record FretJson(int fret, double fromNutMm, double fromPreviousMm) {
+    }
+}

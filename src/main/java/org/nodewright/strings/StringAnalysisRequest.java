@@ -1,0 +1,167 @@
+package org.nodewright.strings;
+
+import jakarta.validation.Valid;
+import jakarta.validation.constraints.DecimalMax;
+import jakarta.validation.constraints.DecimalMin;
+import jakarta.validation.constraints.Max;
+import jakarta.validation.constraints.Min;
+import jakarta.validation.constraints.NotNull;
+import jakarta.validation.constraints.PositiveOrZero;
+import jakarta.validation.constraints.Size;
+import java.util.ArrayList;
+import java.util.List;
+import org.nodewright.physics.strings.Materials;
+import org.nodewright.physics.strings.ModeSolver;
+import org.nodewright.web.Finite;
+import org.nodewright.web.FieldProblem;
+
+/**
+ * Body of {@code POST /api/v1/strings/analyze}. Lengths in mm, tension in N, SI otherwise.
+ * Defaults when omitted: endCondition "pinned", stiffness false, modeCount 12, referenceA4Hz 440,
+ * shapeSamples 201. Validating the record alone (Bean Validation) finds every problem, cross-field
+ * rules included ({@link #crossFieldProblems()}).
+ */
+@CrossFieldChecked
+public record StringAnalysisRequest(
+        @NotNull @Finite @DecimalMin(value = "1", message = "must be at least 1 mm")
+        @DecimalMax(value = "100000", message = "must be at most 100000 mm") Double lengthMm,
+        @Finite @DecimalMin(value = "0.001", message = "must be at least 0.001 N")
+        @DecimalMax(value = "100000", message = "must be at most 100000 N") Double tensionN,
+        @Finite @DecimalMin(value = "0.01", message = "must be at least 0.01 Hz")
+        @DecimalMax(value = "100000", message = "must be at most 100000 Hz") Double targetHz,
+        @Finite @DecimalMin(value = "1e-9", message = "must be at least 1e-9 kg/m")
+        @DecimalMax(value = "100", message = "must be at most 100 kg/m") Double linearDensityKgPerM,
+        @Size(max = 64) String material,
+        @Finite @DecimalMin(value = "0.001", message = "must be at least 0.001 mm")
+        @DecimalMax(value = "100", message = "must be at most 100 mm") Double diameterMm,
+        @Size(max = 64) String wrapMaterial,
+        @Finite @DecimalMin(value = "0.001", message = "must be at least 0.001 mm")
+        @DecimalMax(value = "100", message = "must be at most 100 mm") Double wrapDiameterMm,
+        @Finite @DecimalMin(value = "1e3", message = "must be at least 1e3 Pa")
+        @DecimalMax(value = "1e13", message = "must be at most 1e13 Pa") Double youngsModulusPa,
+        Words.End endCondition,
+        Boolean stiffness,
+        @Min(1) @Max(ModeSolver.MAX_MODES) Integer modeCount,
+        @Valid Pluck pluck,
+        @Valid @Size(max = 16) List<@NotNull @Valid Pickup> pickups,
+        Words.Combination pickupCombination,
+        @Finite @DecimalMin(value = "100", message = "must be at least 100 Hz")
+        @DecimalMax(value = "1000", message = "must be at most 1000 Hz") Double referenceA4Hz,
+        @Min(2) @Max(2001) Integer shapeSamples) implements CrossFieldChecked.Rules {
+
+    public static final int DEFAULT_MODE_COUNT = 12;
+    public static final int DEFAULT_SHAPE_SAMPLES = 201;
+    public static final double DEFAULT_A4_HZ = 440.0;
+
+    /** Where and how the string is set in motion. */
+    public record Pluck(@NotNull @Finite Double positionMm, Words.Kind kind) {
+        public Words.Kind kindOrDefault() {
+            return kind == null ? Words.Kind.PLUCK : kind;
+        }
+    }
+
+    /** A sensor: aperture centre from the nut and width (0 = point sensor). */
+    public record Pickup(@NotNull @Finite Double positionMm,
+            @Finite @PositiveOrZero @DecimalMax(value = "100000") Double apertureMm) {
+        public double apertureOrZero() {
+            return apertureMm == null ? 0 : apertureMm;
+        }
+    }
+
+    public boolean stiffnessOn() {
+        return Boolean.TRUE.equals(stiffness);
+    }
+
+    public Words.End endOrDefault() {
+        return endCondition == null ? Words.End.PINNED : endCondition;
+    }
+
+    public int modeCountOrDefault() {
+        return modeCount == null ? DEFAULT_MODE_COUNT : modeCount;
+    }
+
+    public int shapeSamplesOrDefault() {
+        return shapeSamples == null ? DEFAULT_SHAPE_SAMPLES : shapeSamples;
+    }
+
+    public double referenceA4OrDefault() {
+        return referenceA4Hz == null ? DEFAULT_A4_HZ : referenceA4Hz;
+    }
+
+    @Override
+    public List<FieldProblem> crossFieldProblems() {
+        return problems(this);
+    }
+
+    /** Every cross-field problem of the request; single-field problems are Bean Validation's. */
+    public static List<FieldProblem> problems(StringAnalysisRequest r) {
+        List<FieldProblem> out = new ArrayList<>();
+        if (r.tensionN == null && r.targetHz == null) {
+            out.add(new FieldProblem("tensionN", "give tensionN, or targetHz to solve the tension"));
+        } else if (r.tensionN != null && r.targetHz != null) {
+            out.add(new FieldProblem("targetHz", "give either tensionN or targetHz, not both"));
+        }
+        StringChecks.material(out, "material", r.material);
+        StringChecks.material(out, "wrapMaterial", r.wrapMaterial);
+        if (r.linearDensityKgPerM == null) {
+            if (r.material == null) {
+                out.add(new FieldProblem("material", "is required unless linearDensityKgPerM is given"));
+            }
+            if (r.diameterMm == null) {
+                out.add(new FieldProblem("diameterMm", "is required unless linearDensityKgPerM is given"));
+            }
+        }
+        StringChecks.wrapPair(out, "", r.wrapMaterial, r.wrapDiameterMm);
+        if (r.stiffnessOn()) {
+            if (r.diameterMm == null) {
+                out.add(new FieldProblem("diameterMm", "is required when stiffness is true"));
+            }
+            if (r.youngsModulusPa == null && r.material == null) {
+                out.add(new FieldProblem("youngsModulusPa",
+                        "is required when stiffness is true and no material is given"));
+            }
+        }
+        Double length = StringChecks.usable(r.lengthMm);
+        if (length != null) {
+            lengthDependent(out, r, length);
+        }
+        if (r.pickupCombination != null && (r.pickups == null || r.pickups.size() != 2)) {
+            out.add(new FieldProblem("pickupCombination", "needs exactly two pickups"));
+        }
+        return out;
+    }
+
+    private static void lengthDependent(List<FieldProblem> out, StringAnalysisRequest r, double length) {
+        if (r.pluck != null && StringChecks.usable(r.pluck.positionMm) != null) {
+            double x = r.pluck.positionMm;
+            if (!(x > 0 && x < length)) {
+                out.add(new FieldProblem("pluck.positionMm",
+                        "must lie strictly between the nut (0) and the bridge (" + length + " mm)"));
+            }
+        }
+        if (r.pickups == null) {
+            return;
+        }
+        for (int i = 0; i < r.pickups.size(); i++) {
+            Pickup p = r.pickups.get(i);
+            if (p == null || StringChecks.usable(p.positionMm) == null) {
+                continue;
+            }
+            double x = p.positionMm;
+            if (!(x >= 0 && x <= length)) {
+                out.add(new FieldProblem("pickups[" + i + "].positionMm",
+                        "must lie on the string, between 0 and " + length + " mm"));
+            } else if (p.apertureMm != null && Double.isFinite(p.apertureMm) && p.apertureMm >= 0
+                    && (x - p.apertureMm / 2 < 0 || x + p.apertureMm / 2 > length)) {
+                out.add(new FieldProblem("pickups[" + i + "].apertureMm",
+                        "reaches past the end of the string"));
+            }
+        }
+    }
+
+    /** Unknown-material message shared by requests. */
+    static String unknownMaterial(String id) {
+        return "is not a known material: '" + id + "' (see GET /api/v1/materials; known: "
+                + String.join(", ", Materials.all().stream().map(m -> m.id()).toList()) + ")";
+    }
+}

@@ -1,0 +1,51 @@
+package org.nodewright.templates;
+
+import org.nodewright.physics.templates.Sheet;
+import org.nodewright.templates.render.Paper;
+import org.nodewright.templates.render.PdfRenderer;
+import org.nodewright.templates.render.SvgRenderer;
+import org.nodewright.web.BadRequestException;
+import org.springframework.http.ContentDisposition;
+import org.springframework.http.HttpHeaders;
+import org.springframework.http.MediaType;
+import org.springframework.http.ResponseEntity;
+
+/** SVG and PDF answers for a drawn sheet, with a download file name. */
+final class TemplateResponses {
+
+    static final MediaType SVG = MediaType.parseMediaType("image/svg+xml");
+
+    private TemplateResponses() {
+    }
+
+    static ResponseEntity<String> svg(Sheet sheet, String fileStem) {
+        return ResponseEntity.ok()
+                .contentType(new MediaType(SVG, java.nio.charset.StandardCharsets.UTF_8))
+                .header(HttpHeaders.CONTENT_DISPOSITION,
+                        ContentDisposition.inline().filename(fileStem + ".svg").build().toString())
+                .body(SvgRenderer.render(sheet));
+    }
+
+    static ResponseEntity<byte[]> pdf(Sheet sheet, String paperWord, String fileStem) {
+        Paper paper = paper(paperWord);
+        byte[] bytes;
+        try {
+            bytes = PdfRenderer.render(sheet, paper);
+        } catch (IllegalArgumentException tooMany) {
+            throw new BadRequestException("paper", tooMany.getMessage());
+        }
+        return ResponseEntity.ok()
+                .contentType(MediaType.APPLICATION_PDF)
+                .header(HttpHeaders.CONTENT_DISPOSITION,
+                        ContentDisposition.attachment().filename(fileStem + "-" + paper.word() + ".pdf").build()
+                                .toString())
+                .body(bytes);
+    }
+
+    static Paper paper(String word) {
+        if (word == null) {
+            return Paper.A4;
+        }
+        return Paper.fromWord(word).orElseThrow(() -> new BadRequestException("paper", "must be a4 or letter"));
+    }
+}

@@ -1,0 +1,129 @@
+package org.nodewright.sharing;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.assertThatThrownBy;
+
+import java.io.IOException;
+import java.net.ConnectException;
+import java.net.InetSocketAddress;
+import java.net.Socket;
+import java.net.URI;
+import java.net.http.HttpClient;
+import java.net.http.HttpRequest;
+import java.net.http.HttpResponse;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.Base64;
+import org.junit.jupiter.api.Test;
+import org.nodewright.NodewrightApplication;
+import org.springframework.boot.builder.SpringApplicationBuilder;
+import org.springframework.boot.diagnostics.FailureAnalysis;
+import org.springframework.boot.web.server.context.WebServerApplicationContext;
+import org.springframework.context.ConfigurableApplicationContext;
+
+/**
+ * Real start-ups on a random port: which address the server listens on in each mode, the first
+ * admin, and the refusal to start LAN mode with neither an admin nor a password. On Linux every
+ * 127.x.y.z address reaches the loopback interface, so a server bound to 127.0.0.1 only refuses
+ * 127.0.0.2 while one bound to 0.0.0.0 answers it.
+ */
+class LanStartupTest {
+
+    private static final HttpClient HTTP = HttpClient.newHttpClient();
+
+    private static ConfigurableApplicationContext start(Path dataDir, String... args) {
+        String[] all = new String[args.length + 3];
+        all[0] = "--server.port=0";
+        all[1] = "--app.data-dir=" + dataDir;
+        all[2] = "--spring.main.banner-mode=off";
+        System.arraycopy(args, 0, all, 3, args.length);
+        return new SpringApplicationBuilder(NodewrightApplication.class).run(all);
+    }
+
+    private static int port(ConfigurableApplicationContext context) {
+        return ((WebServerApplicationContext) context).getWebServer().getPort();
+    }
+
+    private static boolean answers(String host, int port) throws IOException {
+        try (Socket socket = new Socket()) {
+            socket.connect(new InetSocketAddress(host, port), 2000);
+            return true;
+        } catch (ConnectException refused) {
+            return false;
+        }
+    }
+
+    private static HttpResponse<String> get(String host, int port, String path, String user, String password)
+            throws Exception {
+        HttpRequest.Builder request = HttpRequest.newBuilder(URI.create("http://" + host + ":" + port + path));
+        if (user != null) {
+            String token = Base64.getEncoder().encodeToString((user + ":" + password).getBytes(StandardCharsets.UTF_8));
+            request.header("Authorization", "Basic " + token);
+        }
+        return HTTP.send(request.build(), HttpResponse.BodyHandlers.ofString());
+    }
+
+    @Test
+    void byDefaultItListensOnLoopbackOnlyAndAsksForNoLogin() throws Exception {
+        try (ConfigurableApplicationContext app = start(Files.createTempDirectory("nodewright-local-"))) {
+            int port = port(app);
+            assertThat(answers("127.0.0.1", port)).isTrue();
+            assertThat(answers("127.0.0.2", port)).isFalse();
+            assertThat(get("127.0.0.1", port, "/", null, null).statusCode()).isEqualTo(200);
+            assertThat(get("127.0.0.1", port, "/api/v1/accounts", null, null).statusCode()).isEqualTo(404);
+            assertThat(get("127.0.0.1", port, "/h2-console", null, null).statusCode()).isEqualTo(404);
+            HttpResponse<String> login = get("127.0.0.1", port, "/login", null, null);
+            assertThat(login.statusCode()).isEqualTo(302);
+            assertThat(get("127.0.0.1", port, "/", null, null).body()).doesNotContain("id=\"sign-out\"");
+            assertThat(login.headers().firstValue("X-Frame-Options")).contains("DENY");
+        }
+    }
+
+    @Test
+    void lanModeListensOnAllInterfacesAndTheFirstStartAloneSetsTheAdminPassword() throws Exception {
+        Path dir = Files.createTempDirectory("nodewright-lan-start-");
+        try (ConfigurableApplicationContext app = start(dir, "--app.sharing.lan=true",
+                "--app.sharing.admin-password=first-start-pw")) {
+            int port = port(app);
+            assertThat(answers("127.0.0.2", port)).isTrue();
+            assertThat(get("127.0.0.2", port, "/api/v1/accounts", null, null).statusCode()).isEqualTo(401);
+            HttpResponse<String> list = get("127.0.0.2", port, "/api/v1/accounts", "admin", "first-start-pw");
+            assertThat(list.statusCode()).isEqualTo(200);
+            assertThat(list.body()).contains("\"username\":\"admin\"").contains("\"role\":\"admin\"");
+        }
+        // Second start: the admin exists, so a different password on the command line changes nothing.
+        try (ConfigurableApplicationContext app = start(dir, "--app.sharing.lan=true",
+                "--app.sharing.admin-password=other-password")) {
+            int port = port(app);
+            assertThat(get("127.0.0.1", port, "/api/v1/accounts", "admin", "first-start-pw").statusCode())
+                    .isEqualTo(200);
+            assertThat(get("127.0.0.1", port, "/api/v1/accounts", "admin", "other-password").statusCode())
+                    .isEqualTo(401);
+        }
+        // Third start: no password needed any more; an explicit address is kept.
+        try (ConfigurableApplicationContext app = start(dir, "--app.sharing.lan=true", "--server.address=127.0.0.1")) {
+            int port = port(app);
+            assertThat(answers("127.0.0.2", port)).isFalse();
+            assertThat(get("127.0.0.1", port, "/api/v1/accounts", "admin", "first-start-pw").statusCode())
+                    .isEqualTo(200);
+        }
+    }
+
+    @Test
+    void lanModeRefusesToStartWithNoAdminAndNoPassword() throws Exception {
+        Path dir = Files.createTempDirectory("nodewright-lan-refused-");
+        assertThatThrownBy(() -> start(dir, "--app.sharing.lan=true").close())
+                .satisfies(failure -> {
+                    Throwable cause = failure;
+                    while (cause != null && !(cause instanceof LanSetupException)) {
+                        cause = cause.getCause();
+                    }
+                    assertThat(cause).isInstanceOf(LanSetupException.class);
+                    FailureAnalysis analysis = new LanSetupFailureAnalyzer().analyze(failure);
+                    assertThat(analysis.getDescription()).contains("no enabled admin account")
+                            .contains("no admin password");
+                    assertThat(analysis.getAction()).contains("--app.sharing.admin-password=");
+                });
+    }
+}
