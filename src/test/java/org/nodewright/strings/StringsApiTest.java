@@ -144,6 +144,26 @@ class StringsApiTest {
     }
 
     @Test
+    void gaugeForAWantedTension() throws Exception {
+        // Closed form for a flexible plain string, d = √(T/(πρ))/(L·f): 70 N at 329.63 Hz on 650 mm of
+        // plain steel (ρ = 7850) gives 0.248656 mm (worked by hand).
+        JsonNode plain = postJson("/api/v1/strings/gauge", """
+                {"lengthMm": 650.0, "targetHz": 329.63, "tensionN": 70.0, "material": "plain-steel"}""");
+        assertThat(plain.path("solved").asString()).isEqualTo("diameterMm");
+        assertThat(plain.path("diameterMm").asDouble()).isCloseTo(0.248656, within(1e-6));
+        JsonNode wound = postJson("/api/v1/strings/gauge", """
+                {"lengthMm": 650.0, "targetHz": 82.41, "tensionN": 80.0, "material": "plain-steel",
+                 "wrapMaterial": "phosphor-bronze", "coreDiameterMm": 0.40, "stiffness": true}""");
+        assertThat(wound.path("solved").asString()).isEqualTo("wrapDiameterMm");
+        // The string it makes must need 80 N at 82.41 Hz: check through the analysis endpoint.
+        JsonNode check = postJson("/api/v1/strings/analyze", """
+                {"lengthMm": 650.0, "targetHz": 82.41, "material": "plain-steel", "diameterMm": 0.40,
+                 "wrapMaterial": "phosphor-bronze", "wrapDiameterMm": %s, "stiffness": true, "modeCount": 1}"""
+                .formatted(wound.path("wrapDiameterMm").asDouble()));
+        assertThat(check.path("tensionN").asDouble()).isCloseTo(80.0, within(1e-6));
+    }
+
+    @Test
     void fretsAndMaterials() throws Exception {
         JsonNode frets = getJson("/api/v1/frets?scaleLengthMm=650&count=22&divisionsPerOctave=12");
         assertThat(frets).hasSize(22);
