@@ -70,11 +70,19 @@ public final class ResonanceFinder {
             }
             double lo = f0 + (i - 1) * df;
             double hi = f0 + (i + 1) * df;
-            UnivariatePointValuePair best = new BrentOptimizer(1e-12, 1e-9).optimize(new MaxEval(MAX_EVAL),
-                    new UnivariateObjectiveFunction(this::objective), GoalType.MAXIMIZE,
-                    new SearchInterval(lo, hi, f0 + i * df));
-            double fr = best.getPoint();
-            double peak = best.getValue();
+            double fr = f0 + i * df;
+            double peak = h[i];
+            try {
+                UnivariatePointValuePair best = new BrentOptimizer(1e-12, 1e-9).optimize(new MaxEval(MAX_EVAL),
+                        new UnivariateObjectiveFunction(this::objective), GoalType.MAXIMIZE,
+                        new SearchInterval(lo, hi, f0 + i * df));
+                if (best.getValue() >= peak || Double.isNaN(peak)) {
+                    fr = best.getPoint();
+                    peak = best.getValue();
+                }
+            } catch (RuntimeException e) {
+                // Brent did not converge within its evaluation cap: keep the grid extremum.
+            }
             double q = quality(f0, df, h, i, l, r, fr, peak);
             out.add(new Resonance(out.size() + 1, fr, q, Math.exp(sign * peak)));
         }
