@@ -11,7 +11,7 @@ export const OPEN_KEY = 'nodewright.openAirColumn';
 export const FROM_KEY = 'nodewright.boreForTemplates';
 
 const POLL_MS = 200;
-const state = { job: null, result: null, timer: null, urls: {} };
+const state = { job: null, result: null, timer: null, urls: {}, limits: {} };
 
 // ---- texts -------------------------------------------------------------------------------
 const texts = new Map();
@@ -217,10 +217,12 @@ function readBore() {
   }
 }
 
+/** Fingerings as text lines; holes shown from 1 (the API counts closedHoles from 0). */
 function fingeringLines(fingerings) {
-  return fingerings.map((f) => `${f.name}, ${f.target ?? f.targetHz}, ${(f.closedHoles || []).join(' ')}`).join('\n');
+  return fingerings.map((f) => `${f.name}, ${f.targetNote ?? f.targetHz}, ${(f.closedHoles || []).map((h) => h + 1).join(' ')}`).join('\n');
 }
 
+/** The fingering lines as the API's fingerings (closedHoles from 0). */
 function readFingerings() {
   const rows = [];
   const problems = [];
@@ -228,12 +230,15 @@ function readFingerings() {
     if (!line.trim()) return;
     const parts = line.split(',').map((s) => s.trim());
     const closed = (parts[2] ?? '').split(/\s+/).filter(Boolean).map(Number);
-    if (parts.length < 2 || !parts[0] || !parts[1] || closed.some((n) => !Number.isInteger(n))) {
+    if (parts.length < 2 || !parts[0] || !parts[1] || closed.some((n) => !Number.isInteger(n) || n < 1)) {
       problems.push({ field: 'fingerings', message: t('badLine', i + 1) });
       return;
     }
     const hz = num(parts[1]);
-    rows.push({ name: parts[0], ...(Number.isFinite(hz) ? { targetHz: hz } : { target: parts[1] }), closedHoles: closed });
+    rows.push({
+      name: parts[0], closedHoles: closed.map((n) => n - 1),
+      ...(Number.isFinite(hz) ? { targetHz: hz } : { targetNote: parts[1] }), register: 1,
+    });
   });
   return { rows, problems };
 }
@@ -241,16 +246,32 @@ function readFingerings() {
 function limits() {
   const get = (id) => num($(id).value);
   return {
+    ...state.limits,
     varyDiameters: $('vary-diameters').checked, varyFoot: $('vary-foot').checked,
     minDiameterMm: get('min-diameter'), maxDiameterMm: get('max-diameter'), minWallMm: get('min-wall'),
   };
 }
 
+/** Puts a bore (an air-column request, fingerings included or not) into the panel. */
+function showBore(request) {
+  const bore = { ...request };
+  const fingerings = bore.fingerings || [];
+  delete bore.fingerings;
+  $('bore-json').value = JSON.stringify(bore, null, 1);
+  if (fingerings.length) $('fingering-lines').value = fingeringLines(fingerings);
+}
+
 async function loadDemo() {
   const answer = await getJson('/api/v1/inverse/tone-holes/demo');
   if (!answer.ok) return;
-  $('bore-json').value = JSON.stringify(answer.data.bore, null, 1);
-  $('fingering-lines').value = fingeringLines(answer.data.fingerings);
+  showBore(answer.data.bore);
+  const l = answer.data.limits || {};
+  state.limits = { minPositionMm: l.minPositionMm, endMarginMm: l.endMarginMm, minFootMm: l.minFootMm, maxFootMm: l.maxFootMm };
+  if (l.minDiameterMm) $('min-diameter').value = l.minDiameterMm;
+  if (l.maxDiameterMm) $('max-diameter').value = l.maxDiameterMm;
+  if (l.minWallMm !== undefined && l.minWallMm !== null) $('min-wall').value = l.minWallMm;
+  $('vary-foot').checked = l.varyFoot !== false;
+  $('vary-diameters').checked = !!l.varyDiameters;
 }
 
 function fromBench() {
@@ -260,11 +281,8 @@ function fromBench() {
     return;
   }
   const handed = JSON.parse(stored);
-  const bore = { ...(handed.request || handed) };
-  const fingerings = handed.fingerings || bore.fingerings || [];
-  delete bore.fingerings;
-  $('bore-json').value = JSON.stringify(bore, null, 1);
-  if (fingerings.length) $('fingering-lines').value = fingeringLines(fingerings);
+  state.limits = {};
+  showBore(handed.request || handed);
   say($('bore-message'), t('fromBench'));
 }
 
@@ -304,7 +322,7 @@ async function startSolve() {
     showProblem(borePanel, $('bore-message'), { errors: [...(problem ? problem.errors : []), ...f.problems] });
     return;
   }
-  const answer = await postJson('/api/v1/inverse/tone-holes', { bore, fingerings: f.rows, limits: limits() });
+  const answer = await postJson('/api/v1/inverse/tone-holes', { bore: { ...bore, fingerings: f.rows }, limits: limits() });
   if (!answer.ok) {
     showProblem(borePanel, $('bore-message'), answer.problem);
     return;
@@ -382,23 +400,20 @@ async function cancelSolve() {
   if (!state.job) return;
   clearTimeout(state.timer);
   const answer = await sendJson('DELETE', `/api/v1/inverse/jobs/${encodeURIComponent(state.job)}`);
-  if (answer.ok) finish(answer.data.status === 'cancelled' ? answer.data : answer.data);
-  if (answer.ok && !['cancelled', 'succeeded', 'failed'].includes(answer.data.status)) {
-    state.job = answer.data.id;
-    poll();
-  }
+  // A running job stops at its next evaluation: keep polling until it says so.
+  if (answer.ok) poll();
 }
 
 function applyResult() {
   if (!state.result) return;
-  $('bore-json').value = JSON.stringify(state.result.bore, null, 1);
+  showBore(state.result.bore);
   say($('bore-message'), t('applied'));
 }
 
+/** Hands the adjusted bore (an air-column request with its fingerings) to the bore bench. */
 function openInBench() {
   if (!state.result) return;
-  const f = readFingerings();
-  sessionStorage.setItem(OPEN_KEY, JSON.stringify({ source: 'templates', request: state.result.bore, fingerings: f.rows }));
+  sessionStorage.setItem(OPEN_KEY, JSON.stringify({ source: 'templates', request: state.result.bore }));
   window.location.assign('/air-columns#from-templates');
 }
 

@@ -145,6 +145,21 @@ class StringsApiBadInputTest {
 
     @ParameterizedTest(name = "{index}: {0}")
     @CsvSource(delimiter = '|', textBlock = """
+            {"targetHz": 330, "tensionN": 70, "material": "plain-steel"}                              | lengthMm
+            {"lengthMm": 650, "targetHz": "NaN", "tensionN": 70, "material": "plain-steel"}           | targetHz
+            {"lengthMm": 650, "targetHz": 330, "tensionN": -70, "material": "plain-steel"}            | tensionN
+            {"lengthMm": 650, "targetHz": 330, "tensionN": 70, "material": "mithril"}                 | material
+            {"lengthMm": 650, "targetHz": 330, "tensionN": 70, "material": "plain-steel", "wrapMaterial": "copper"} | coreDiameterMm
+            {"lengthMm": 650, "targetHz": 330, "tensionN": 70, "material": "plain-steel", "coreDiameterMm": 0.4}   | wrapMaterial
+            """)
+    void malformedGaugeIsA400NamingTheField(String body, String field) throws Exception {
+        MockHttpServletResponse res = mvc.perform(post("/api/v1/strings/gauge")
+                .contentType(MediaType.APPLICATION_JSON).content(body)).andReturn().getResponse();
+        assertProblem(res, 400, field, body);
+    }
+
+    @ParameterizedTest(name = "{index}: {0}")
+    @CsvSource(delimiter = '|', textBlock = """
             scaleLengthMm=NaN&count=22&divisionsPerOctave=12         | scaleLengthMm
             scaleLengthMm=Infinity&count=22&divisionsPerOctave=12    | scaleLengthMm
             scaleLengthMm=-650&count=22&divisionsPerOctave=12        | scaleLengthMm

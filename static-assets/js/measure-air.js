@@ -1,0 +1,121 @@
+// Measurement panel of the bore bench: import a measured input-impedance curve (CSV of frequency,
+// magnitude, phase), draw it over the predicted curve in the impedance chart and list its peaks
+// beside the nearest predicted resonance.
+import { postForm, showFieldErrors, clearFieldErrors } from './common/api.js';
+import { loadPanel, texts, role, sig, centsBetween, onPageEvent } from './measure/panel.js';
+
+const MEASURED_COLOUR = '#b5651d';
+const state = { panel: null, t: null, analysis: null, measured: null };
+
+/** Factor bringing the measured curve's highest value onto the prediction's (for unlike units). */
+export function scaleToPrediction(measuredMagnitudes, predictedMagnitudes) {
+  const top = (xs) => xs.reduce((m, x) => (x > m ? x : m), 0);
+  const a = top(measuredMagnitudes);
+  const b = top(predictedMagnitudes ?? []);
+  return a > 0 && b > 0 ? b / a : 1;
+}
+
+async function onSubmit(e) {
+  e.preventDefault();
+  const p = state.panel;
+  const form = role(p, 'upload');
+  const status = role(p, 'status');
+  const file = form.elements.file.files[0];
+  if (!file) { status.textContent = state.t('noFile'); return; }
+  const data = new FormData();
+  data.append('file', file);
+  if (form.elements.phaseUnit.value) data.append('phaseUnit', form.elements.phaseUnit.value);
+  data.append('inputEnd', state.analysis?.request?.inputEnd === 'open' ? 'open' : 'closed');
+  status.textContent = state.t('busy');
+  let result;
+  try {
+    result = await postForm('/api/v1/measurements/impedance', data);
+  } catch (err) {
+    status.textContent = state.t('serverDown');
+    return;
+  }
+  if (!result.ok) {
+    showFieldErrors(form, result.problem);
+    const why = (result.problem?.errors ?? []).map((x) => x.message).join('; ') || result.problem?.detail || String(result.status);
+    status.textContent = state.t('failed', why);
+    p.dataset.measured = 'failed';
+    return;
+  }
+  clearFieldErrors(form);
+  status.textContent = '';
+  state.measured = result.data;
+  showMeasured();
+}
+
+function showMeasured() {
+  const p = state.panel;
+  const m = state.measured;
+  if (!m) return;
+  role(p, 'result').hidden = false;
+  const f = m.impedance.frequencyHz;
+  role(p, 'summary').textContent = state.t('summary', f.length, sig(f[0], 6), sig(f[f.length - 1], 6), m.resonances.length);
+  const predicted = state.analysis?.response?.resonances ?? [];
+  const rows = m.resonances.map((r) => {
+    let nearest = null;
+    for (const q of predicted) {
+      if (!nearest || Math.abs(q.frequencyHz - r.frequencyHz) < Math.abs(nearest.frequencyHz - r.frequencyHz)) nearest = q;
+    }
+    const cells = [r.n, sig(r.frequencyHz, 6), sig(r.magnitude, 4), r.q == null ? '' : sig(r.q, 3),
+      nearest ? sig(nearest.frequencyHz, 6) : '', nearest ? centsBetween(r.frequencyHz, nearest.frequencyHz).toFixed(1) : ''];
+    const tr = document.createElement('tr');
+    tr.replaceChildren(...cells.map((c) => Object.assign(document.createElement('td'), { textContent: String(c) })));
+    return tr;
+  });
+  role(p, 'peaks').tBodies[0].replaceChildren(...rows);
+  p.dataset.measured = String(m.resonances.length);
+  drawMeasured();
+}
+
+function drawMeasured() {
+  const m = state.measured;
+  if (!m) return;
+  const scaleOn = role(state.panel, 'scale').checked;
+  const pageCanvas = document.getElementById('impedance-chart');
+  const pageChart = pageCanvas && typeof Chart !== 'undefined' ? Chart.getChart(pageCanvas) : null;
+  const k = scaleOn && pageChart ? scaleToPrediction(m.impedance.magnitude, state.analysis?.response?.impedance?.magnitude) : 1;
+  const points = m.impedance.frequencyHz.map((x, i) => ({ x, y: m.impedance.magnitude[i] * k }));
+  const dataset = { kind: 'measured', label: state.t('chartLabel'), data: points, yAxisID: 'y', borderColor: MEASURED_COLOUR,
+    borderWidth: 1.2, borderDash: [5, 3], pointRadius: 0, tension: 0 };
+  if (pageChart) {
+    pageChart.data.datasets = pageChart.data.datasets.filter((ds) => ds.kind !== 'measured');
+    pageChart.data.datasets.push(dataset);
+    pageChart.update('none');
+    return;
+  }
+  const box = role(state.panel, 'own-chart');
+  box.hidden = false;
+  const canvas = box.querySelector('canvas');
+  const old = Chart.getChart(canvas);
+  if (old) old.destroy();
+  new Chart(canvas, {
+    type: 'line',
+    data: { datasets: [dataset] },
+    options: { animation: false, parsing: false, maintainAspectRatio: false,
+      scales: { x: { type: 'linear', title: { display: true, text: 'Hz' } }, y: { type: 'logarithmic' } } },
+  });
+}
+
+async function init() {
+  const section = document.getElementById('measure-air-panel') || document.getElementById('measure-panel');
+  if (!section) return;
+  const panel = await loadPanel(section, 'measure-air');
+  state.panel = panel;
+  state.t = texts(panel);
+  role(panel, 'upload').addEventListener('submit', onSubmit);
+  role(panel, 'scale').addEventListener('change', drawMeasured);
+  panel.dataset.ready = 'true';
+}
+
+onPageEvent('nodewright:air-analyzed', (e) => {
+  if (!e.detail?.response) return;
+  state.analysis = e.detail;
+  // The page replaces its chart after each analysis (and may redraw it for a fingering): overlay after it.
+  if (state.measured) setTimeout(showMeasured, 0);
+});
+
+init().catch((e) => console.warn('impedance panel not loaded', e));

@@ -1,0 +1,186 @@
+// Measurement panel of the string bench: upload a recording (WAV) or a table of partials (CSV),
+// show the measured partials against the predicted ones in the partials chart and a table of
+// residuals, and apply the fit back to the design as an effective linear density and modulus.
+import { postForm, showFieldErrors, clearFieldErrors } from './common/api.js';
+import { loadPanel, texts, role, sig, centsBetween, onPageEvent } from './measure/panel.js';
+
+const MEASURED_COLOUR = '#b5651d';
+const state = { panel: null, t: null, analysis: null, measured: null };
+
+/**
+ * Effective string parameters reproducing a fitted f1 and B (Fletcher 1964, eq. 11 and the flexible
+ * string f1 = (1/2L)·√(T/μ)): μ = T/(2·L·f1)², E = 64·T·L²·B/(π³·d⁴). SI in, SI out.
+ */
+export function effectiveParameters({ f1Hz, inharmonicityB }, tensionN, lengthMm, diameterMm) {
+  const L = lengthMm / 1000;
+  const d = diameterMm / 1000;
+  const mu = tensionN / (2 * L * f1Hz) ** 2;
+  const E = (64 * tensionN * L * L * inharmonicityB) / (Math.PI ** 3 * d ** 4);
+  return { linearDensityKgPerM: mu, youngsModulusPa: E };
+}
+
+const isCsv = (file) => /\.(csv|txt)$/i.test(file.name) || /csv|text\/plain/.test(file.type);
+
+async function onSubmit(e) {
+  e.preventDefault();
+  const p = state.panel;
+  const form = role(p, 'upload');
+  const status = role(p, 'status');
+  const file = form.elements.file.files[0];
+  if (!file) { status.textContent = state.t('noFile'); return; }
+  const data = new FormData();
+  data.append('file', file);
+  if (form.elements.expectedF1Hz.value !== '') data.append('expectedF1Hz', form.elements.expectedF1Hz.value);
+  if (form.elements.maxPartials.value !== '') data.append('maxPartials', form.elements.maxPartials.value);
+  status.textContent = state.t('busy');
+  let result;
+  try {
+    result = await postForm(isCsv(file) ? '/api/v1/measurements/partials-csv' : '/api/v1/measurements/partials', data);
+  } catch (err) {
+    status.textContent = state.t('serverDown');
+    return;
+  }
+  if (!result.ok) {
+    const unclaimed = showFieldErrors(form, result.problem);
+    const why = (result.problem?.errors ?? []).map((x) => x.message).join('; ') || result.problem?.detail || String(result.status);
+    status.textContent = state.t('failed', why) + (unclaimed.length ? '' : '');
+    p.dataset.measured = 'failed';
+    return;
+  }
+  clearFieldErrors(form);
+  status.textContent = '';
+  state.measured = result.data;
+  showMeasured();
+}
+
+function showMeasured() {
+  const p = state.panel;
+  const m = state.measured;
+  if (!m) return;
+  role(p, 'result').hidden = false;
+  const fit = m.fit;
+  role(p, 'fit').textContent = state.t('fit', sig(fit.f1Hz, 7), sig(fit.inharmonicityB, 4), sig(fit.fundamentalHz, 7),
+    sig(fit.rmsCents, 3), fit.partialsUsed);
+  const design = new Map((state.analysis?.response.modes ?? []).map((x) => [x.n, x.frequencyHz]));
+  const rows = m.peaks.map((pk) => {
+    const tr = document.createElement('tr');
+    if (!pk.usedInFit) tr.className = 'set-aside';
+    const d = design.get(pk.n);
+    const cells = [pk.n, sig(pk.frequencyHz, 7), pk.levelDb == null ? '' : pk.levelDb.toFixed(1), sig(pk.fittedHz, 7),
+      pk.residualCents.toFixed(3), d ? sig(d, 7) : '', d ? centsBetween(pk.frequencyHz, d).toFixed(2) : ''];
+    tr.replaceChildren(...cells.map((c) => Object.assign(document.createElement('td'), { textContent: String(c) })));
+    return tr;
+  });
+  role(p, 'peaks').tBodies[0].replaceChildren(...rows);
+  p.dataset.measured = String(m.peaks.length);
+  fillApplyInputs(false);
+  drawMeasured();
+}
+
+/** Measured partials in cents from n × fitted f1, the same measure the chart shows for the design. */
+const measuredCents = (m) => m.peaks.map((pk) => ({ n: pk.n, cents: centsBetween(pk.frequencyHz, pk.n * m.fit.f1Hz) }));
+
+function drawMeasured() {
+  const m = state.measured;
+  if (!m) return;
+  const points = measuredCents(m);
+  const pageCanvas = document.getElementById('partials-chart');
+  const pageChart = pageCanvas && typeof Chart !== 'undefined' ? Chart.getChart(pageCanvas) : null;
+  if (pageChart) {
+    const data = pageChart.data;
+    const maxN = Math.max(...points.map((x) => x.n), ...(data.labels ?? []).map(Number));
+    if (!data.labels || data.labels.length < maxN) {
+      data.labels = Array.from({ length: maxN }, (_, i) => String(i + 1));
+    }
+    const byN = new Map(points.map((x) => [x.n, x.cents]));
+    data.datasets = data.datasets.filter((ds) => ds.kind !== 'measured');
+    data.datasets.push({
+      type: 'line', kind: 'measured', label: state.t('chartLabel'), showLine: false, pointRadius: 5,
+      pointStyle: 'rectRot', borderColor: MEASURED_COLOUR, backgroundColor: MEASURED_COLOUR,
+      data: data.labels.map((l) => (byN.has(Number(l)) ? byN.get(Number(l)) : null)),
+    });
+    pageChart.update('none');
+    return;
+  }
+  // No design chart on this page (the Measure page): draw our own.
+  const box = role(state.panel, 'own-chart');
+  box.hidden = false;
+  const canvas = box.querySelector('canvas');
+  const old = Chart.getChart(canvas);
+  if (old) old.destroy();
+  new Chart(canvas, {
+    type: 'scatter',
+    data: { datasets: [{ kind: 'measured', label: state.t('chartLabel'), data: points.map((x) => ({ x: x.n, y: x.cents })),
+      pointRadius: 5, pointStyle: 'rectRot', borderColor: MEASURED_COLOUR, backgroundColor: MEASURED_COLOUR }] },
+    options: { animation: false, maintainAspectRatio: false,
+      scales: { x: { title: { display: true, text: 'n' }, ticks: { stepSize: 1 } }, y: { title: { display: true, text: state.t('chartAxis') } } } },
+  });
+}
+
+/** Tension, length and core diameter from the last analysis of the design, unless typed in. */
+function fillApplyInputs(force) {
+  const p = state.panel;
+  const a = state.analysis;
+  if (!a) return;
+  const put = (name, value) => {
+    const input = role(p, name);
+    if (value != null && (force || input.value === '' || input.dataset.auto === 'true')) {
+      input.value = String(Number(Number(value).toPrecision(8)));
+      input.dataset.auto = 'true';
+    }
+  };
+  put('tension', a.response.tensionN);
+  put('length', a.request.lengthMm);
+  put('diameter', a.request.diameterMm);
+  preview();
+}
+
+function applyInputs() {
+  const p = state.panel;
+  const v = (name) => Number(role(p, name).value);
+  const T = v('tension'); const L = v('length'); const d = v('diameter');
+  return [T, L, d].every((x) => Number.isFinite(x) && x > 0) ? { T, L, d } : null;
+}
+
+function preview() {
+  const p = state.panel;
+  const inputs = applyInputs();
+  if (!state.measured || !inputs) { role(p, 'preview').textContent = ''; return null; }
+  const e = effectiveParameters(state.measured.fit, inputs.T, inputs.L, inputs.d);
+  role(p, 'preview').textContent = state.t('preview', sig(e.linearDensityKgPerM * 1000, 6), sig(e.youngsModulusPa / 1e9, 5));
+  return e;
+}
+
+function onApply() {
+  const p = state.panel;
+  const e = preview();
+  if (!e) { role(p, 'status').textContent = state.t('missing'); return; }
+  document.dispatchEvent(new CustomEvent('nodewright:apply-string-parameters', { detail: { ...e } }));
+  role(p, 'status').textContent = state.t('done', sig(e.linearDensityKgPerM * 1000, 6), sig(e.youngsModulusPa / 1e9, 5));
+  p.dataset.applied = JSON.stringify(e);
+}
+
+async function init() {
+  const section = document.getElementById('measure-panel');
+  if (!section) return;
+  const panel = await loadPanel(section, 'measure-strings');
+  state.panel = panel;
+  state.t = texts(panel);
+  role(panel, 'upload').addEventListener('submit', onSubmit);
+  role(panel, 'apply').addEventListener('click', onApply);
+  for (const name of ['tension', 'length', 'diameter']) {
+    role(panel, name).addEventListener('input', (e) => { e.target.dataset.auto = 'false'; preview(); });
+  }
+  fillApplyInputs(false);
+  panel.dataset.ready = 'true';
+}
+
+onPageEvent('nodewright:string-analyzed', (e) => {
+  if (!e.detail?.response) return;
+  state.analysis = e.detail;
+  if (!state.panel) return;
+  fillApplyInputs(false);
+  if (state.measured) showMeasured(); // the page redrew its chart: put the measured points back
+});
+
+init().catch((e) => console.warn('measurement panel not loaded', e));

@@ -1,0 +1,49 @@
+// Helpers of the measurement and listening panels: load a panel's HTML (its text comes from
+// messages/measurements.properties through the server), read its texts, format numbers.
+
+/** Adds css/measure.css once, for pages whose layout does not carry it. */
+export function ensureStyles() {
+  if (document.querySelector('link[data-measure-css]')) return;
+  const link = document.createElement('link');
+  link.rel = 'stylesheet';
+  link.href = '/css/measure.css';
+  link.dataset.measureCss = 'true';
+  document.head.appendChild(link);
+}
+
+/** The panel element inside section: already rendered by the server, or fetched and inserted. */
+export async function loadPanel(section, name) {
+  ensureStyles();
+  const present = section.querySelector(`[data-panel="${name}"]`);
+  if (present) return present;
+  const response = await fetch(`/measure/panels/${name}`, { headers: { Accept: 'text/html' } });
+  if (!response.ok) throw new Error(`panel ${name}: HTTP ${response.status}`);
+  const holder = document.createElement('div');
+  holder.innerHTML = await response.text();
+  const panel = holder.querySelector(`[data-panel="${name}"]`);
+  section.appendChild(panel);
+  return panel;
+}
+
+/** The texts of a panel: data-k → text, with {0}, {1} … filled by t(key, ...args). */
+export function texts(panel) {
+  const map = Object.fromEntries([...panel.querySelectorAll('[data-role="text"] [data-k]')].map((el) => [el.dataset.k, el.textContent]));
+  return (key, ...args) => (map[key] ?? key).replace(/\{(\d+)\}/g, (_, i) => (args[Number(i)] ?? ''));
+}
+
+export const role = (panel, name) => panel.querySelector(`[data-role="${name}"]`);
+
+/** Significant-digit formatting without exponent noise for everyday magnitudes. */
+export function sig(value, digits = 6) {
+  if (value === null || value === undefined || !Number.isFinite(value)) return '';
+  const a = Math.abs(value);
+  if (a !== 0 && (a < 1e-3 || a >= 1e7)) return value.toExponential(digits - 1);
+  return String(Number(value.toPrecision(digits)));
+}
+
+export const centsBetween = (hz, refHz) => 1200 * Math.log2(hz / refHz);
+
+/** Listens for a page event on window in the capture phase, whether dispatched on document or window. */
+export function onPageEvent(name, handler) {
+  window.addEventListener(name, handler, true);
+}
