@@ -24,10 +24,17 @@ public class DataDirectoryEnvironment implements EnvironmentPostProcessor {
         environment.getPropertySources().addLast(new AbsoluteDataDirectory(environment));
     }
 
-    private static final class AbsoluteDataDirectory extends PropertySource<ConfigurableEnvironment> {
+    /**
+     * The environment is kept in a field, not as the property source's "source": Boot walks into a
+     * source that is itself an environment and would then loop over this property source forever.
+     */
+    private static final class AbsoluteDataDirectory extends PropertySource<Object> {
+
+        private final ConfigurableEnvironment environment;
 
         AbsoluteDataDirectory(ConfigurableEnvironment environment) {
-            super("nodewrightDataDirectory", environment);
+            super("nodewrightDataDirectory", new Object());
+            this.environment = environment;
         }
 
         @Override
@@ -35,7 +42,7 @@ public class DataDirectoryEnvironment implements EnvironmentPostProcessor {
             if (!PROPERTY.equals(name)) {
                 return null;
             }
-            String configured = getSource().getProperty("app.data-dir", "./data");
+            String configured = environment.getProperty("app.data-dir", "./data");
             Path dir = Path.of(configured).toAbsolutePath().normalize();
             try {
                 Files.createDirectories(dir);
