@@ -18,16 +18,26 @@ import org.springframework.core.env.PropertySource;
 public class DataDirectoryEnvironment implements EnvironmentPostProcessor {
 
     static final String PROPERTY = "app.data-dir.absolute";
+    static final String SOURCE_NAME = "nodewrightDataDirectory";
 
     @Override
     public void postProcessEnvironment(ConfigurableEnvironment environment, SpringApplication application) {
         environment.getPropertySources().addLast(new AbsoluteDataDirectory(environment));
     }
 
-    private static final class AbsoluteDataDirectory extends PropertySource<ConfigurableEnvironment> {
+    /**
+     * Answers {@code app.data-dir.absolute} only. Its source object is a plain marker, never the
+     * environment: Boot's configuration-property adapter walks a source whose object is an
+     * Environment as nested property sources, which here would contain this very source and
+     * never end (start-up spins until the heap is gone).
+     */
+    private static final class AbsoluteDataDirectory extends PropertySource<Object> {
+
+        private final ConfigurableEnvironment environment;
 
         AbsoluteDataDirectory(ConfigurableEnvironment environment) {
-            super("nodewrightDataDirectory", environment);
+            super(SOURCE_NAME, new Object());
+            this.environment = environment;
         }
 
         @Override
@@ -35,7 +45,7 @@ public class DataDirectoryEnvironment implements EnvironmentPostProcessor {
             if (!PROPERTY.equals(name)) {
                 return null;
             }
-            String configured = getSource().getProperty("app.data-dir", "./data");
+            String configured = environment.getProperty("app.data-dir", "./data");
             Path dir = Path.of(configured).toAbsolutePath().normalize();
             try {
                 Files.createDirectories(dir);
