@@ -35,6 +35,9 @@ class LibraryIT extends BrowserTestBase {
     @Test
     void saveFindOpenChangeSaveThenRestoreAnEarlierRevision() throws Exception {
         openBench(driver, STRINGS);
+        // Drive the String bench by tension (its default is a target pitch).
+        driver.findElement(By.cssSelector("input[name=drive][value=tension]")).click();
+        type(driver, "#tensionN", "70");
         type(driver, "[data-role=name]", "Harrowgate Lane parlour, top E");
         type(driver, "[data-role=tags]", "steel, parlour");
         driver.findElement(By.cssSelector("[data-role=save]")).click();
