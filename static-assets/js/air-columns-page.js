@@ -126,6 +126,7 @@ function showResults() {
   const inputClosed = request.inputEnd === 'closed';
   $('analysis-summary').textContent = [
     t('speedOfSound', fmt(response.speedOfSoundMps, 2)),
+    ...(response.air ? [t('airDensity', fmt(response.air.densityKgPerM3, 4))] : []),
     t('resonanceCount', res.length, fmt(request.fMinHz, 0), fmt(request.fMaxHz, 0)),
     inputClosed ? t('maxima') : t('minima'),
   ].join(' · ');

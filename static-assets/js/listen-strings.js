@@ -5,7 +5,7 @@ import { loadPanel, texts, role, sig, onPageEvent } from './measure/panel.js';
 import { play, schedule, audio, setVolume, stopAll, state as audioState } from './measure/voices.js';
 
 const LN_1000 = Math.log(1000); // T60: the time to fall 60 dB, e^{−σ·T60} = 1/1000
-const state = { analysis: null, panel: null, t: null, snapshots: { A: null, B: null } };
+const state = { analysis: null, panel: null, t: null, sourceChosen: false, snapshots: { A: null, B: null } };
 
 /**
  * Decay rates σn = b1 + b3·kn², kn = nπ/L: the two loss terms of Chaigne & Askenfelt's string
@@ -55,7 +55,8 @@ function fillSources() {
   if (count >= 2) options.push(['both', state.t('both')]);
   options.push(['plain', state.t('plain')]);
   select.replaceChildren(...options.map(([value, label]) => Object.assign(document.createElement('option'), { value, textContent: label })));
-  if (options.some(([v]) => v === previous)) select.value = previous;
+  // Keep the user's choice; until there is one, the first pickup (or the string alone).
+  if (state.sourceChosen && options.some(([v]) => v === previous)) select.value = previous;
 }
 
 function report() {
@@ -114,6 +115,7 @@ async function init() {
   role(panel, 'play').addEventListener('click', onPlay);
   role(panel, 'stop').addEventListener('click', () => { stopAll(); report(); });
   role(panel, 'volume').addEventListener('input', (e) => { if (audioState().contextState !== 'none') setVolume(Number(e.target.value)); });
+  role(panel, 'source').addEventListener('change', () => { state.sourceChosen = true; });
   role(panel, 'rememberA').addEventListener('click', () => remember('A'));
   role(panel, 'rememberB').addEventListener('click', () => remember('B'));
   role(panel, 'compare').addEventListener('click', onCompare);

@@ -521,6 +521,22 @@ function drawNearNodes(request, response) {
   }
 }
 
+/** Under the pointer on the node map: which modes have a node within a few mm of that point. */
+function probeNodes(event) {
+  const chart = Chart.getChart($('node-map-chart'));
+  if (!chart || !state.last) return;
+  const area = chart.chartArea;
+  if (event.offsetX < area.left || event.offsetX > area.right) { $('node-probe').textContent = ''; return; }
+  const { request, response } = state.last;
+  const xMm = io.lengthIn(chart.scales.x.getValueForPixel(event.offsetX));
+  const tol = Math.max(2, request.lengthMm / 250);   // mm: about a fingertip, or 0.4 % of a long string
+  const hits = response.modes.filter((m) => m.nodesMm.some((x) => Math.abs(x - xMm) <= tol)).map((m) => m.n);
+  const where = `${fmtLen(xMm)} ${io.units.length}`;
+  $('node-probe').textContent = hits.length
+    ? TEXT.probe.replace('{0}', where).replace('{1}', hits.join(', '))
+    : TEXT.probeNone.replace('{0}', where);
+}
+
 function render(request, response) {
   drawSummary(request, response);
   drawNodeMap(request, response);
@@ -582,6 +598,7 @@ function wire() {
   for (const canvasId of ['node-map-chart', 'mode-shapes-chart']) {
     enableLineDrag($(canvasId), (id, x) => moveMarker(id, toMm(x, io.units.length), true));
   }
+  $('node-map-chart').addEventListener('pointermove', probeNodes);
   document.addEventListener('nodewright:apply-string-parameters', (e) => {
     if (!e.detail || typeof e.detail !== 'object') return;
     fillForm(e.detail, true);

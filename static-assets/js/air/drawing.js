@@ -44,7 +44,8 @@ export function drawBore(container, segments, holes, options = {}) {
   const halfMax = (maxD / 2) * scale * widen;
   const axisY = top + halfMax;
   const height = axisY + halfMax + 48;
-  const svg = el('svg', { width, height, viewBox: `0 0 ${width} ${height}`, role: 'img', class: 'bore-svg' });
+  const svg = el('svg', { width, height, viewBox: `0 0 ${width} ${height}`, role: 'img', class: 'bore-svg',
+    'aria-label': t('drawingLabel', good.length, goodHoles.length, Number(total.toFixed(2))) });
   const x = (mm) => margin + mm * scale;
   const r = (d) => (d / 2) * scale * widen;
 

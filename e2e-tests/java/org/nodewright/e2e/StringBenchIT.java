@@ -168,6 +168,15 @@ class StringBenchIT extends StringPageTestBase {
         assertThat(num(atNode.get(2))).isEqualTo(-80.0);
         assertThat(num(atNode.get(0))).isGreaterThan(-80.0);
         assertThat(driver.findElement(By.id("near-nodes")).getText()).contains("3, 6, 9, 12");
+        // Pointing at L/3 on the node map names the modes resting there: every third one.
+        js("arguments[0].scrollIntoView({block: 'center'});", canvas);
+        Map<String, Object> probe = (Map<String, Object>) js("const c = Chart.getChart(arguments[0]);"
+                + "return {x: c.scales.x.getPixelForValue(arguments[1]), y: (c.chartArea.top + c.chartArea.bottom) / 2,"
+                + " w: arguments[0].clientWidth, h: arguments[0].clientHeight};", canvas, LENGTH_MM / 3);
+        new Actions(driver).moveToElement(canvas,
+                (int) Math.round(num(probe.get("x")) - num(probe.get("w")) / 2),
+                (int) Math.round(num(probe.get("y")) - num(probe.get("h")) / 2)).perform();
+        wait.until(d -> driver.findElement(By.id("node-probe")).getText().contains("modes 3, 6, 9, 12"));
         js("document.getElementById('partials-chart').scrollIntoView();");
         screenshot("string-bench-pickup-on-node");
     }

@@ -128,17 +128,39 @@ class TemplatesIT extends BrowserTestBase {
         wait.until(d -> String.valueOf(js("return document.getElementById('bore-image').getAttribute('src') || ''"))
                 .startsWith("blob:"));
 
+        // Open in the bore bench: saved as an air-column design and opened by the design bar's ?design= hook.
         driver.findElement(By.id("solve-open")).click();
-        wait.until(d -> d.getCurrentUrl().contains("/air-columns"));
+        wait.until(d -> d.getCurrentUrl().contains("/air-columns?design="));
+        String id = driver.getCurrentUrl().replaceAll(".*design=", "");
         @SuppressWarnings("unchecked")
-        Map<String, Object> handed = (Map<String, Object>) js(
-                "return JSON.parse(sessionStorage.getItem('nodewright.openAirColumn'))");
-        assertThat(handed).containsEntry("source", "templates");
+        Map<String, Object> design = (Map<String, Object>) ((JavascriptExecutor) driver).executeAsyncScript(
+                "const done = arguments[arguments.length - 1];"
+                        + "fetch('/api/v1/designs/' + arguments[0]).then(r => r.json()).then(done);", id);
         @SuppressWarnings("unchecked")
-        Map<String, Object> bore = (Map<String, Object>) handed.get("request");
-        assertThat((List<?>) bore.get("holes")).hasSize(6);
+        Map<String, Object> bore = (Map<String, Object>) design.get("parameters");
+        @SuppressWarnings("unchecked")
+        List<Map<String, Object>> holes = (List<Map<String, Object>>) bore.get("holes");
+        assertThat(holes).hasSize(6);
+        for (int i = 0; i < 6; i++) {
+            assertThat(((Number) holes.get(i).get("positionMm")).doubleValue())
+                    .isCloseTo(((Number) solved.get(i)).doubleValue(), within(0.006));
+        }
         assertThat((List<?>) bore.get("fingerings")).hasSize(7);
         screenshot("templates-open-in-bore-bench");
+    }
+
+    @Test
+    void compensationAndGaugePickerFillTheirTables() throws Exception {
+        driver.get(url("/templates"));
+        waitFor(By.id("comp-run")).click();
+        wait.until(d -> !d.findElements(By.cssSelector("#comp-rows tr")).isEmpty());
+        @SuppressWarnings("unchecked")
+        List<String> setbacks = (List<String>) js("return [...document.querySelectorAll('#comp-rows tr')].map(r => r.dataset.setback)");
+        assertThat(setbacks).hasSize(6).allSatisfy(v -> assertThat(Double.parseDouble(v)).isPositive());
+        assertThat(driver.findElement(By.id("comp-model")).getText()).contains("Varieschi");
+        driver.findElement(By.id("gauge-pick")).click();
+        wait.until(d -> d.findElements(By.cssSelector("#gauge-rows tr")).size() == 7);
+        screenshot("templates-compensation-and-gauges");
     }
 
     @Test

@@ -1,5 +1,7 @@
 package org.nodewright.bench;
 
+import java.lang.management.ManagementFactory;
+import java.lang.management.ThreadMXBean;
 import java.util.List;
 import java.util.concurrent.TimeUnit;
 import org.nodewright.physics.strings.EndCondition;
@@ -14,11 +16,14 @@ import org.nodewright.physics.strings.StringDesign;
 import org.openjdk.jmh.annotations.Benchmark;
 import org.openjdk.jmh.annotations.BenchmarkMode;
 import org.openjdk.jmh.annotations.Fork;
+import org.openjdk.jmh.annotations.Level;
 import org.openjdk.jmh.annotations.Measurement;
 import org.openjdk.jmh.annotations.Mode;
 import org.openjdk.jmh.annotations.OutputTimeUnit;
 import org.openjdk.jmh.annotations.Scope;
+import org.openjdk.jmh.annotations.Setup;
 import org.openjdk.jmh.annotations.State;
+import org.openjdk.jmh.annotations.TearDown;
 import org.openjdk.jmh.annotations.Warmup;
 
 /**
@@ -49,12 +54,38 @@ public class StringModesBenchmark {
     }
 
     @Benchmark
-    public StringAnalysis pinned24Modes() {
+    public StringAnalysis pinned24Modes(CpuClock clock) {
+        clock.ops++;
         return analyzer.analyze(pinned);
     }
 
     @Benchmark
-    public StringAnalysis clamped24Modes() {
+    public StringAnalysis clamped24Modes(CpuClock clock) {
+        clock.ops++;
         return analyzer.analyze(clamped);
+    }
+
+    /**
+     * JMH scores wall-clock time; on a shared, overloaded machine that includes time the thread
+     * spent waiting for a core. This prints, per measured iteration, the benchmark thread's own CPU
+     * time per operation (ThreadMXBean), as a second figure beside the score.
+     */
+    @State(Scope.Thread)
+    public static class CpuClock {
+        private final ThreadMXBean threads = ManagementFactory.getThreadMXBean();
+        long ops;
+        private long startNanos;
+
+        @Setup(Level.Iteration)
+        public void start() {
+            ops = 0;
+            startNanos = threads.getCurrentThreadCpuTime();
+        }
+
+        @TearDown(Level.Iteration)
+        public void stop() {
+            double perOp = (threads.getCurrentThreadCpuTime() - startNanos) / 1e3 / Math.max(ops, 1);
+            System.out.printf(java.util.Locale.ROOT, "  [thread CPU time %.1f us/op over %d ops]%n", perOp, ops);
+        }
     }
 }

@@ -1,6 +1,7 @@
 package org.nodewright.inverse;
 
 import io.swagger.v3.oas.annotations.Operation;
+import io.swagger.v3.oas.annotations.tags.Tag;
 import jakarta.validation.Valid;
 import java.net.URI;
 import java.util.List;
@@ -19,6 +20,7 @@ import org.springframework.web.bind.annotation.RestController;
 
 /** Tone-hole positions (and optionally diameters and foot) for target notes, solved as a polled job. */
 @RestController
+@Tag(name = "Inverse design")
 class ToneHoleSolveController {
 
     private final SolveJobs jobs;

@@ -1,6 +1,7 @@
 package org.nodewright.templates;
 
 import io.swagger.v3.oas.annotations.Operation;
+import io.swagger.v3.oas.annotations.tags.Tag;
 import jakarta.validation.Valid;
 import jakarta.validation.constraints.DecimalMax;
 import jakarta.validation.constraints.DecimalMin;
@@ -28,6 +29,7 @@ import org.springframework.web.bind.annotation.RestController;
 
 /** Saddle (and nut) compensation estimates per string of a set. */
 @RestController
+@Tag(name = "Templates")
 class CompensationController {
 
     static final String MODEL = "Fretting stretch plus bending stiffness, setbacks by least squares over the frets, "

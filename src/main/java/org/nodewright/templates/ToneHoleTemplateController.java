@@ -1,6 +1,7 @@
 package org.nodewright.templates;
 
 import io.swagger.v3.oas.annotations.Operation;
+import io.swagger.v3.oas.annotations.tags.Tag;
 import jakarta.validation.Valid;
 import jakarta.validation.constraints.Pattern;
 import org.nodewright.aircolumns.AirColumnRequest;
@@ -13,6 +14,7 @@ import org.springframework.web.bind.annotation.RestController;
 
 /** Tone-hole drilling templates at 1:1 along a bore, as SVG and tiled PDF. */
 @RestController
+@Tag(name = "Templates")
 class ToneHoleTemplateController {
 
     private static final String NAME = "[\\p{L}\\p{N} .,'()/+-]{1,60}";

@@ -9,7 +9,7 @@ import java.util.List;
  * n = 1, 2, 3 …, predicts each partial from the stiff-string law fitted to the partials matched so
  * far ({@link StiffStringLaw#lineFit}), and takes the strongest peak within a fifth of f1 of the
  * prediction; a partial with no peak there is missing (a node at the pluck point, for instance).
- * Without an expected f1 every strong peak, and its half and third, is tried as f1, and the trial
+ * Without an expected f1 the strongest and the lowest loud peaks, and their halves and thirds, are tried as f1, and the trial
  * that explains the most peaks while predicting the fewest missing ones wins (a harmonic sieve,
  * common practice; the penalty for a missing partial is half a matched one).
  */
@@ -26,6 +26,8 @@ public final class PartialMatcher {
     /** Trials: the strongest peaks, each also divided by 2 and 3 (fundamental weak or absent). */
     private static final int TRIAL_PEAKS = 12;
     private static final int TRIAL_DIVISORS = 3;
+    /** … and the lowest few loud peaks. */
+    private static final int LOWEST_TRIAL_PEAKS = 8;
     /** Above this many consecutive missing partials the series has ended. */
     private static final int MAX_CONSECUTIVE_MISSING = 6;
 
@@ -61,12 +63,10 @@ public final class PartialMatcher {
             }
             return walk(sorted, start, maxPartials, fMax).partials;
         }
-        List<SpectralPeak> byLevel = new ArrayList<>(sorted);
-        byLevel.sort(Comparator.comparingDouble(SpectralPeak::levelDb).reversed());
         Trial best = null;
-        for (int i = 0; i < Math.min(TRIAL_PEAKS, byLevel.size()); i++) {
+        for (SpectralPeak trialPeak : trialPeaks(sorted)) {
             for (int k = 1; k <= TRIAL_DIVISORS; k++) {
-                double f1 = byLevel.get(i).frequencyHz() / k;
+                double f1 = trialPeak.frequencyHz() / k;
                 Trial t = walk(sorted, f1, Integer.MAX_VALUE, fMax);
                 if (best == null || t.score > best.score + 1e-9
                         || (Math.abs(t.score - best.score) <= 1e-9 && t.levelSum > best.levelSum)) {
@@ -76,6 +76,30 @@ public final class PartialMatcher {
         }
         List<MatchedPartial> all = best.partials;
         return all.stream().filter(p -> p.n() <= maxPartials).toList();
+    }
+
+    /**
+     * Peaks to start trials from: the strongest, and the lowest of those within
+     * {@link #MAX_DROP_DB} of the strongest (when all partials are about equally loud the
+     * fundamental need not be among the strongest few).
+     */
+    private static List<SpectralPeak> trialPeaks(List<SpectralPeak> sorted) {
+        List<SpectralPeak> byLevel = new ArrayList<>(sorted);
+        byLevel.sort(Comparator.comparingDouble(SpectralPeak::levelDb).reversed());
+        java.util.LinkedHashSet<SpectralPeak> trials = new java.util.LinkedHashSet<>(
+                byLevel.subList(0, Math.min(TRIAL_PEAKS, byLevel.size())));
+        double floor = byLevel.get(0).levelDb() - MAX_DROP_DB;
+        int low = 0;
+        for (SpectralPeak p : sorted) {
+            if (low == LOWEST_TRIAL_PEAKS) {
+                break;
+            }
+            if (p.levelDb() >= floor) {
+                trials.add(p);
+                low++;
+            }
+        }
+        return List.copyOf(trials);
     }
 
     private record Trial(List<MatchedPartial> partials, double score, double levelSum) {

@@ -60,6 +60,17 @@ class PartialAnalyzerTest {
         assertThat(StiffStringLaw.cents(fit.f1Hz(), 196.0)).isCloseTo(0.0, within(0.1));
     }
 
+    // With every partial equally loud the fundamental is rarely among the strongest peaks, and the
+    // even partials alone form a stiff series of their own (2·f1, 4·B): the sieve must still pick f1.
+    @ParameterizedTest(name = "flat spectrum, f1 {0} Hz, B {1}")
+    @CsvSource({"130.81, 1e-5", "261.63, 1e-4", "523.25, 1e-3"})
+    void findsTheFundamentalOfAFlatSpectrum(double f1, double b) {
+        SyntheticPluck s = new SyntheticPluck().f1(f1).b(b).seconds(3.0).flat().noise(0);
+        PartialFit fit = PartialAnalyzer.analyze(s.recording(), null, 40);
+        assertThat(StiffStringLaw.cents(fit.f1Hz(), f1)).isCloseTo(0.0, within(0.1));
+        assertThat(fit.inharmonicityB()).isCloseTo(b, within(0.02 * b));
+    }
+
     @Test
     void leadingSilenceBeforeThePluckDoesNotMatter() {
         SyntheticPluck s = new SyntheticPluck().f1(110.0).b(1e-4).seconds(2.0).silenceFirst(0.7);

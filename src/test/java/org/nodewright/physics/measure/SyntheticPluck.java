@@ -25,6 +25,8 @@ final class SyntheticPluck {
     double noiseRms = 1e-4;
     double leadingSilenceSeconds = 0.0;
     long seed = 7;
+    /** Every partial starts equally loud (a flat spectrum) instead of the pluck's sin(nπp)/n². */
+    boolean flat = false;
 
     SyntheticPluck f1(double hz) { f1Hz = hz; return this; }
     SyntheticPluck b(double value) { b = value; return this; }
@@ -36,6 +38,7 @@ final class SyntheticPluck {
     SyntheticPluck silenceFirst(double s) { leadingSilenceSeconds = s; return this; }
     SyntheticPluck decay(double tau) { tau1 = tau; return this; }
     SyntheticPluck seed(long s) { seed = s; return this; }
+    SyntheticPluck flat() { flat = true; return this; }
 
     double partialHz(int n) {
         return n * f1Hz * Math.sqrt(1 + b * n * n);
@@ -52,7 +55,7 @@ final class SyntheticPluck {
             if (f >= sampleRateHz / 2 * 0.95) {
                 break;
             }
-            double amp = Math.sin(n * Math.PI * pluckFraction) / (n * (double) n);
+            double amp = flat ? 1.0 : Math.sin(n * Math.PI * pluckFraction) / (n * (double) n);
             double tau = tau1 / (1 + 0.05 * n);
             double phase = rnd.nextDouble() * 2 * Math.PI;
             double w = 2 * Math.PI * f / sampleRateHz;
