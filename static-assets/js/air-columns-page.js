@@ -4,7 +4,7 @@
 // compares frequencies (notes, cents, series).
 import { clearFieldErrors, postJson, showFieldErrors } from './common/api.js';
 import { fmt, fromMm } from './common/units.js';
-import { BoreEditor, parseNumber, showLength } from './air/editor.js';
+import { BoreEditor, parseNumber } from './air/editor.js';
 import { drawBore } from './air/drawing.js';
 import { drawImpedance, drawProfile } from './air/charts.js';
 import { FingeringTable } from './air/fingerings.js';
@@ -24,12 +24,17 @@ const editor = new BoreEditor({
   onChange: () => changed(),
   onStructure: (holeOrder) => fingerings.holesChanged(editor.holes.length, holeOrder),
 });
-const fingerings = new FingeringTable({ body: $('fingering-rows'), onChange: () => changed() });
+const fingerings = new FingeringTable({
+  body: $('fingering-rows'),
+  onChange: () => changed(),
+  onApply: (closedHoles) => editor.setClosedHoles(closedHoles),
+});
 
 // ---- the request ------------------------------------------------------------------------
 
 const NUMBER_FIELDS = [
-  ['temperature', 'temperatureC'], ['humidity', 'relativeHumidityPct'], ['f-min', 'fMinHz'], ['f-max', 'fMaxHz'], ['points', 'points'],
+  ['temperature', 'temperatureC'], ['humidity', 'relativeHumidityPct'], ['f-min', 'fMinHz'], ['f-max', 'fMaxHz'],
+  ['points', 'points'], ['reference-a4', 'referenceA4Hz'],
 ];
 
 const a4 = () => {
@@ -37,7 +42,10 @@ const a4 = () => {
   return v > 0 ? v : 440;
 };
 
-/** The analyze request the editor describes, and local problems (text that is not a number). */
+/**
+ * The analyze request the editor describes (fingerings included), and local problems: text that
+ * is not a number is named on its own field here; everything else the server judges.
+ */
 function buildRequest() {
   const { segments, holes, problems } = editor.read();
   const request = { segments, inputEnd: $('input-end').value, outputEnd: $('output-end').value, holes };
@@ -48,18 +56,8 @@ function buildRequest() {
   }
   request.losses = $('losses').checked;
   if (!segments.length) problems.push({ field: 'segments', message: t('emptyBore') });
-  const f = fingerings.read(a4());
-  problems.push(...f.problems);
-  request.fingerings = f.rows.map((r) => ({
-    name: r.name, closedHoles: r.closedHoles, target: r.target, targetHz: r.targetHz, register: r.register,
-  }));
+  request.fingerings = fingerings.read();
   return { request, problems };
-}
-
-/** What the server is sent: the contract's fields (the fingerings are predicted separately). */
-function serverBody(request) {
-  const { fingerings: _unused, ...body } = request;
-  return body;
 }
 
 // ---- analysis ---------------------------------------------------------------------------
@@ -86,7 +84,7 @@ async function analyze() {
   $('analysis-summary').textContent = t('analyzing');
   let res;
   try {
-    res = await postJson(ANALYZE_URL, serverBody(request));
+    res = await postJson(ANALYZE_URL, request);
   } catch (e) {
     res = { ok: false, problem: { detail: String(e) } };
   }
@@ -105,7 +103,7 @@ async function analyze() {
   showResults();
   root.dataset.analyzed = String(seq);
   document.dispatchEvent(new CustomEvent('nodewright:air-analyzed', { detail: { request, response: res.data } }));
-  predictFingerings(request, res.data, seq);
+  showFingerings(request, res.data);
 }
 
 /** Inline errors on the offending rows and fields; the rows stay as the user entered them. */
@@ -128,9 +126,11 @@ function showResults() {
   const inputClosed = request.inputEnd === 'closed';
   $('analysis-summary').textContent = [
     t('speedOfSound', fmt(response.speedOfSoundMps, 2)),
+    ...(response.air ? [t('airDensity', fmt(response.air.densityKgPerM3, 4))] : []),
     t('resonanceCount', res.length, fmt(request.fMinHz, 0), fmt(request.fMaxHz, 0)),
     inputClosed ? t('maxima') : t('minima'),
   ].join(' · ');
+  $('air-warnings').replaceChildren(...(response.warnings ?? []).map((w) => Object.assign(document.createElement('li'), { textContent: w })));
   drawImpedance($('impedance-chart'), response.impedance, res, { showPhase: $('show-phase').checked, inputClosed });
   fillResonanceTable();
   fillProfileChoices();
@@ -139,7 +139,7 @@ function showResults() {
 
 function seriesChoice() {
   const s = $('series').value;
-  return s === 'auto' ? suggestedSeries(state.request) : s;
+  return s === 'auto' ? state.response?.series ?? suggestedSeries(state.request) : s;
 }
 
 function fillResonanceTable() {
@@ -154,21 +154,24 @@ function fillResonanceTable() {
     body.replaceChildren(tr);
     return;
   }
-  const align = alignment(res.map((r) => r.frequencyHz), series);
+  const fromServer = $('series').value === 'auto' && res.every((r) => Number.isFinite(r.centsFromSeries));
+  const align = fromServer
+    ? res.map((r) => ({ ratio: r.ratioToFirst, member: r.seriesMember, centsFromSeries: r.centsFromSeries }))
+    : alignment(res.map((r) => r.frequencyHz), series);
   const unit = $('units').value;
   body.replaceChildren(...res.map((r, i) => {
-    const note = nearestNote(r.frequencyHz, a4());
+    const note = r.note ?? nearestNote(r.frequencyHz, a4());
     const cells = [
-      r.n, fmt(r.frequencyHz, 2), fmt(r.q, 1), note.name, signedCents(note.centsOff),
+      r.n, fmt(r.frequencyHz, 2), r.q === null || r.q === undefined ? '—' : fmt(r.q, 1), note.name, signedCents(note.centsOff),
       fmt(align[i].ratio, 3), `${align[i].member}·f1`, signedCents(align[i].centsFromSeries),
-      (r.pressureNodesMm ?? []).map((x) => showLength(x, unit)).join(', '),
+      (r.pressureNodesMm ?? []).map((x) => fmt(fromMm(x, unit), unit === 'inch' ? 2 : 1)).join(', '),
     ];
     const tr = document.createElement('tr');
     tr.dataset.n = String(r.n);
     cells.forEach((c, k) => {
       const td = document.createElement('td');
       td.textContent = String(c);
-      if (k === 7) td.className = Math.abs(align[i].centsFromSeries) <= 10 ? 'aligned' : 'misaligned';
+      if (k === 7) td.className = Math.abs(align[i].centsFromSeries) <= tolerance() ? 'aligned' : 'misaligned';
       if (k === 8) td.className = 'nodes';
       tr.append(td);
     });
@@ -190,7 +193,7 @@ function fillProfileChoices() {
 function profileOf(i) {
   const r = state.response?.resonances?.[i];
   if (!r) return null;
-  const p = pick(r, 'profile', 'standingWave') ?? state.response?.profiles?.[i];
+  const p = pick(r, 'profile', 'standingWave') ?? (state.response?.profiles ?? []).find((q) => q.n === r.n);
   if (!p) return null;
   return {
     positionMm: pick(p, 'positionMm', 'positionsMm', 'xMm') ?? [],
@@ -218,29 +221,18 @@ function showProfile() {
 
 // ---- fingerings -------------------------------------------------------------------------
 
-/** Each fingering's sounding pitch: the resonance of its register with only its holes closed. */
-async function predictFingerings(request, response, seq) {
-  const rows = request.fingerings;
-  if (!rows.length) {
-    fingerings.show([], tolerance(), a4());
-    return;
-  }
-  const fromServer = Array.isArray(response.fingerings) ? response.fingerings : null;
-  let predictions;
-  if (fromServer) {
-    predictions = fromServer.map((f) => ({ frequencyHz: pick(f, 'predictedHz', 'frequencyHz') ?? null, centsFromTarget: pick(f, 'centsFromTarget', 'cents') }));
-  } else {
-    predictions = await Promise.all(rows.map(async (f) => {
-      const body = serverBody({ ...request, holes: request.holes.map((h, k) => ({ ...h, open: !f.closedHoles.includes(k + 1) })) });
-      const res = await postJson(ANALYZE_URL, body).catch(() => ({ ok: false }));
-      const r = res.ok ? res.data.resonances?.[f.register - 1] : null;
-      return r ? { frequencyHz: r.frequencyHz } : null;
-    }));
-  }
-  if (seq !== state.seq) return;
-  state.predictions = predictions;
-  fingerings.show(predictions, tolerance(), a4());
-  root.dataset.fingeringsReady = String(seq);
+/**
+ * Each fingering's sounding pitch: the server's prediction (the resonance of the wanted register
+ * with only that fingering's holes closed), shown against the tolerance.
+ */
+function showFingerings(request, response) {
+  const items = Array.isArray(response.fingerings) ? response.fingerings : [];
+  state.predictions = request.fingerings.map((_, i) => {
+    const f = items.find((x) => x.index === i) ?? items[i];
+    return f ? { frequencyHz: f.predictedHz ?? null, centsFromTarget: f.centsFromTarget, targetHz: f.targetHz, note: f.note } : null;
+  });
+  fingerings.show(state.predictions, tolerance(), a4());
+  root.dataset.fingeringsReady = root.dataset.analyzed;
 }
 
 const tolerance = () => {
@@ -256,6 +248,7 @@ function drawCurrentBore() {
   const current = state.response && !root.classList.contains('stale');
   drawBore($('bore-drawing'), segments, holes, {
     widen: Number($('drawing-widen').value),
+    unit: $('units').value,
     inputEnd: $('input-end').value,
     outputEnd: $('output-end').value,
     nodesMm: current ? state.response.resonances?.[i]?.pressureNodesMm ?? [] : [],
@@ -275,6 +268,7 @@ function setParameters(p) {
   $('f-min').value = val(p.fMinHz, '20');
   $('f-max').value = val(p.fMaxHz, '3000');
   $('points').value = val(p.points, '2000');
+  $('reference-a4').value = val(p.referenceA4Hz, '440');
   $('losses').checked = p.losses !== false;
   fingerings.load(p.fingerings ?? []);
   fingerings.holesChanged(editor.holes.length, null);
@@ -302,6 +296,7 @@ $('preset-select').addEventListener('change', loadPreset);
 $('units').addEventListener('change', () => {
   const unit = $('units').value;
   editor.setUnit(unit);
+  drawCurrentBore();
   document.querySelectorAll('.unit-label').forEach((el) => { el.textContent = unit === 'inch' ? t('unitInch') : t('unitMm'); });
   if (state.response) { fillResonanceTable(); showProfile(); }
 });
@@ -312,8 +307,11 @@ $('drawing-widen').addEventListener('change', drawCurrentBore);
 $('show-phase').addEventListener('change', () => { if (state.response) showResults(); });
 $('series').addEventListener('change', () => { if (state.response) fillResonanceTable(); });
 $('profile-resonance').addEventListener('change', showProfile);
-$('cents-tolerance').addEventListener('input', () => fingerings.show(state.predictions, tolerance(), a4()));
-$('reference-a4').addEventListener('input', () => { if (state.response) { fillResonanceTable(); fingerings.show(state.predictions, tolerance(), a4()); } });
+$('cents-tolerance').addEventListener('input', () => {
+  fingerings.show(state.predictions, tolerance(), a4());
+  if (state.response) fillResonanceTable();
+});
+$('reference-a4').addEventListener('input', changed);
 window.addEventListener('resize', () => drawCurrentBore());
 
 setParameters(preset('six-hole-whistle'));

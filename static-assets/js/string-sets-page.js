@@ -18,9 +18,9 @@ const HOUSE_SET = [
   { target: 'E4', material: 'plain-steel', diameterMm: 0.254 },
   { target: 'B3', material: 'plain-steel', diameterMm: 0.330 },
   { target: 'G3', material: 'plain-steel', diameterMm: 0.432 },
-  { target: 'D3', material: 'plain-steel', diameterMm: 0.380, wrapDiameterMm: 0.230 },
-  { target: 'A2', material: 'plain-steel', diameterMm: 0.430, wrapDiameterMm: 0.320 },
-  { target: 'E2', material: 'plain-steel', diameterMm: 0.500, wrapDiameterMm: 0.400 },
+  { target: 'D3', material: 'plain-steel', diameterMm: 0.300, wrapDiameterMm: 0.160 },
+  { target: 'A2', material: 'plain-steel', diameterMm: 0.360, wrapDiameterMm: 0.235 },
+  { target: 'E2', material: 'plain-steel', diameterMm: 0.430, wrapDiameterMm: 0.325 },
 ];
 
 function rows() {
@@ -58,9 +58,13 @@ function addRow(spec) {
   const material = materialSelect('material');
   if (spec.material) material.value = spec.material;
   cell(material);
-  const gauge = textInput('gauge', 'length');
-  if (spec.diameterMm != null) io.writeLength(gauge, spec.diameterMm);
-  cell(gauge, 'narrow');
+  const lengthCell = (cls, mm) => {
+    const input = textInput(cls, 'length');
+    if (typeof mm === 'number') io.writeLength(input, mm);
+    else if (mm != null) input.value = String(mm);   // shown as it came, for the server to judge
+    cell(input, 'narrow');
+  };
+  lengthCell('gauge', spec.diameterMm);
   const wound = document.createElement('input');
   wound.type = 'checkbox';
   wound.className = 'wound';
@@ -69,12 +73,8 @@ function addRow(spec) {
   const wrap = materialSelect('wrap-material');
   wrap.value = spec.wrapMaterial || defaultWrap(state.materials);
   cell(wrap);
-  const wrapGauge = textInput('wrap-gauge', 'length');
-  if (spec.wrapDiameterMm != null) io.writeLength(wrapGauge, spec.wrapDiameterMm);
-  cell(wrapGauge, 'narrow');
-  const own = textInput('own-length', 'length');
-  if (spec.lengthMm != null) io.writeLength(own, spec.lengthMm);
-  cell(own, 'narrow');
+  lengthCell('wrap-gauge', spec.wrapDiameterMm);
+  lengthCell('own-length', spec.lengthMm);
   const remove = document.createElement('button');
   remove.type = 'button';
   remove.className = 'secondary remove-string';
@@ -208,6 +208,7 @@ async function analyze() {
   $('form-problem').textContent = '';
   state.last = { request, response: result.data };
   render(request, result.data);
+  form.dataset.analyses = String(Number(form.dataset.analyses || 0) + 1);   // lets tests and neighbours see a fresh answer
 }
 
 async function start() {

@@ -11,6 +11,7 @@ const TEXT = Object.fromEntries([...document.querySelectorAll('#page-text [data-
 
 const SPECTRUM_FLOOR_DB = -80;      // lowest level drawn on the spectrum chart
 const SHAPE_HALF_HEIGHT = 0.42;     // each mode shape is drawn ±0.42 around its row of the ladder
+const DEFAULT_WRAP_MM = 0.25;       // a starting wrap wire when a plain string is switched to wound
 const io = unitInputs();
 const state = { seq: 0, last: null, timer: null };
 const { readLength, readForce, writeLength, writeForce } = io;
@@ -59,33 +60,45 @@ function buildRequest() {
   return request;
 }
 
+/** A target frequency as the user would write it: its note name when it is one exactly, else Hz. */
+function pitchText(hz) {
+  if (typeof hz !== 'number') return String(hz);
+  const a4 = readNumber($('referenceA4Hz'));
+  const note = nearestNote(hz, typeof a4 === 'number' && a4 > 0 ? a4 : 440);
+  return Math.abs(note.cents) < 1e-6 ? note.name : String(hz);
+}
+
 function setIfPresent(p, key, apply) {
   if (Object.prototype.hasOwnProperty.call(p, key) && p[key] !== undefined) apply(p[key]);
 }
 
 /** Fills the form from a request body (all of it, or only the keys a partial one carries). */
 function fillForm(p, partial) {
-  const clearable = (input, value, write) => {
-    if (value === null) { input.value = ''; delete input.dataset.canonical; } else write(value);
+  // Numbers go in through the unit converters; anything else is shown as it came, for the server to judge.
+  const put = (input, v, write) => {
+    if (typeof v === 'number') { write(input, v); return; }
+    input.value = v == null ? '' : String(v);
+    delete input.dataset.canonical;
   };
-  setIfPresent(p, 'lengthMm', (v) => writeLength($('lengthMm'), v));
+  setIfPresent(p, 'referenceA4Hz', (v) => { $('referenceA4Hz').value = v === null ? '440' : String(v); });
+  setIfPresent(p, 'lengthMm', (v) => put($('lengthMm'), v, writeLength));
   setIfPresent(p, 'targetHz', (v) => {
     if (v === null) return;
-    $('targetHz').value = String(v);
+    $('targetHz').value = pitchText(v);
     form.querySelector('input[name="drive"][value="pitch"]').checked = true;
   });
   setIfPresent(p, 'tensionN', (v) => {
     if (v === null) return;
-    writeForce($('tensionN'), v);
+    put($('tensionN'), v, writeForce);
     if (!partial || p.targetHz == null) form.querySelector('input[name="drive"][value="tension"]').checked = true;
   });
   setIfPresent(p, 'material', (v) => { if (v !== null) $('material').value = v; });
-  setIfPresent(p, 'diameterMm', (v) => clearable($('diameterMm'), v, (x) => writeLength($('diameterMm'), x)));
+  setIfPresent(p, 'diameterMm', (v) => put($('diameterMm'), v, writeLength));
   if (!partial || 'wrapMaterial' in p || 'wrapDiameterMm' in p) {
     const isWound = p.wrapMaterial != null || p.wrapDiameterMm != null;
     $('construction').value = isWound ? 'wound' : 'plain';
     if (p.wrapMaterial != null) $('wrapMaterial').value = p.wrapMaterial;
-    if (p.wrapDiameterMm != null) writeLength($('wrapDiameterMm'), p.wrapDiameterMm);
+    if (p.wrapDiameterMm != null) put($('wrapDiameterMm'), p.wrapDiameterMm, writeLength);
   }
   const overrides = (key, input, factor) => {
     if (partial && !(key in p)) return;
@@ -99,17 +112,17 @@ function fillForm(p, partial) {
   overrides('linearDensityKgPerM', $('linearDensity'), 1000);   // kg/m → g/m
   overrides('youngsModulusPa', $('youngsModulus'), 1e-9);       // Pa → GPa
   setIfPresent(p, 'endCondition', (v) => { if (v !== null) $('endCondition').value = v; });
-  setIfPresent(p, 'stiffness', (v) => { $('stiffness').checked = v !== false; });
+  setIfPresent(p, 'stiffness', (v) => { $('stiffness').checked = v === true; });   // the server's default is off
   setIfPresent(p, 'modeCount', (v) => { if (v !== null) $('modeCount').value = String(v); });
-  setIfPresent(p, 'referenceA4Hz', (v) => { $('referenceA4Hz').value = v === null ? '440' : String(v); });
   setIfPresent(p, 'pluck', (v) => {
     if (!v) return;
     if (v.kind) $('pluckKind').value = v.kind;
-    if (v.positionMm != null) writeLength($('pluckPosition'), v.positionMm);
+    if (v.positionMm != null) put($('pluckPosition'), v.positionMm, writeLength);
   });
   setIfPresent(p, 'pickups', (list) => {
     $('pickup-list').replaceChildren();
-    (list || []).forEach((pu) => addPickupRow(pu.positionMm, pu.apertureMm ?? 0));
+    (list || []).filter((pu) => pu && typeof pu.positionMm === 'number')
+      .forEach((pu) => addPickupRow(pu.positionMm, typeof pu.apertureMm === 'number' ? pu.apertureMm : 0));
   });
   showConstruction();
 }
@@ -230,6 +243,7 @@ async function analyze() {
   if (mine !== state.seq) return;   // a newer request is on its way; drop this answer
   $('busy').hidden = true;
   if (!result.ok) {
+    document.querySelectorAll('.bench-results, #modes-panel').forEach((el) => el.classList.add('stale'));
     const unclaimed = showFieldErrors(form, result.problem);
     const detail = result.problem && result.problem.detail ? ` ${result.problem.detail}` : '';
     $('form-problem').textContent = `${TEXT.fixFields}${detail}${unclaimed.length ? ` ${unclaimed.join('; ')}` : ''}`;
@@ -237,6 +251,7 @@ async function analyze() {
   }
   clearFieldErrors(form);
   $('form-problem').textContent = '';
+  document.querySelectorAll('.bench-results, #modes-panel').forEach((el) => el.classList.remove('stale'));
   state.last = { request, response: result.data };
   render(request, result.data);
   document.dispatchEvent(new CustomEvent('nodewright:string-analyzed', { detail: { request, response: result.data } }));
@@ -278,6 +293,24 @@ function interpolate(samples, xMm) {
     }
   }
   return samples.length ? samples[samples.length - 1].y : 0;
+}
+
+/**
+ * Pluck and pickups where the form has them now: while a marker is dragged, an answer to an
+ * earlier request must not pull the line back to where it was.
+ */
+function liveMarkers(request) {
+  const live = buildRequest();
+  const ok = (v) => typeof v === 'number' && Number.isFinite(v);
+  const pluck = ok(live.pluck.positionMm) ? live.pluck : request.pluck;
+  const pickups = live.pickups.length === request.pickups.length && live.pickups.every((p) => ok(p.positionMm) && ok(p.apertureMm))
+    ? live.pickups : request.pickups;
+  return { pluck, pickups };
+}
+
+/** Gives a chart with one row per mode room for every row (Chart.js follows its box's size). */
+function fitHeight(canvasId, minPx, perModePx, count) {
+  $(canvasId).parentElement.style.height = `${Math.max(minPx, perModePx * count + 90)}px`;
 }
 
 /** One tick per mode row (1..count), whatever the axis padding. */
@@ -328,7 +361,7 @@ function drawModeShapes(request, response) {
   datasets.push({ kind: 'antinodes', label: TEXT.antinodes, data: antinodes, showLine: false, pointStyle: 'triangle', pointRadius: 4, backgroundColor: '#fbf8f1', borderColor: '#a86400', borderWidth: 1.5 });
   const options = baseOptions({});
   options.plugins.legend.labels.filter = (item, data) => data.datasets[item.datasetIndex].kind !== 'mode';
-  options.plugins.annotation.annotations = markerAnnotations(request);
+  options.plugins.annotation.annotations = markerAnnotations(liveMarkers(request));
   options.plugins.tooltip = { callbacks: { label: (ctx) => `${ctx.dataset.label} · ${ctx.parsed.x.toFixed(2)} ${io.units.length}` } };
   options.scales.x = lengthAxis(lengthMm);
   options.scales.y = {
@@ -336,6 +369,7 @@ function drawModeShapes(request, response) {
     afterBuildTicks: (axis) => { axis.ticks = modeTicks(count); },
     grid: { color: 'rgba(0,0,0,0.06)' },
   };
+  fitHeight('mode-shapes-chart', 360, 40, count);
   drawChart($('mode-shapes-chart'), { type: 'scatter', data: { datasets }, options });
 }
 
@@ -347,13 +381,14 @@ function drawNodeMap(request, response) {
     pointRadius: 4, pointStyle: 'circle', backgroundColor: colour(mode.n - 1), borderColor: colour(mode.n - 1), showLine: false,
   }));
   const options = baseOptions({ legend: false });
-  options.plugins.annotation.annotations = markerAnnotations(request);
+  options.plugins.annotation.annotations = markerAnnotations(liveMarkers(request));
   options.plugins.tooltip = { callbacks: { label: (ctx) => `${TEXT.mode} ${ctx.parsed.y} · ${TEXT.nodes} ${ctx.parsed.x.toFixed(2)} ${io.units.length}` } };
   options.scales.x = lengthAxis(request.lengthMm);
   options.scales.y = {
     reverse: true, min: 0.5, max: count + 0.5, title: { display: true, text: TEXT.modeNumber },
     afterBuildTicks: (axis) => { axis.ticks = modeTicks(count); },
   };
+  fitHeight('node-map-chart', 300, 18, count);
   drawChart($('node-map-chart'), { type: 'scatter', data: { datasets }, options });
 }
 
@@ -404,6 +439,13 @@ function drawSpectrum(response) {
   drawChart($('spectrum-chart'), { type: 'bar', data: { labels: response.modes.map((m) => String(m.n)), datasets }, options });
 }
 
+/** A signed figure without a "-0.0" for values that round to zero. */
+function signed(value, digits) {
+  const text = Math.abs(value).toFixed(digits);
+  if (Number(text) === 0) return `±${text}`;
+  return `${value > 0 ? '+' : '−'}${text}`;
+}
+
 function drawSummary(request, response) {
   const a4 = typeof request.referenceA4Hz === 'number' ? request.referenceA4Hz : 440;
   const note = response.note || nearestNote(response.fundamentalHz, a4);
@@ -411,7 +453,7 @@ function drawSummary(request, response) {
   const rows = [
     [TEXT.tension, `${fromNewton(response.tensionN, io.units.force).toFixed(io.units.force === "N" ? 2 : 3)} ${io.units.force}`],
     [TEXT.fundamental, `${response.fundamentalHz.toFixed(3)} Hz`],
-    [TEXT.note, `${note.name} ${(note.centsOff ?? note.cents) >= 0 ? '+' : ''}${(note.centsOff ?? note.cents).toFixed(1)} ¢`],
+    [TEXT.note, `${note.name} ${signed(note.centsOff ?? note.cents, 1)} ¢`],
     [TEXT.linearDensity, `${(response.linearDensityKgPerM * 1000).toFixed(4)} g/m`],
     [TEXT.waveSpeed, `${response.waveSpeedMps.toFixed(1)} m/s`],
     [TEXT.inharmonicity, response.inharmonicityB.toExponential(3)],
@@ -446,8 +488,8 @@ function drawTable(request, response) {
     const note = nearestNote(m.frequencyHz, a4);
     const c = cents(m);
     const cells = [
-      String(m.n), m.frequencyHz.toFixed(3), m.harmonicHz.toFixed(3), `${c >= 0 ? '+' : ''}${c.toFixed(2)}`,
-      `${note.name} ${note.cents >= 0 ? '+' : ''}${note.cents.toFixed(1)}`,
+      String(m.n), m.frequencyHz.toFixed(3), m.harmonicHz.toFixed(3), signed(c, 2),
+      `${note.name} ${signed(note.cents, 1)}`,
       m.nodesMm.map(fmtLen).join(', '),
       (m.nodesFromBridgeMm || [...m.nodesMm].reverse().map((x) => length - x)).map(fmtLen).join(', '),
       m.antinodesMm.map(fmtLen).join(', '),
@@ -477,6 +519,22 @@ function drawNearNodes(request, response) {
     li.textContent = hits.length ? `${place.name} ${TEXT.nearNodes.replace('{0}', tol)} ${hits.join(', ')}` : `${place.name} ${TEXT.nearNone}`;
     ul.append(li);
   }
+}
+
+/** Under the pointer on the node map: which modes have a node within a few mm of that point. */
+function probeNodes(event) {
+  const chart = Chart.getChart($('node-map-chart'));
+  if (!chart || !state.last) return;
+  const area = chart.chartArea;
+  if (event.offsetX < area.left || event.offsetX > area.right) { $('node-probe').textContent = ''; return; }
+  const { request, response } = state.last;
+  const xMm = io.lengthIn(chart.scales.x.getValueForPixel(event.offsetX));
+  const tol = Math.max(2, request.lengthMm / 250);   // mm: about a fingertip, or 0.4 % of a long string
+  const hits = response.modes.filter((m) => m.nodesMm.some((x) => Math.abs(x - xMm) <= tol)).map((m) => m.n);
+  const where = `${fmtLen(xMm)} ${io.units.length}`;
+  $('node-probe').textContent = hits.length
+    ? TEXT.probe.replace('{0}', where).replace('{1}', hits.join(', '))
+    : TEXT.probeNone.replace('{0}', where);
 }
 
 function render(request, response) {
@@ -526,6 +584,7 @@ function wire() {
     if (t.type === 'range') return;
     showConstruction();
     if (t.id === 'pluckKind') buildSliders();
+    if (t.id === 'construction' && wound() && $('wrapDiameterMm').value.trim() === '') writeLength($('wrapDiameterMm'), DEFAULT_WRAP_MM);
     if (t.id === 'lengthMm') syncSliders();
     analyzeSoon(0);
   });
@@ -539,6 +598,7 @@ function wire() {
   for (const canvasId of ['node-map-chart', 'mode-shapes-chart']) {
     enableLineDrag($(canvasId), (id, x) => moveMarker(id, toMm(x, io.units.length), true));
   }
+  $('node-map-chart').addEventListener('pointermove', probeNodes);
   document.addEventListener('nodewright:apply-string-parameters', (e) => {
     if (!e.detail || typeof e.detail !== 'object') return;
     fillForm(e.detail, true);

@@ -11,7 +11,7 @@ export const OPEN_KEY = 'nodewright.openAirColumn';
 export const FROM_KEY = 'nodewright.boreForTemplates';
 
 const POLL_MS = 200;
-const state = { job: null, result: null, timer: null, urls: {} };
+const state = { job: null, result: null, timer: null, urls: {}, limits: {} };
 
 // ---- texts -------------------------------------------------------------------------------
 const texts = new Map();
@@ -133,6 +133,67 @@ fretForm.addEventListener('submit', (e) => { e.preventDefault(); fretTemplate('p
 $('fret-svg').addEventListener('click', () => fretTemplate('svg'));
 $('fret-pdf').addEventListener('click', () => fretTemplate('pdf'));
 
+// ---- saddle compensation -----------------------------------------------------------------
+const compForm = $('comp-form');
+$('comp-strings').value = ['E4, nylon, 0.71', 'B3, nylon, 0.82', 'G3, nylon, 1.03', 'D3, nylon, 0.38, copper, 0.16',
+  'A2, nylon, 0.38, copper, 0.22', 'E2, nylon, 0.40, copper, 0.29'].join('\n');
+
+compForm.addEventListener('submit', async (e) => {
+  e.preventDefault();
+  clearFieldErrors(compForm);
+  const problems = [];
+  const field = (id, name) => {
+    const v = num($(id).value);
+    if (!Number.isFinite(v)) problems.push({ field: name, message: t('notNumber') });
+    return Number.isFinite(v) ? v : null;
+  };
+  const request = {
+    lengthMm: field('comp-scale', 'lengthMm'), actionAt12thMm: field('comp-action', 'actionAt12thMm'),
+    nutHeightMm: field('comp-nut', 'nutHeightMm'), frets: field('comp-frets', 'frets'),
+    compensateNut: $('comp-both').checked, strings: [],
+  };
+  $('comp-strings').value.split('\n').forEach((line, i) => {
+    if (!line.trim()) return;
+    const p = line.split(',').map((x) => x.trim());
+    const d = num(p[2] ?? '');
+    const wd = num(p[4] ?? '');
+    if ((p.length !== 3 && p.length !== 5) || !Number.isFinite(d) || (p.length === 5 && !Number.isFinite(wd))) {
+      problems.push({ field: 'strings', message: t('badLine', i + 1) });
+      return;
+    }
+    const hz = num(p[0]);
+    request.strings.push({
+      ...(Number.isFinite(hz) ? { targetHz: hz } : { note: p[0] }), material: p[1], diameterMm: d,
+      ...(p.length === 5 ? { wrapMaterial: p[3], wrapDiameterMm: wd } : {}),
+    });
+  });
+  if (problems.length) {
+    showProblem(compForm, $('comp-message'), { errors: problems });
+    return;
+  }
+  const answer = await postJson('/api/v1/templates/compensation', request);
+  if (!answer.ok) {
+    showProblem(compForm, $('comp-message'), answer.problem);
+    return;
+  }
+  say($('comp-message'), '');
+  const rows = $('comp-rows');
+  rows.replaceChildren();
+  answer.data.strings.forEach((s, i) => {
+    const tr = document.createElement('tr');
+    tr.dataset.setback = s.saddleSetbackMm;
+    [String(i + 1), fmt(s.tensionN, 1), fmt(s.saddleSetbackMm, 2), fmt(s.nutSetbackMm, 2),
+      s.uncompensatedCentsAt12th === null ? '' : fmt(s.uncompensatedCentsAt12th, 1), fmt(s.worstCompensatedCents, 2)]
+      .forEach((text) => { const td = document.createElement('td'); td.textContent = text; tr.appendChild(td); });
+    rows.appendChild(tr);
+  });
+  $('comp-table').hidden = false;
+  $('comp-model').textContent = answer.data.model;
+  const list = $('comp-assumptions');
+  list.replaceChildren();
+  answer.data.assumptions.forEach((a) => { const li = document.createElement('li'); li.textContent = a; list.appendChild(li); });
+});
+
 // ---- gauge picker ------------------------------------------------------------------------
 const gaugeForm = $('gauge-form');
 $('gauge-strings').value = ['E4, 72, plain-steel', 'B3, 68, plain-steel', 'G3, 70, plain-steel',
@@ -217,10 +278,12 @@ function readBore() {
   }
 }
 
+/** Fingerings as text lines; holes shown from 1 (the API counts closedHoles from 0). */
 function fingeringLines(fingerings) {
-  return fingerings.map((f) => `${f.name}, ${f.target ?? f.targetHz}, ${(f.closedHoles || []).join(' ')}`).join('\n');
+  return fingerings.map((f) => `${f.name}, ${f.targetNote ?? f.targetHz}, ${(f.closedHoles || []).map((h) => h + 1).join(' ')}`).join('\n');
 }
 
+/** The fingering lines as the API's fingerings (closedHoles from 0). */
 function readFingerings() {
   const rows = [];
   const problems = [];
@@ -228,12 +291,15 @@ function readFingerings() {
     if (!line.trim()) return;
     const parts = line.split(',').map((s) => s.trim());
     const closed = (parts[2] ?? '').split(/\s+/).filter(Boolean).map(Number);
-    if (parts.length < 2 || !parts[0] || !parts[1] || closed.some((n) => !Number.isInteger(n))) {
+    if (parts.length < 2 || !parts[0] || !parts[1] || closed.some((n) => !Number.isInteger(n) || n < 1)) {
       problems.push({ field: 'fingerings', message: t('badLine', i + 1) });
       return;
     }
     const hz = num(parts[1]);
-    rows.push({ name: parts[0], ...(Number.isFinite(hz) ? { targetHz: hz } : { target: parts[1] }), closedHoles: closed });
+    rows.push({
+      name: parts[0], closedHoles: closed.map((n) => n - 1),
+      ...(Number.isFinite(hz) ? { targetHz: hz } : { targetNote: parts[1] }), register: 1,
+    });
   });
   return { rows, problems };
 }
@@ -241,16 +307,32 @@ function readFingerings() {
 function limits() {
   const get = (id) => num($(id).value);
   return {
+    ...state.limits,
     varyDiameters: $('vary-diameters').checked, varyFoot: $('vary-foot').checked,
     minDiameterMm: get('min-diameter'), maxDiameterMm: get('max-diameter'), minWallMm: get('min-wall'),
   };
 }
 
+/** Puts a bore (an air-column request, fingerings included or not) into the panel. */
+function showBore(request) {
+  const bore = { ...request };
+  const fingerings = bore.fingerings || [];
+  delete bore.fingerings;
+  $('bore-json').value = JSON.stringify(bore, null, 1);
+  if (fingerings.length) $('fingering-lines').value = fingeringLines(fingerings);
+}
+
 async function loadDemo() {
   const answer = await getJson('/api/v1/inverse/tone-holes/demo');
   if (!answer.ok) return;
-  $('bore-json').value = JSON.stringify(answer.data.bore, null, 1);
-  $('fingering-lines').value = fingeringLines(answer.data.fingerings);
+  showBore(answer.data.bore);
+  const l = answer.data.limits || {};
+  state.limits = { minPositionMm: l.minPositionMm, endMarginMm: l.endMarginMm, minFootMm: l.minFootMm, maxFootMm: l.maxFootMm };
+  if (l.minDiameterMm) $('min-diameter').value = l.minDiameterMm;
+  if (l.maxDiameterMm) $('max-diameter').value = l.maxDiameterMm;
+  if (l.minWallMm !== undefined && l.minWallMm !== null) $('min-wall').value = l.minWallMm;
+  $('vary-foot').checked = l.varyFoot !== false;
+  $('vary-diameters').checked = !!l.varyDiameters;
 }
 
 function fromBench() {
@@ -260,11 +342,8 @@ function fromBench() {
     return;
   }
   const handed = JSON.parse(stored);
-  const bore = { ...(handed.request || handed) };
-  const fingerings = handed.fingerings || bore.fingerings || [];
-  delete bore.fingerings;
-  $('bore-json').value = JSON.stringify(bore, null, 1);
-  if (fingerings.length) $('fingering-lines').value = fingeringLines(fingerings);
+  state.limits = {};
+  showBore(handed.request || handed);
   say($('bore-message'), t('fromBench'));
 }
 
@@ -304,7 +383,7 @@ async function startSolve() {
     showProblem(borePanel, $('bore-message'), { errors: [...(problem ? problem.errors : []), ...f.problems] });
     return;
   }
-  const answer = await postJson('/api/v1/inverse/tone-holes', { bore, fingerings: f.rows, limits: limits() });
+  const answer = await postJson('/api/v1/inverse/tone-holes', { bore: { ...bore, fingerings: f.rows }, limits: limits() });
   if (!answer.ok) {
     showProblem(borePanel, $('bore-message'), answer.problem);
     return;
@@ -382,23 +461,30 @@ async function cancelSolve() {
   if (!state.job) return;
   clearTimeout(state.timer);
   const answer = await sendJson('DELETE', `/api/v1/inverse/jobs/${encodeURIComponent(state.job)}`);
-  if (answer.ok) finish(answer.data.status === 'cancelled' ? answer.data : answer.data);
-  if (answer.ok && !['cancelled', 'succeeded', 'failed'].includes(answer.data.status)) {
-    state.job = answer.data.id;
-    poll();
-  }
+  // A running job stops at its next evaluation: keep polling until it says so.
+  if (answer.ok) poll();
 }
 
 function applyResult() {
   if (!state.result) return;
-  $('bore-json').value = JSON.stringify(state.result.bore, null, 1);
+  showBore(state.result.bore);
   say($('bore-message'), t('applied'));
 }
 
-function openInBench() {
+/**
+ * Hands the adjusted bore to the bore bench: saved as an air-column design in the shop library and
+ * opened with /air-columns?design=ID (the design bar's own hook). When the library refuses it, the
+ * bore goes through sessionStorage under OPEN_KEY and the page opens at /air-columns#from-templates.
+ */
+async function openInBench() {
   if (!state.result) return;
-  const f = readFingerings();
-  sessionStorage.setItem(OPEN_KEY, JSON.stringify({ source: 'templates', request: state.result.bore, fingerings: f.rows }));
+  const stamp = new Date().toISOString().slice(0, 16).replace('T', ' ');
+  const answer = await postJson('/api/v1/designs', { name: `${t('solvedName')} ${stamp}`, kind: 'air-column', parameters: state.result.bore });
+  if (answer.ok && answer.data && answer.data.id !== undefined) {
+    window.location.assign(`/air-columns?design=${encodeURIComponent(answer.data.id)}`);
+    return;
+  }
+  sessionStorage.setItem(OPEN_KEY, JSON.stringify({ source: 'templates', request: state.result.bore }));
   window.location.assign('/air-columns#from-templates');
 }
 

@@ -44,7 +44,8 @@ export function drawBore(container, segments, holes, options = {}) {
   const halfMax = (maxD / 2) * scale * widen;
   const axisY = top + halfMax;
   const height = axisY + halfMax + 48;
-  const svg = el('svg', { width, height, viewBox: `0 0 ${width} ${height}`, role: 'img', class: 'bore-svg' });
+  const svg = el('svg', { width, height, viewBox: `0 0 ${width} ${height}`, role: 'img', class: 'bore-svg',
+    'aria-label': t('drawingLabel', good.length, goodHoles.length, Number(total.toFixed(2))) });
   const x = (mm) => margin + mm * scale;
   const r = (d) => (d / 2) * scale * widen;
 
@@ -108,12 +109,16 @@ export function drawBore(container, segments, holes, options = {}) {
     svg.append(g);
   }
 
-  // Scale bar in millimetres and the overall length.
-  const bar = barLength(total);
+  // Scale bar and the overall length, in the display unit.
+  const inch = options.unit === 'inch';
+  const perUnit = inch ? 25.4 : 1;
+  const bar = inch ? [0.5, 1, 2, 5, 10, 20, 50].reduce((b, s) => (Math.abs(s - total / 127) < Math.abs(b - total / 127) ? s : b), 1)
+    : barLength(total);
+  const unitText = inch ? t('unitInch') : t('unitMm');
   const barY = height - 18;
-  svg.append(el('line', { x1: x(0), y1: barY, x2: x(bar), y2: barY, class: 'scale-bar' }));
-  svg.append(el('text', { x: x(bar) + 6, y: barY + 4, class: 'bore-label' }, t('scaleBar', bar)));
+  svg.append(el('line', { x1: x(0), y1: barY, x2: x(bar * perUnit), y2: barY, class: 'scale-bar' }));
+  svg.append(el('text', { x: x(bar * perUnit) + 6, y: barY + 4, class: 'bore-label' }, `${bar} ${unitText}`));
   svg.append(el('text', { x: x(total), y: barY + 4, class: 'bore-label end' },
-    `${Number(total.toFixed(2))} mm${widen > 1 ? ` · ⌀ × ${widen}` : ''}`));
+    `${Number((total / perUnit).toFixed(inch ? 3 : 2))} ${unitText}${widen > 1 ? ` · ⌀ × ${widen}` : ''}`));
   container.append(svg);
 }

@@ -83,6 +83,13 @@ export class BoreEditor {
     this.#structureChanged();
   }
 
+  /** Opens every hole except the given indices (a fingering shown in the editor and drawing). */
+  setClosedHoles(closed) {
+    this.holes.forEach((h, i) => { h.open = !closed.includes(i); });
+    this.render();
+    this.onChange();
+  }
+
   toggleHole(index) {
     if (!this.holes[index]) return;
     this.holes[index].open = !this.holes[index].open;

@@ -1,20 +1,27 @@
-// The fingering table: each fingering closes some holes (numbered from 1, nearest the input end),
-// names a target (a note such as D5, or hertz) and the register it should sound in. After an
-// analysis each row shows the predicted pitch and its cents from the target against a tolerance.
+// The fingering table: each fingering closes some holes (indices into the hole list as the API
+// has them, shown numbered from 1 nearest the input end), names a target (a note such as D5, or
+// hertz) and the register it should sound in. The server predicts each fingering's pitch; each row
+// then shows it and its cents from the target against a tolerance.
 import { fmt } from '../common/units.js';
 import { cents, nearestNote, targetHz } from './tuning.js';
 import { t } from './text.js';
 
 export class FingeringTable {
-  constructor({ body, onChange }) {
+  constructor({ body, onChange, onApply }) {
     this.body = body;
     this.onChange = onChange;
+    this.onApply = onApply;
     this.rows = [];
     this.holeCount = 0;
     this.predictions = [];
     body.addEventListener('input', (e) => this.#typed(e));
     body.addEventListener('change', (e) => this.#changed(e));
     body.addEventListener('click', (e) => {
+      const apply = e.target.closest('button[data-action=apply]');
+      if (apply) {
+        this.onApply?.(this.rows[Number(apply.dataset.row)].closedHoles);
+        return;
+      }
       const b = e.target.closest('button[data-action=remove]');
       if (!b) return;
       this.rows.splice(Number(b.dataset.row), 1);
@@ -24,9 +31,12 @@ export class FingeringTable {
     });
   }
 
-  /** Rows as {name, closedHoles: [1-based], target: text, register}. */
+  /** Rows from the request's fingerings: {name, closedHoles (0-based), targetNote | targetHz, register}. */
   load(rows) {
-    this.rows = (rows ?? []).map((r) => ({ name: r.name ?? '', closedHoles: [...(r.closedHoles ?? [])], target: String(r.target ?? ''), register: r.register ?? 1 }));
+    this.rows = (rows ?? []).map((r) => ({
+      name: r.name ?? '', closedHoles: [...(r.closedHoles ?? [])].sort((a, b) => a - b),
+      target: String(r.targetNote ?? r.targetHz ?? r.target ?? ''), register: r.register ?? 1,
+    }));
     this.predictions = [];
     this.render();
   }
@@ -40,23 +50,28 @@ export class FingeringTable {
   /** The hole list changed: holeOrder[new] = old index (0-based), or null when only added. */
   holesChanged(holeCount, holeOrder) {
     if (holeOrder) {
-      const newOf = new Map(holeOrder.map((old, neu) => [old + 1, neu + 1]));
+      const newOf = new Map(holeOrder.map((old, neu) => [old, neu]));
       for (const r of this.rows) r.closedHoles = r.closedHoles.filter((h) => newOf.has(h)).map((h) => newOf.get(h)).sort((a, b) => a - b);
     }
     this.holeCount = holeCount;
-    for (const r of this.rows) r.closedHoles = r.closedHoles.filter((h) => h <= holeCount);
+    for (const r of this.rows) r.closedHoles = r.closedHoles.filter((h) => h < holeCount);
     this.render();
   }
 
-  /** Targets as Hz, with local problems for targets that are neither a note nor a frequency. */
-  read(a4) {
-    const problems = [];
-    const rows = this.rows.map((r, i) => {
-      const hz = targetHz(r.target, a4);
-      if (hz === null) problems.push({ field: `fingerings[${i}].target`, message: t('badTarget') });
-      return { ...r, targetHz: hz };
+  /**
+   * The request's fingerings: a target that reads as a number goes as targetHz, anything else as
+   * targetNote, exactly as typed (the server names the field when it cannot read it).
+   */
+  read() {
+    return this.rows.map((r) => {
+      const out = { name: r.name, closedHoles: [...r.closedHoles], register: r.register };
+      const text = r.target.trim();
+      const hz = parseHz(text);
+      if (text === '') out.targetHz = null;
+      else if (hz !== null) out.targetHz = hz;
+      else out.targetNote = text;
+      return out;
     });
-    return { rows, problems };
   }
 
   /** predictions[i] = predicted Hz (or null); shows cents against the tolerance. */
@@ -89,20 +104,20 @@ export class FingeringTable {
     const holes = document.createElement('span');
     holes.className = 'fingering-holes';
     holes.dataset.field = `fingerings[${i}].closedHoles`;
-    for (let h = 1; h <= this.holeCount; h++) {
+    for (let h = 0; h < this.holeCount; h++) {
       const label = document.createElement('label');
       label.className = 'hole-pick';
       const box = document.createElement('input');
       box.type = 'checkbox'; box.checked = r.closedHoles.includes(h); box.dataset.hole = String(h); box.dataset.row = String(i);
-      box.title = t('closeHole', h);
-      box.setAttribute('aria-label', t('closeHole', h));
-      label.append(box, document.createTextNode(String(h)));
+      box.title = t('closeHole', h + 1);
+      box.setAttribute('aria-label', t('closeHole', h + 1));
+      label.append(box, document.createTextNode(String(h + 1)));
       holes.append(label);
     }
     td(holes, 'left');
     const target = document.createElement('input');
     target.type = 'text'; target.size = 6; target.value = r.target; target.dataset.key = 'target'; target.dataset.row = String(i);
-    target.dataset.field = `fingerings[${i}].target`;
+    target.dataset.field = targetField(r.target, i);
     td(target);
     const reg = document.createElement('select');
     reg.dataset.key = 'register'; reg.dataset.row = String(i); reg.dataset.field = `fingerings[${i}].register`;
@@ -110,10 +125,10 @@ export class FingeringTable {
     td(reg);
     const p = this.predictions[i];
     const hz = p?.frequencyHz ?? null;
-    const goal = targetHz(r.target, this.a4 ?? 440);
+    const goal = p?.targetHz ?? targetHz(r.target, this.a4 ?? 440);
     if (hz && goal) {
       const c = p.centsFromTarget ?? cents(hz, goal);
-      const note = nearestNote(hz, this.a4 ?? 440);
+      const note = p.note ?? nearestNote(hz, this.a4 ?? 440);
       const { cls, word } = verdict(c, this.tolerance ?? 10);
       td(fmt(hz, 1), 'predicted');
       td(`${note.name} ${signed(note.centsOff)}`);
@@ -124,10 +139,14 @@ export class FingeringTable {
       td('—', 'predicted'); td('—'); td('—', 'cents');
       td(p === undefined ? '' : t('noPrediction'), 'verdict');
     }
+    const apply = document.createElement('button');
+    apply.type = 'button'; apply.className = 'secondary tiny apply'; apply.dataset.action = 'apply'; apply.dataset.row = String(i);
+    apply.textContent = '⇧'; apply.title = t('applyFingering'); apply.setAttribute('aria-label', t('applyFingering'));
     const rm = document.createElement('button');
     rm.type = 'button'; rm.className = 'secondary tiny remove'; rm.dataset.action = 'remove'; rm.dataset.row = String(i);
     rm.textContent = '✕'; rm.title = t('remove'); rm.setAttribute('aria-label', t('remove'));
-    td(rm);
+    const actions = td(apply, 'row-actions');
+    actions.append(rm);
     return tr;
   }
 
@@ -135,6 +154,7 @@ export class FingeringTable {
     const key = e.target.dataset.key;
     if (key !== 'name' && key !== 'target') return;
     this.rows[Number(e.target.dataset.row)][key] = e.target.value;
+    if (key === 'target') e.target.dataset.field = targetField(e.target.value, Number(e.target.dataset.row));
     this.onChange();
   }
 
@@ -151,6 +171,17 @@ export class FingeringTable {
     }
   }
 }
+
+/** A target that reads as a plain positive number of hertz, else null. */
+function parseHz(text) {
+  return /^[+]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/.test(text) ? Number(text) : null;
+}
+
+/** The request field a target goes to, so that the server's message lands on this input. */
+const targetField = (text, i) => {
+  const s = String(text ?? '').trim();
+  return `fingerings[${i}].${s === '' || parseHz(s) !== null ? 'targetHz' : 'targetNote'}`;
+};
 
 const signed = (c) => `${c >= 0 ? '+' : '−'}${Math.abs(c).toFixed(1)}`;
 

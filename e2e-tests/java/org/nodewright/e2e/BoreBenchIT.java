@@ -174,6 +174,113 @@ class BoreBenchIT extends BrowserTestBase {
         double d6 = Double.parseDouble(rows.get(7).findElement(By.cssSelector("td.predicted")).getText());
         assertThat(cents(d6, 2 * d5)).isCloseTo(0.0, within(50.0));
         fullPageScreenshot("bore-bench-whistle");
+
+        // A target the server cannot read is marked on that fingering's target, the rows kept.
+        String beforeBad = rejected();
+        WebElement target = driver.findElement(By.cssSelector("#fingering-rows tr:nth-child(2) input[data-key='target']"));
+        type(target, "H9");
+        wait.until(d -> !beforeBad.equals(rejected()));
+        assertThat(waitFor(By.cssSelector("[data-error-for='fingerings[1].targetNote']")).getText()).isNotBlank();
+        assertThat(driver.findElements(By.cssSelector("#fingering-rows tr"))).hasSize(9);
+        assertThat(target.getDomProperty("value")).isEqualTo("H9");
+    }
+
+    @Test
+    void theConicalPresetFollowsTheTruncatedConeFormula() throws Exception {
+        String before = analyzed();
+        new Select(driver.findElement(By.id("preset-select"))).selectByValue("conical-chanter");
+        waitForAnalysisAfter(before);
+        assertThat(driver.findElements(By.cssSelector("#segment-rows tr"))).hasSize(2);
+        // Nearly the full harmonic series for a cone closed at its tip: the second resonance near 2 f1.
+        assertThat(cell(2, 6)).isEqualTo("2·f1");
+        fullPageScreenshot("bore-bench-cone");
+
+        // Lossless, p = 0 at the wide end: a cone truncated x1 = 50 mm from its apex and closed there
+        // resonates where tan kL = -k x1 (Fletcher & Rossing, The Physics of Musical Instruments,
+        // 2nd ed., sec. 8.7); L = 550 mm here. The roots are found below by bisection.
+        setChecked(driver.findElement(By.id("auto-analyze")), false);
+        setChecked(driver.findElement(By.id("losses")), false);
+        new Select(driver.findElement(By.id("output-end"))).selectByValue("ideal-open");
+        String lossless = analyzed();
+        driver.findElement(By.id("analyze")).click();
+        waitForAnalysisAfter(lossless);
+        double c = speedOfSound();
+        List<Double> f = resonanceColumn(1);
+        for (int n = 1; n <= 3; n++) {
+            double kl = truncatedConeRoot(n, 50.0 / 550.0);
+            double expected = kl / (2 * Math.PI * 0.550) * c;
+            assertThat(cents(f.get(n - 1), expected)).as("resonance %d", n).isCloseTo(0.0, within(1.0));
+        }
+    }
+
+    @Test
+    void reorderingHolesCarriesTheFingeringsAlong() throws Exception {
+        String before = analyzed();
+        new Select(driver.findElement(By.id("preset-select"))).selectByValue("six-hole-whistle");
+        waitForAnalysisAfter(before);
+        // E5 closes holes 1-5; move hole 5 below hole 6: E5 must now close holes 1-4 and 6.
+        driver.findElement(By.cssSelector("#hole-rows tr:nth-child(5) button.down")).click();
+        assertThat(field("holes[5].positionMm").getDomProperty("value")).isEqualTo("215.5");
+        List<Boolean> closed = driver.findElements(By.cssSelector("#fingering-rows tr:nth-child(2) .fingering-holes input"))
+                .stream().map(WebElement::isSelected).toList();
+        assertThat(closed).containsExactly(true, true, true, true, false, true);
+        // Removing hole 1 drops it from every fingering and renumbers the rest.
+        driver.findElement(By.cssSelector("#hole-rows tr:nth-child(1) button.remove")).click();
+        List<Boolean> after = driver.findElements(By.cssSelector("#fingering-rows tr:nth-child(2) .fingering-holes input"))
+                .stream().map(WebElement::isSelected).toList();
+        assertThat(after).containsExactly(true, true, true, false, true);
+        // Inches on screen: 203 mm shows as 7.99213 in.
+        new Select(driver.findElement(By.id("units"))).selectByValue("inch");
+        assertThat(field("holes[2].positionMm").getDomProperty("value")).isEqualTo("7.99213");
+        fullPageScreenshot("bore-bench-reordered-inch");
+    }
+
+    @Test
+    void aBoreSavedFromTheDesignBarComesBackWithItsFingerings() throws Exception {
+        wait.until(d -> "true".equals(js("return document.getElementById('design-bar').dataset.ready || ''")));
+        String before = analyzed();
+        new Select(driver.findElement(By.id("preset-select"))).selectByValue("stopped-pipe");
+        waitForAnalysisAfter(before);
+        driver.findElement(By.id("add-fingering")).click();
+        type(driver.findElement(By.cssSelector("#fingering-rows tr:nth-child(1) input[data-key='target']")), "C#4");
+        type(driver.findElement(By.id("temperature")), "28");
+        String changed = analyzed();
+        driver.findElement(By.id("analyze")).click();
+        waitForAnalysisAfter(changed);
+        type(driver.findElement(By.cssSelector("#design-bar [data-role='name']")), "Harrowgate stopped pipe, warm room");
+        driver.findElement(By.cssSelector("#design-bar [data-role='save']")).click();
+        wait.until(d -> !String.valueOf(js("return document.getElementById('design-bar').dataset.designId || ''")).isEmpty());
+        String id = String.valueOf(js("return document.getElementById('design-bar').dataset.designId"));
+
+        driver.get(url("/air-columns?design=" + id));
+        wait.until(d -> "true".equals(js("return document.getElementById('design-bar').dataset.ready || ''")));
+        wait.until(d -> "28".equals(driver.findElement(By.id("temperature")).getDomProperty("value")));
+        assertThat(field("segments[0].inputDiameterMm").getDomProperty("value")).isEqualTo("25");
+        assertThat(driver.findElements(By.cssSelector("#hole-rows tr"))).isEmpty();
+        assertThat(driver.findElement(By.cssSelector("#fingering-rows tr:nth-child(1) input[data-key='target']"))
+                .getDomProperty("value")).isEqualTo("C#4");
+        wait.until(d -> !driver.findElements(By.cssSelector("#fingering-rows tr:nth-child(1) td.predicted")).isEmpty()
+                && driver.findElement(By.cssSelector("#fingering-rows tr:nth-child(1) td.predicted")).getText().matches("\\d+\\.\\d"));
+        fullPageScreenshot("bore-bench-saved-design");
+    }
+
+    /** The n-th root in kL of sin kL + (x1/L)(kL) cos kL = 0, between (n - 1/2)pi and n pi. */
+    private static double truncatedConeRoot(int n, double x1OverL) {
+        double lo = (n - 0.5) * Math.PI;
+        double hi = n * Math.PI;
+        java.util.function.DoubleUnaryOperator g = kl -> Math.sin(kl) + x1OverL * kl * Math.cos(kl);
+        double glo = g.applyAsDouble(lo);
+        for (int i = 0; i < 200; i++) {
+            double mid = 0.5 * (lo + hi);
+            double gm = g.applyAsDouble(mid);
+            if (Math.signum(gm) == Math.signum(glo)) {
+                lo = mid;
+                glo = gm;
+            } else {
+                hi = mid;
+            }
+        }
+        return 0.5 * (lo + hi);
     }
 
     // ---- helpers -------------------------------------------------------------------------

@@ -94,5 +94,48 @@ class LanLoginIT extends BrowserTestBase {
         screenshot("lan-signed-in-editor");
         driver.get(url("/admin/accounts"));
         assertThat(driver.getPageSource()).contains("Your account may not do that");
+
+        // The editor saves a design from the page (session + CSRF header); its name stays text.
+        driver.get(url("/"));
+        waitFor(By.id("signed-in-as"));
+        String name = "<script>window.pwned = 1</script>";
+        Object saved = saveDesignFromThePage(name);
+        assertThat(saved).asString().startsWith("201 ");
+        String id = saved.toString().substring(4);
+        driver.get(url("/library/" + id));
+        assertThat(waitFor(By.id("design-name")).getText()).isEqualTo(name);
+        assertThat(js("return window.pwned === undefined")).isEqualTo(true);
+        assertThat(driver.findElements(By.cssSelector("main script"))).isEmpty();
+
+        // A viewer signed in the same way is refused the write with 403.
+        driver.findElement(By.id("sign-out")).click();
+        waitFor(By.id("login-signed-out"));
+        signIn("admin", ADMIN_PW);
+        waitFor(By.id("signed-in-as"));
+        Object viewerMade = ((JavascriptExecutor) driver).executeAsyncScript(
+                "const done = arguments[arguments.length - 1];"
+                        + "const token = document.querySelector('meta[name=\"_csrf\"]').content;"
+                        + "const header = document.querySelector('meta[name=\"_csrf_header\"]').content;"
+                        + "fetch('/api/v1/accounts', {method: 'POST', headers: {'Content-Type': 'application/json', [header]: token},"
+                        + " body: JSON.stringify({username: 'bench-viewer', password: 'bench-viewer-pw', role: 'viewer'})})"
+                        + ".then(r => done(r.status));");
+        assertThat(viewerMade).isEqualTo(201L);
+        driver.findElement(By.id("sign-out")).click();
+        waitFor(By.id("login-signed-out"));
+        signIn("bench-viewer", "bench-viewer-pw");
+        waitFor(By.id("signed-in-as"));
+        assertThat(saveDesignFromThePage("Viewer's attempt")).asString().startsWith("403");
+    }
+
+    /** POSTs a string design with the page's CSRF header; answers "status id". */
+    private Object saveDesignFromThePage(String name) {
+        return ((JavascriptExecutor) driver).executeAsyncScript(
+                "const done = arguments[arguments.length - 1];"
+                        + "const token = document.querySelector('meta[name=\"_csrf\"]').content;"
+                        + "const header = document.querySelector('meta[name=\"_csrf_header\"]').content;"
+                        + "fetch('/api/v1/designs', {method: 'POST', headers: {'Content-Type': 'application/json', [header]: token},"
+                        + " body: JSON.stringify({name: arguments[0], kind: 'string', parameters: {lengthMm: 650.0,"
+                        + " tensionN: 70.0, material: 'plain-steel', diameterMm: 0.3, modeCount: 12}})})"
+                        + ".then(async r => done(r.status + ' ' + (r.ok ? (await r.json()).id : '')));", name);
     }
 }

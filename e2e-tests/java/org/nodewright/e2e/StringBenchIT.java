@@ -13,7 +13,7 @@ import org.openqa.selenium.WebElement;
 import org.openqa.selenium.interactions.Actions;
 
 /** The string bench in a real headless Chromium: form, four charts, movable markers, field errors. */
-class StringBenchIT extends BrowserTestBase {
+class StringBenchIT extends StringPageTestBase {
 
     private static final double LENGTH_MM = 650.0;
 
@@ -42,10 +42,10 @@ class StringBenchIT extends BrowserTestBase {
         wait.until(d -> Boolean.TRUE.equals(js("return document.getElementById('busy').hidden;")));
     }
 
-    @SuppressWarnings("unchecked")
-    private List<Map<String, Object>> datasets(String canvasId) {
-        Map<String, Object> data = (Map<String, Object>) chartData(canvasId);
-        return (List<Map<String, Object>>) data.get("datasets");
+    /** Clicks Analyse and waits until every request the form has sent is answered. */
+    private void submitAndWaitIdle() {
+        driver.findElement(By.id("analyze-button")).click();
+        wait.until(d -> Boolean.TRUE.equals(js("return document.getElementById('busy').hidden;")));
     }
 
     private static List<Map<String, Object>> ofKind(List<Map<String, Object>> sets, String kind) {
@@ -55,10 +55,6 @@ class StringBenchIT extends BrowserTestBase {
     @SuppressWarnings("unchecked")
     private static List<Map<String, Object>> points(Map<String, Object> dataset) {
         return (List<Map<String, Object>>) dataset.get("data");
-    }
-
-    private static double num(Object o) {
-        return ((Number) o).doubleValue();
     }
 
     @Test
@@ -172,6 +168,15 @@ class StringBenchIT extends BrowserTestBase {
         assertThat(num(atNode.get(2))).isEqualTo(-80.0);
         assertThat(num(atNode.get(0))).isGreaterThan(-80.0);
         assertThat(driver.findElement(By.id("near-nodes")).getText()).contains("3, 6, 9, 12");
+        // Pointing at L/3 on the node map names the modes resting there: every third one.
+        js("arguments[0].scrollIntoView({block: 'center'});", canvas);
+        Map<String, Object> probe = (Map<String, Object>) js("const c = Chart.getChart(arguments[0]);"
+                + "return {x: c.scales.x.getPixelForValue(arguments[1]), y: (c.chartArea.top + c.chartArea.bottom) / 2,"
+                + " w: arguments[0].clientWidth, h: arguments[0].clientHeight};", canvas, LENGTH_MM / 3);
+        new Actions(driver).moveToElement(canvas,
+                (int) Math.round(num(probe.get("x")) - num(probe.get("w")) / 2),
+                (int) Math.round(num(probe.get("y")) - num(probe.get("h")) / 2)).perform();
+        wait.until(d -> driver.findElement(By.id("node-probe")).getText().contains("modes 3, 6, 9, 12"));
         js("document.getElementById('partials-chart').scrollIntoView();");
         screenshot("string-bench-pickup-on-node");
     }
@@ -180,7 +185,7 @@ class StringBenchIT extends BrowserTestBase {
     void badValueGetsAnInlineErrorAndKeepsWhatWasTyped() throws Exception {
         // Text where a number belongs: the server's problem document names diameterMm.
         type("diameterMm", "abc");
-        driver.findElement(By.id("analyze-button")).click();
+        submitAndWaitIdle();
         assertThat(errorText("diameterMm")).isNotBlank();
         WebElement diameter = driver.findElement(By.id("diameterMm"));
         assertThat(diameter.getAttribute("class")).contains("invalid");
@@ -189,12 +194,13 @@ class StringBenchIT extends BrowserTestBase {
         // A negative length: named lengthMm, and the typed value stays in the field.
         type("diameterMm", "0.25");
         type("lengthMm", "-650");
-        driver.findElement(By.id("analyze-button")).click();
+        submitAndWaitIdle();
         assertThat(errorText("lengthMm")).isNotBlank();
         WebElement length = driver.findElement(By.id("lengthMm"));
         assertThat(length.getAttribute("class")).contains("invalid");
         assertThat(length.getAttribute("value")).isEqualTo("-650");
         assertThat(driver.findElements(By.cssSelector("[data-error-for='diameterMm']"))).isEmpty();
+        js("document.getElementById('lengthMm').scrollIntoView({block: 'center'});");
         screenshot("string-bench-field-error");
 
         // Fixing the value clears the error and draws again.
@@ -261,12 +267,59 @@ class StringBenchIT extends BrowserTestBase {
         screenshot("string-bench-clamped");
     }
 
-    /** Waits for the inline message of a field (re-read each time: the page rewrites it per answer). */
-    private String errorText(String field) {
-        return wait.until(d -> {
-            Object text = js("const e = document.querySelector('[data-error-for=\"' + CSS.escape(arguments[0]) + '\"]');"
-                    + "return e && e.textContent.trim() ? e.textContent : null;", field);
-            return (String) text;
+    @Test
+    void aStringPastItsStrengthShowsAStrongWarningBesideTheCaution() throws Exception {
+        driver.findElement(By.cssSelector("input[name='drive'][value='tension']")).click();
+        type("diameterMm", "0.25");
+        type("tensionN", "300");
+        analyze();
+        // 300 N on a 0.25 mm wire is 300 / (pi 0.25^2 / 4) = 6112 MPa, far past any steel wire.
+        assertThat(num(js("return window.lastAnalysis.request.tensionN;"))).isEqualTo(300.0);
+        assertThat(js("return 'targetHz' in window.lastAnalysis.request;")).isEqualTo(false);
+        assertThat(driver.findElement(By.id("summary")).getText()).contains("6112 MPa");
+        assertThat(driver.findElements(By.cssSelector("#warnings li.strong"))).isNotEmpty();
+        assertThat(driver.findElement(By.id("summary-panel")).getAttribute("class")).contains("danger");
+        assertThat(driver.findElement(By.id("string-caution")).isDisplayed()).isTrue();
+        js("window.scrollTo(0, 0);");
+        screenshot("string-bench-over-strength");
+    }
+
+    @Test
+    void aWoundStringSendsItsWrapAndWeighsMoreThanItsCore() throws Exception {
+        type("diameterMm", "0.4");
+        analyze();
+        double plain = num(js("return window.lastAnalysis.response.linearDensityKgPerM;"));
+        new org.openqa.selenium.support.ui.Select(driver.findElement(By.id("construction"))).selectByValue("wound");
+        assertThat(driver.findElement(By.id("wrapDiameterMm")).isDisplayed()).isTrue();
+        analyze();
+        assertThat(js("return window.lastAnalysis.request.wrapMaterial;")).isNotNull();
+        assertThat(num(js("return window.lastAnalysis.request.wrapDiameterMm;"))).isEqualTo(0.25);
+        // A wrap can only add mass: the wound string is heavier per metre than its bare core.
+        assertThat(num(js("return window.lastAnalysis.response.linearDensityKgPerM;"))).isGreaterThan(plain);
+    }
+
+    @Test
+    void aSavedDesignComesBackIntoTheFormThroughTheDesignBar() throws Exception {
+        type("lengthMm", "640");
+        type("modeCount", "5");
+        analyze();
+        WebElement name = waitFor(By.cssSelector("#design-bar [data-role='name']"));
+        name.sendKeys("Harrowgate Lane parlour, first string");
+        driver.findElement(By.cssSelector("#design-bar [data-role='save']")).click();
+        wait.until(d -> driver.getCurrentUrl().contains("design="));
+        String designUrl = driver.getCurrentUrl();
+
+        driver.get(url("/strings"));
+        waitFor(By.id("string-form"));
+        wait.until(d -> "650".equals(driver.findElement(By.id("lengthMm")).getAttribute("value")));
+        driver.get(designUrl);
+        wait.until(d -> "640".equals(driver.findElement(By.id("lengthMm")).getAttribute("value")));
+        assertThat(driver.findElement(By.id("modeCount")).getAttribute("value")).isEqualTo("5");
+        wait.until(d -> {
+            Object count = js("const c = Chart.getChart(document.getElementById('partials-chart'));"
+                    + "return c ? c.data.datasets[0].data.length : 0;");
+            return ((Number) count).intValue() == 5;
         });
+        screenshot("string-bench-saved-design");
     }
 }

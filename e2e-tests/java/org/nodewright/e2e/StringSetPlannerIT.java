@@ -11,7 +11,7 @@ import org.openqa.selenium.By;
 import org.openqa.selenium.WebElement;
 
 /** The set planner in a real headless Chromium: one bar per string, the total, field errors. */
-class StringSetPlannerIT extends BrowserTestBase {
+class StringSetPlannerIT extends StringPageTestBase {
 
     @BeforeEach
     void openPlanner() {
@@ -25,10 +25,6 @@ class StringSetPlannerIT extends BrowserTestBase {
         Map<String, Object> data = (Map<String, Object>) chartData("set-tension-chart");
         List<Map<String, Object>> datasets = (List<Map<String, Object>>) data.get("datasets");
         return (List<Object>) datasets.get(0).get("data");
-    }
-
-    private static double num(Object o) {
-        return ((Number) o).doubleValue();
     }
 
     private double totalShownN() {
@@ -45,7 +41,7 @@ class StringSetPlannerIT extends BrowserTestBase {
     void everyStringGetsABarAndTheTotalIsTheirSum() throws Exception {
         List<Object> bars = bars();
         assertThat(bars).hasSize(rows().size()).hasSize(6);
-        double sum = bars.stream().mapToDouble(StringSetPlannerIT::num).sum();
+        double sum = bars.stream().mapToDouble(StringPageTestBase::num).sum();
         assertThat(totalShownN()).isCloseTo(sum, within(0.06));
 
         // The plain strings against Mersenne's law for an ideal string, T = mu (2 L f)^2 with
@@ -77,7 +73,7 @@ class StringSetPlannerIT extends BrowserTestBase {
         driver.findElement(By.id("analyze-set")).click();
         wait.until(d -> num(bars().get(5)) > before);
         assertThat(num(bars().get(5)) / before).isCloseTo(Math.pow(680.0 / 650.0, 2), within(1e-3));
-        double sum = bars().stream().mapToDouble(StringSetPlannerIT::num).sum();
+        double sum = bars().stream().mapToDouble(StringPageTestBase::num).sum();
         assertThat(totalShownN()).isCloseTo(sum, within(0.06));
         js("document.getElementById('set-total').scrollIntoView();");
         screenshot("set-planner-multiscale");
@@ -95,12 +91,40 @@ class StringSetPlannerIT extends BrowserTestBase {
         screenshot("set-planner-field-error");
     }
 
-    /** Waits for the inline message of a field (re-read each time: the page rewrites it per answer). */
-    private String errorText(String field) {
-        return wait.until(d -> {
-            Object text = js("const e = document.querySelector('[data-error-for=\"' + CSS.escape(arguments[0]) + '\"]');"
-                    + "return e && e.textContent.trim() ? e.textContent : null;", field);
-            return (String) text;
-        });
+    @Test
+    void aStringTunedAnOctaveTooHighIsFlaggedInItsRowAndBar() throws Exception {
+        WebElement target = rows().get(0).findElement(By.cssSelector(".target"));
+        target.clear();
+        target.sendKeys("E5");
+        driver.findElement(By.id("analyze-set")).click();
+        // An octave up needs four times the tension (T = mu (2 L f)^2): about 5.7 GPa in a 0.254 mm wire.
+        wait.until(d -> driver.findElements(By.cssSelector("#set-results tbody tr:first-child td.strong")).size() > 0);
+        Object colour = js("return Chart.getChart(document.getElementById('set-tension-chart')).data.datasets[0].backgroundColor[0];");
+        assertThat(colour).isEqualTo("#a3262a");
+        assertThat(driver.findElement(By.cssSelector("#set-results tbody tr:first-child")).getText()).contains("E5");
+        js("document.getElementById('set-total').scrollIntoView();");
+        screenshot("set-planner-over-strength");
+    }
+
+    @Test
+    void kilogramsForceAndInchesAreOnlyADisplay() throws Exception {
+        double totalN = totalShownN();
+        new org.openqa.selenium.support.ui.Select(driver.findElement(By.id("force-unit"))).selectByValue("kgf");
+        new org.openqa.selenium.support.ui.Select(driver.findElement(By.id("length-unit"))).selectByValue("inch");
+        // 1 kgf = 9.80665 N (standard gravity, 3rd CGPM 1901; NIST SP 811); 650 mm = 25.59055 inch (1 inch = 25.4 mm).
+        wait.until(d -> driver.findElement(By.id("set-total")).getText().endsWith(" kgf"));
+        String kgf = driver.findElement(By.id("set-total")).getText().replace(" kgf", "");
+        assertThat(Double.parseDouble(kgf)).isCloseTo(totalN / 9.80665, within(0.01));
+        assertThat(driver.findElement(By.id("setLengthMm")).getAttribute("value")).isEqualTo("25.59055");
+        assertThat(rows().get(0).findElement(By.cssSelector(".gauge")).getAttribute("value")).isEqualTo("0.01");
+        // Analysing again in these units sends the same millimetres, so the bars do not move.
+        List<Object> before = bars();
+        String count = driver.findElement(By.id("set-form")).getAttribute("data-analyses");
+        driver.findElement(By.id("analyze-set")).click();
+        wait.until(d -> !count.equals(driver.findElement(By.id("set-form")).getAttribute("data-analyses")));
+        List<Object> after = bars();
+        for (int i = 0; i < before.size(); i++) {
+            assertThat(num(after.get(i))).isCloseTo(num(before.get(i)), within(1e-9));
+        }
     }
 }

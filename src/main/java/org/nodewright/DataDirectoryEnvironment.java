@@ -10,46 +10,46 @@ import org.springframework.core.env.ConfigurableEnvironment;
 import org.springframework.core.env.PropertySource;
 
 /**
- * Resolves {@code app.data-dir} (default {@code ./data}) to an absolute, existing folder and
- * publishes it as {@code app.data-dir.absolute}, since H2 refuses a bare relative file path.
- * Resolved when read, not when the environment is prepared, so that property sources added later
- * (a test's {@code @DynamicPropertySource}) are honoured.
+ * Publishes {@code app.data-dir.absolute}: {@code app.data-dir} (default {@code ./data}) as an
+ * absolute, existing folder, since H2 refuses a bare relative file path. The value is resolved
+ * when it is read, not when this post-processor runs, so property sources added later (test
+ * {@code @DynamicPropertySource}, for one) are honoured.
  */
 public class DataDirectoryEnvironment implements EnvironmentPostProcessor {
 
-    static final String ABSOLUTE = "app.data-dir.absolute";
+    static final String PROPERTY = "app.data-dir.absolute";
 
     @Override
     public void postProcessEnvironment(ConfigurableEnvironment environment, SpringApplication application) {
-        environment.getPropertySources().addLast(new DataDirectorySource(environment));
-    }
-
-    static String absolute(String configured) {
-        Path dir = Path.of(configured).toAbsolutePath().normalize();
-        try {
-            Files.createDirectories(dir);
-        } catch (IOException e) {
-            throw new UncheckedIOException("Cannot create the data directory " + dir, e);
-        }
-        return dir.toString().replace('\\', '/');
+        environment.getPropertySources().addLast(new AbsoluteDataDirectory(environment));
     }
 
     /**
-     * Answers {@code app.data-dir.absolute} only. Its source object is a plain marker, never the
-     * environment itself (Boot walks an Environment-backed source as nested property sources).
+     * The environment is kept in a field, not as the property source's "source": Boot walks into a
+     * source that is itself an environment and would then loop over this property source forever.
      */
-    private static final class DataDirectorySource extends PropertySource<Object> {
+    private static final class AbsoluteDataDirectory extends PropertySource<Object> {
 
         private final ConfigurableEnvironment environment;
 
-        DataDirectorySource(ConfigurableEnvironment environment) {
+        AbsoluteDataDirectory(ConfigurableEnvironment environment) {
             super("nodewrightDataDirectory", new Object());
             this.environment = environment;
         }
 
         @Override
         public Object getProperty(String name) {
-            return ABSOLUTE.equals(name) ? absolute(environment.getProperty("app.data-dir", "./data")) : null;
+            if (!PROPERTY.equals(name)) {
+                return null;
+            }
+            String configured = environment.getProperty("app.data-dir", "./data");
+            Path dir = Path.of(configured).toAbsolutePath().normalize();
+            try {
+                Files.createDirectories(dir);
+            } catch (IOException e) {
+                throw new UncheckedIOException("Cannot create the data directory " + dir, e);
+            }
+            return dir.toString().replace('\\', '/');
         }
     }
 }

@@ -18,14 +18,25 @@ import org.springframework.test.web.servlet.result.MockMvcResultMatchers;
 @AutoConfigureMockMvc
 class ApplicationSmokeTest {
 
+    static Path dataDir;
+
     @DynamicPropertySource
     static void dataDir(DynamicPropertyRegistry registry) throws Exception {
-        Path dir = Files.createTempDirectory("nodewright-smoke-");
-        registry.add("app.data-dir", dir::toString);
+        dataDir = Files.createTempDirectory("nodewright-smoke-");
+        registry.add("app.data-dir", dataDir::toString);
     }
 
     @Autowired
     MockMvc mvc;
+
+    @Autowired
+    org.springframework.core.env.Environment environment;
+
+    @Test
+    void theStoreLivesInTheDataDirectoryTheTestChose() {
+        assertThat(environment.getProperty("spring.datasource.url")).contains(dataDir.toAbsolutePath().toString());
+        assertThat(dataDir.resolve("nodewright.mv.db")).exists();
+    }
 
     @Test
     void healthIsUpAndTheStartPageRenders() throws Exception {

@@ -52,7 +52,8 @@ final class AirColumnMapper {
         for (AirColumnAnalysis.ResonanceResult rr : a.resonances()) {
             StandingWaveProfile p = rr.profile();
             items.add(new AirColumnResponse.ResonanceItem(rr.resonance().n(), rr.resonance().frequencyHz(),
-                    finiteOrNull(rr.resonance().q()), rr.resonance().magnitude(), note(rr.note()), rr.ratioToFirst(),
+                    finiteOrNull(rr.resonance().q()), finiteOrNull(rr.resonance().magnitude()), note(rr.note()),
+                    rr.ratioToFirst(),
                     rr.seriesMember(), rr.centsFromSeries(), mm(p.pressureNodes()), mm(p.pressureAntinodes())));
             double[] x = new double[p.positions().length];
             for (int i = 0; i < x.length; i++) {
@@ -72,7 +73,7 @@ final class AirColumnMapper {
         return new AirColumnResponse(air.speedOfSound(),
                 new AirColumnResponse.Air(air.temperatureC(), air.relativeHumidityPct(), air.density(),
                         air.viscosity(), air.thermalConductivity(), air.gamma(), air.specificHeatCp()),
-                items, new AirColumnResponse.Impedance(a.frequencyHz(), a.magnitude(), a.phaseRad()),
+                items, new AirColumnResponse.Impedance(a.frequencyHz(), finite(a.magnitude()), finite(a.phaseRad())),
                 a.series().name().toLowerCase(java.util.Locale.ROOT), profiles, fs, a.warnings());
     }
 
@@ -82,6 +83,23 @@ final class AirColumnMapper {
 
     private static List<Double> mm(List<Double> metres) {
         return metres.stream().map(v -> v / MM).toList();
+    }
+
+    /**
+     * JSON has no infinity: a lossless pole that lands exactly on a grid point is written as the
+     * largest double (and an undefined phase as 0). Returns the array itself when all are finite.
+     */
+    private static double[] finite(double[] v) {
+        double[] out = v;
+        for (int i = 0; i < v.length; i++) {
+            if (!Double.isFinite(v[i])) {
+                if (out == v) {
+                    out = v.clone();
+                }
+                out[i] = Double.isNaN(v[i]) ? 0 : Math.copySign(Double.MAX_VALUE, v[i]);
+            }
+        }
+        return out;
     }
 
     private static Double finiteOrNull(double v) {

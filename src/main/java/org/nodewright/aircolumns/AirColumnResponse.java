@@ -31,7 +31,7 @@ public record AirColumnResponse(
      * non-radiating). {@code ratioToFirst}, {@code seriesMember} and {@code centsFromSeries} give
      * the register alignment against the series named in the response's {@code series}.
      */
-    public record ResonanceItem(int n, double frequencyHz, Double q, double magnitude, Note note,
+    public record ResonanceItem(int n, double frequencyHz, Double q, Double magnitude, Note note,
             double ratioToFirst, int seriesMember, double centsFromSeries, List<Double> pressureNodesMm,
             List<Double> pressureAntinodesMm) {
     }

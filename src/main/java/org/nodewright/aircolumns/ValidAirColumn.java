@@ -50,6 +50,15 @@ public @interface ValidAirColumn {
                 ok = fail(ctx, "segments", "the bore may be at most " + AirColumnRequest.MAX_TOTAL_LENGTH_MM
                         + " mm long in total, was " + total);
             }
+            if (Double.isFinite(total) && total > 0 && r.fMinHz() != null && r.fMaxHz() != null
+                    && r.fMaxHz() > r.fMinHz()) {
+                double work = work(r, total);
+                if (work > MAX_WORK) {
+                    ok = fail(ctx, "points", String.format(Locale.ROOT, "this bore, frequency range, number of points "
+                            + "and fingerings ask for about %.2g element-frequency evaluations (limit %.0g): narrow "
+                            + "the range or use fewer points, segments or fingerings", work, MAX_WORK));
+                }
+            }
             List<AirColumnRequest.Hole> holes = r.holes();
             if (holes != null && Double.isFinite(total)) {
                 for (int i = 0; i < holes.size(); i++) {
@@ -124,6 +133,22 @@ public @interface ValidAirColumn {
                         .atIndex(Integer.parseInt(m.group(4))).addConstraintViolation();
             }
             return false;
+        }
+
+        /** Upper bound of the work one request may ask for (element-frequency evaluations). */
+        static final double MAX_WORK = 1e8;
+
+        /**
+         * Estimated element-frequency evaluations: the sweep plus, per fingering, a detection grid
+         * fine enough to separate resonances (24 cells per c/2L, c taken as 343 m/s).
+         */
+        static double work(AirColumnRequest r, double totalMm) {
+            int elements = (r.segments() == null ? 0 : r.segments().size()) + (r.holes() == null ? 0 : r.holes().size());
+            int points = r.points() == null ? 2000 : r.points();
+            double detection = Math.min(60_000, Math.max(64, (r.fMaxHz() - r.fMinHz())
+                    / (343.0 / (2 * totalMm * 1e-3) / 24)));
+            int fingerings = r.fingerings() == null ? 0 : r.fingerings().size();
+            return (double) elements * (Math.max(points, detection) + fingerings * detection);
         }
 
         private static double totalLength(List<AirColumnRequest.Segment> segments) {

@@ -3,34 +3,36 @@ package org.nodewright.designs;
 import com.fasterxml.jackson.annotation.JsonProperty;
 import java.util.Arrays;
 import java.util.Optional;
+import org.nodewright.aircolumns.AirColumnRequest;
+import org.nodewright.strings.StringAnalysisRequest;
+import org.nodewright.strings.StringSetRequest;
 
 /**
  * The kinds of design the library keeps. Each kind names the analysis request its parameters must
  * be (validated by the same rules as the analysis endpoint), the endpoint that analyses them and
- * the designer page that opens them. {@link DesignParameters} is the one place that maps a kind to
- * its request class.
+ * the designer page that opens them: the one place that maps a kind to its request class.
  */
 public enum DesignKind {
 
     @JsonProperty("string")
-    STRING("string", "org.nodewright.strings.StringAnalysisRequest", "/api/v1/strings/analyze", "/strings"),
+    STRING("string", StringAnalysisRequest.class, "/api/v1/strings/analyze", "/strings"),
 
     @JsonProperty("string-set")
-    STRING_SET("string-set", "org.nodewright.strings.StringSetRequest", "/api/v1/string-sets/analyze",
+    STRING_SET("string-set", StringSetRequest.class, "/api/v1/string-sets/analyze",
             "/string-sets"),
 
     @JsonProperty("air-column")
-    AIR_COLUMN("air-column", "org.nodewright.aircolumns.AirColumnRequest", "/api/v1/air-columns/analyze",
+    AIR_COLUMN("air-column", AirColumnRequest.class, "/api/v1/air-columns/analyze",
             "/air-columns");
 
     private final String word;
-    private final String requestClassName;
+    private final Class<?> requestClass;
     private final String analyzePath;
     private final String designerPath;
 
-    DesignKind(String word, String requestClassName, String analyzePath, String designerPath) {
+    DesignKind(String word, Class<?> requestClass, String analyzePath, String designerPath) {
         this.word = word;
-        this.requestClassName = requestClassName;
+        this.requestClass = requestClass;
         this.analyzePath = analyzePath;
         this.designerPath = designerPath;
     }
@@ -40,8 +42,9 @@ public enum DesignKind {
         return word;
     }
 
-    String requestClassName() {
-        return requestClassName;
+    /** The analysis request that this kind's parameters must be. */
+    public Class<?> requestClass() {
+        return requestClass;
     }
 
     public String analyzePath() {

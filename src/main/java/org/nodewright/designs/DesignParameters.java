@@ -4,20 +4,15 @@ import jakarta.validation.ConstraintViolation;
 import jakarta.validation.Validator;
 import java.util.ArrayList;
 import java.util.Comparator;
-import java.util.EnumMap;
 import java.util.List;
-import java.util.Map;
-import java.util.Optional;
 import org.nodewright.web.FieldProblem;
-import org.slf4j.Logger;
-import org.slf4j.LoggerFactory;
 import org.springframework.stereotype.Component;
 import tools.jackson.core.JacksonException;
 import tools.jackson.databind.JsonNode;
 import tools.jackson.databind.json.JsonMapper;
 
 /**
- * Kind to request-class registry, and the validation of a design's parameters: the JSON is read
+ * Validation of a design's parameters: the JSON is read
  * into the analysis request of its kind with the app's strict JSON mapper and run through the Bean
  * Validator, exactly as the analysis endpoint would; each problem is reported under the given
  * prefix ({@code parameters.lengthMm}, {@code designs[2].parameters.segments[0].lengthMm}).
@@ -25,30 +20,12 @@ import tools.jackson.databind.json.JsonMapper;
 @Component
 public class DesignParameters {
 
-    private static final Logger log = LoggerFactory.getLogger(DesignParameters.class);
-
     private final JsonMapper mapper;
     private final Validator validator;
-    private final Map<DesignKind, Class<?>> requestClasses = new EnumMap<>(DesignKind.class);
 
     DesignParameters(JsonMapper mapper, Validator validator) {
         this.mapper = mapper;
         this.validator = validator;
-        for (DesignKind kind : DesignKind.values()) {
-            // Looked up by name so that the store does not depend at compile time on each bench.
-            try {
-                requestClasses.put(kind, Class.forName(kind.requestClassName(), true,
-                        DesignParameters.class.getClassLoader()));
-            } catch (ClassNotFoundException e) {
-                log.warn("No request class {} for design kind {}: its parameters are only checked to be an object",
-                        kind.requestClassName(), kind.word());
-            }
-        }
-    }
-
-    /** The analysis request class of a kind, when that bench is present. */
-    public Optional<Class<?>> requestClass(DesignKind kind) {
-        return Optional.ofNullable(requestClasses.get(kind));
     }
 
     /** Problems with the parameters of a design of this kind; empty when they are valid. */
@@ -59,10 +36,7 @@ public class DesignParameters {
         if (!parameters.isObject()) {
             return List.of(new FieldProblem(prefix, "must be a JSON object"));
         }
-        Class<?> type = requestClasses.get(kind);
-        if (type == null) {
-            return List.of();
-        }
+        Class<?> type = kind.requestClass();
         Object request;
         try {
             request = mapper.treeToValue(parameters, type);

@@ -3,6 +3,8 @@ package org.nodewright.sharing;
 import java.time.Duration;
 import java.util.Locale;
 import java.util.Optional;
+import org.slf4j.Logger;
+import org.slf4j.LoggerFactory;
 import org.springframework.security.authentication.AuthenticationProvider;
 import org.springframework.security.authentication.BadCredentialsException;
 import org.springframework.security.authentication.DisabledException;
@@ -22,6 +24,8 @@ import org.springframework.security.web.authentication.WebAuthenticationDetails;
  */
 final class ThrottledAuthenticationProvider implements AuthenticationProvider {
 
+    private static final Logger log = LoggerFactory.getLogger(ThrottledAuthenticationProvider.class);
+
     private final DaoAuthenticationProvider delegate;
     private final LoginThrottle throttle;
 
@@ -37,14 +41,16 @@ final class ThrottledAuthenticationProvider implements AuthenticationProvider {
 
     @Override
     public Authentication authenticate(Authentication authentication) throws AuthenticationException {
-        String userKey = "user:" + authentication.getName().toLowerCase(Locale.ROOT);
+        String name = authentication.getName() == null ? "" : authentication.getName().toLowerCase(Locale.ROOT);
+        // Keys stay short whatever a client sends (names are at most 40 characters anyway).
+        String userKey = "user:" + (name.length() > 64 ? name.substring(0, 64) : name);
         String addressKey = "address:" + remoteAddress(authentication);
         Optional<Duration> locked = throttle.lockedFor(userKey).or(() -> throttle.lockedFor(addressKey));
         if (locked.isPresent()) {
             throw new SignInLockedException(locked.get());
         }
         UsernamePasswordAuthenticationToken normalised = UsernamePasswordAuthenticationToken.unauthenticated(
-                authentication.getName().toLowerCase(Locale.ROOT), authentication.getCredentials());
+                name, authentication.getCredentials());
         normalised.setDetails(authentication.getDetails());
         try {
             Authentication result = delegate.authenticate(normalised);
@@ -53,6 +59,9 @@ final class ThrottledAuthenticationProvider implements AuthenticationProvider {
         } catch (BadCredentialsException | DisabledException e) {
             throttle.failed(userKey);
             throttle.failed(addressKey);
+            if (throttle.lockedFor(userKey).isPresent() || throttle.lockedFor(addressKey).isPresent()) {
+                log.warn("Too many failed sign-ins: {} and {} locked out for a while", userKey, addressKey);
+            }
             // One answer for a wrong password, an unknown name and a disabled account.
             throw new BadCredentialsException("Wrong username or password, or the account is disabled");
         }

@@ -31,6 +31,10 @@ class StringAnalysisService {
             a = new StringAnalyzer().analyze(design);
         } catch (PitchUnreachableException e) {
             throw new BadRequestException("targetHz", e.getMessage());
+        } catch (IllegalStateException | org.hipparchus.exception.MathRuntimeException e) {
+            // A numerical failure on an extreme but valid design: still the client's 400, never a 500.
+            throw new BadRequestException("endCondition",
+                    "the modes could not be computed for this combination of values: " + e.getMessage());
         }
         return toResponse(r, a);
     }

@@ -1,8 +1,11 @@
 package org.nodewright.templates;
 
 import io.swagger.v3.oas.annotations.Operation;
+import io.swagger.v3.oas.annotations.tags.Tag;
 import jakarta.validation.Valid;
 import jakarta.validation.constraints.Pattern;
+import org.nodewright.aircolumns.AirColumnRequest;
+import org.nodewright.inverse.BoreMapping;
 import org.springframework.http.ResponseEntity;
 import org.springframework.web.bind.annotation.PostMapping;
 import org.springframework.web.bind.annotation.RequestBody;
@@ -11,6 +14,7 @@ import org.springframework.web.bind.annotation.RestController;
 
 /** Tone-hole drilling templates at 1:1 along a bore, as SVG and tiled PDF. */
 @RestController
+@Tag(name = "Templates")
 class ToneHoleTemplateController {
 
     private static final String NAME = "[\\p{L}\\p{N} .,'()/+-]{1,60}";
@@ -22,18 +26,17 @@ class ToneHoleTemplateController {
                     + "Draws the bore profile, each hole as a circle of its diameter (<circle data-hole=\"N\" "
                     + "data-from-input-mm data-diameter-mm>), its centre cross and distance from the input end, and a "
                     + "100 mm calibration ruler.")
-    ResponseEntity<String> svg(@Valid @RequestBody AirColumnInput bore,
+    ResponseEntity<String> svg(@Valid @RequestBody AirColumnRequest bore,
             @RequestParam(required = false) @Pattern(regexp = NAME, message = NAME_RULE) String name) {
-        bore.check("");
-        return TemplateResponses.svg(bore.toTemplate(name == null ? "bore" : name).draw(), "tone-holes");
+        return TemplateResponses.svg(BoreMapping.template(bore, name == null ? "bore" : name).draw(), "tone-holes");
     }
 
     @PostMapping(path = "/api/v1/templates/tone-holes.pdf", consumes = "application/json")
     @Operation(summary = "Tone-hole drilling template as PDF at 1:1, tiled over A4 or Letter (?paper=a4|letter)")
-    ResponseEntity<byte[]> pdf(@Valid @RequestBody AirColumnInput bore,
+    ResponseEntity<byte[]> pdf(@Valid @RequestBody AirColumnRequest bore,
             @RequestParam(required = false) @Pattern(regexp = NAME, message = NAME_RULE) String name,
             @RequestParam(required = false) String paper) {
-        bore.check("");
-        return TemplateResponses.pdf(bore.toTemplate(name == null ? "bore" : name).draw(), paper, "tone-holes");
+        return TemplateResponses.pdf(BoreMapping.template(bore, name == null ? "bore" : name).draw(), paper,
+                "tone-holes");
     }
 }

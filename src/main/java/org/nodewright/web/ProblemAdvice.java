@@ -173,10 +173,13 @@ public class ProblemAdvice extends ResponseEntityExceptionHandler {
     static String jsonPath(JacksonException je) {
         StringBuilder sb = new StringBuilder();
         List<JacksonException.Reference> path = je.getPath();
-        if (path.isEmpty() && je instanceof StreamReadException sre && sre.processor() != null) {
-            // A token-level error (NaN, truncated body): the parser still knows where it was.
-            String pointer = sre.processor().streamReadContext().pathAsPointer().toString();
-            return pointerToDotted(pointer);
+        if (je instanceof StreamReadException sre && sre.processor() != null) {
+            // A token-level error (NaN, truncated body): the parser still knows where it was, down to
+            // the property (the reference path stops at the enclosing list element).
+            String dotted = pointerToDotted(sre.processor().streamReadContext().pathAsPointer().toString());
+            if (!dotted.isEmpty() || path.isEmpty()) {
+                return dotted;
+            }
         }
         for (JacksonException.Reference ref : path) {
             if (ref.getPropertyName() != null) {

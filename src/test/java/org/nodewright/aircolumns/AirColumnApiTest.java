@@ -97,7 +97,8 @@ class AirColumnApiTest {
             "lengthMm": 300.0                         | "lengthMm": "300"                     | segments[0].lengthMm
             "lengthMm": 300.0                         | "lengthMm": null                      | segments[0].lengthMm
             "inputDiameterMm": 15.0                   | "inputDiameterMm": 0.0                | segments[0].inputDiameterMm
-            "outputDiameterMm": 15.0                  | "outputDiameterMm": NaN               | segments[0]
+            "outputDiameterMm": 15.0                  | "outputDiameterMm": NaN               | segments[0].outputDiameterMm
+            "lengthMm": 300.0                         | "lengthMm": Infinity                  | segments[0].lengthMm
             "inputEnd": "closed"                      | "inputEnd": "reed"                    | inputEnd
             "inputEnd": "closed"                      | "inputEnd": 1                         | inputEnd
             "outputEnd": "ideal-open"                 | "outputEnd": "open"                   | outputEnd

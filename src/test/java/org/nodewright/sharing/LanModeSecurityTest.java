@@ -112,22 +112,35 @@ class LanModeSecurityTest {
                 .with(httpBasic(viewer, pw(viewer)))).andExpect(status().isForbidden());
         assertThat(designsNamed("Viewer's try")).isZero();
         // Analyses are reads: the security layer lets them through (whatever the endpoint then says).
-        int analyse = mvc.perform(post("/api/v1/strings/analyze").with(httpBasic(viewer, pw(viewer)))
-                .contentType(MediaType.APPLICATION_JSON).content("{}")).andReturn().getResponse().getStatus();
-        assertThat(analyse).isNotIn(401, 403);
-        int read = mvc.perform(get("/api/v1/designs").with(httpBasic(viewer, pw(viewer))))
-                .andReturn().getResponse().getStatus();
-        assertThat(read).isNotIn(401, 403);
+        mvc.perform(post("/api/v1/strings/analyze").with(httpBasic(viewer, pw(viewer)))
+                        .contentType(MediaType.APPLICATION_JSON).content(STRING_REQUEST))
+                .andExpect(status().isOk()).andExpect(jsonPath("$.fundamentalHz").isNumber());
+        mvc.perform(get("/api/v1/designs").with(httpBasic(viewer, pw(viewer)))).andExpect(status().isOk());
         mvc.perform(get("/api/v1/accounts").with(httpBasic(viewer, pw(viewer)))).andExpect(status().isForbidden());
     }
 
     @Test
     void anEditorMayWriteDesignsButNotManageAccounts() throws Exception {
         String editor = newAccount("editor");
-        int write = mvc.perform(post("/api/v1/designs").with(httpBasic(editor, pw(editor)))
+        String created = mvc.perform(post("/api/v1/designs").with(httpBasic(editor, pw(editor)))
                         .contentType(MediaType.APPLICATION_JSON).content(designJson("Editor's archtop")))
-                .andReturn().getResponse().getStatus();
-        assertThat(write).isNotIn(401, 403);
+                .andExpect(status().isCreated())
+                .andExpect(jsonPath("$.author").value(editor))
+                .andReturn().getResponse().getContentAsString();
+        assertThat(designsNamed("Editor's archtop")).isEqualTo(1);
+        long id = Long.parseLong(created.replaceAll(".*\"id\":(\\d+).*", "$1"));
+        String viewer = newAccount("viewer");
+        mvc.perform(get("/api/v1/designs/" + id).with(httpBasic(viewer, pw(viewer))))
+                .andExpect(status().isOk()).andExpect(jsonPath("$.name").value("Editor's archtop"));
+        mvc.perform(org.springframework.test.web.servlet.request.MockMvcRequestBuilders.delete("/api/v1/designs/" + id)
+                .with(httpBasic(viewer, pw(viewer)))).andExpect(status().isForbidden());
+        mvc.perform(post("/api/v1/designs/" + id + "/revisions/1/restore").with(httpBasic(viewer, pw(viewer))))
+                .andExpect(status().isForbidden());
+        assertThat(designsNamed("Editor's archtop")).isEqualTo(1);
+        mvc.perform(org.springframework.test.web.servlet.request.MockMvcRequestBuilders.delete("/api/v1/designs/" + id)
+                .with(httpBasic(editor, pw(editor)))).andExpect(status().is2xxSuccessful());
+        assertThat(designsNamed("Editor's archtop")).isZero();
+
         mvc.perform(post("/api/v1/accounts").with(httpBasic(editor, pw(editor)))
                         .contentType(MediaType.APPLICATION_JSON)
                         .content(accountJson("sneaky" + NAMES.incrementAndGet(), "long-enough-pw", "admin")))
@@ -431,9 +444,12 @@ class LanModeSecurityTest {
         return "{\"username\":\"" + username + "\",\"password\":\"" + password + "\",\"role\":\"" + role + "\"}";
     }
 
+    /** The contract's example string request (650 mm, 70 N, plain steel 0.30 mm). */
+    private static final String STRING_REQUEST = "{\"lengthMm\":650.0,\"tensionN\":70.0,"
+            + "\"material\":\"plain-steel\",\"diameterMm\":0.3,\"modeCount\":12}";
+
     private static String designJson(String name) {
-        return "{\"name\":\"" + name + "\",\"kind\":\"string\",\"parameters\":{\"lengthMm\":650.0,\"tensionN\":70.0,"
-                + "\"material\":\"plain-steel\",\"diameterMm\":0.3,\"modeCount\":12}}";
+        return "{\"name\":\"" + name + "\",\"kind\":\"string\",\"parameters\":" + STRING_REQUEST + "}";
     }
 
     private static String nextAddress() {

@@ -116,10 +116,7 @@ class StringsApiBadInputTest {
             """)
     void malformedAnalysisIsA400NamingTheField(String find, String replace, String field) throws Exception {
         assertThat(BASE).contains(find);
-        String body = BASE.replace(find, replace);
-        MockHttpServletResponse res = mvc.perform(post("/api/v1/strings/analyze")
-                .contentType(MediaType.APPLICATION_JSON).content(body)).andReturn().getResponse();
-        assertProblem(res, 400, field, body);
+        assertPostIsProblem("/api/v1/strings/analyze", BASE.replace(find, replace), field);
     }
 
     @ParameterizedTest(name = "{index}: {0}")
@@ -138,9 +135,20 @@ class StringsApiBadInputTest {
             {"lengthMm": 650, "strings": [{"targetHz": 330, "material": "plain-steel", "diameterMm": 0.25, "lengthMm": 0}]} | strings[0].lengthMm
             """)
     void malformedSetIsA400NamingTheField(String body, String field) throws Exception {
-        MockHttpServletResponse res = mvc.perform(post("/api/v1/string-sets/analyze")
-                .contentType(MediaType.APPLICATION_JSON).content(body)).andReturn().getResponse();
-        assertProblem(res, 400, field, body);
+        assertPostIsProblem("/api/v1/string-sets/analyze", body, field);
+    }
+
+    @ParameterizedTest(name = "{index}: {0}")
+    @CsvSource(delimiter = '|', textBlock = """
+            {"targetHz": 330, "tensionN": 70, "material": "plain-steel"}                              | lengthMm
+            {"lengthMm": 650, "targetHz": "NaN", "tensionN": 70, "material": "plain-steel"}           | targetHz
+            {"lengthMm": 650, "targetHz": 330, "tensionN": -70, "material": "plain-steel"}            | tensionN
+            {"lengthMm": 650, "targetHz": 330, "tensionN": 70, "material": "mithril"}                 | material
+            {"lengthMm": 650, "targetHz": 330, "tensionN": 70, "material": "plain-steel", "wrapMaterial": "copper"} | coreDiameterMm
+            {"lengthMm": 650, "targetHz": 330, "tensionN": 70, "material": "plain-steel", "coreDiameterMm": 0.4}   | wrapMaterial
+            """)
+    void malformedGaugeIsA400NamingTheField(String body, String field) throws Exception {
+        assertPostIsProblem("/api/v1/strings/gauge", body, field);
     }
 
     @ParameterizedTest(name = "{index}: {0}")
@@ -185,6 +193,12 @@ class StringsApiBadInputTest {
                 .contentType(MediaType.APPLICATION_JSON).content(body)).andReturn().getResponse();
         assertThat(res.getStatus()).isEqualTo(400);
         assertThat(res.getContentType()).startsWith("application/problem+json");
+    }
+
+    private void assertPostIsProblem(String path, String body, String field) throws Exception {
+        MockHttpServletResponse res = mvc.perform(post(path)
+                .contentType(MediaType.APPLICATION_JSON).content(body)).andReturn().getResponse();
+        assertProblem(res, 400, field, body);
     }
 
     private void assertProblem(MockHttpServletResponse res, int status, String field, String sent) throws Exception {

@@ -82,6 +82,15 @@ class FretTemplateControllerTest {
     }
 
     @Test
+    void theOpenApiDescriptionListsTheTemplateAndInverseEndpoints() throws Exception {
+        String docs = mvc.perform(get("/v3/api-docs")).andExpect(status().isOk())
+                .andReturn().getResponse().getContentAsString();
+        assertThat(docs).contains("/api/v1/frets.svg", "/api/v1/frets.pdf", "/api/v1/templates/tone-holes.svg",
+                "/api/v1/templates/compensation", "/api/v1/inverse/gauges", "/api/v1/inverse/tone-holes",
+                "/api/v1/inverse/jobs/{id}", "Inverse design");
+    }
+
+    @Test
     void unknownPaperIsA400() throws Exception {
         mvc.perform(get("/api/v1/frets.pdf?scaleLengthMm=650&paper=a3"))
                 .andExpect(status().isBadRequest())

@@ -101,7 +101,7 @@ class ToneHoleTemplateControllerTest {
         "\"inputEnd\":\"closed\" | \"inputEnd\":\"shut\" | inputEnd",
         "\"diameterMm\":7.5 | \"diameterMm\":\"7.5\" | holes[1].diameterMm",
         "\"diameterMm\":7.5 | \"diameterMm\":1e400 | holes[1].diameterMm",
-        "\"positionMm\":250.0 | \"positionMm\":190.0 | holes[2].positionMm"
+        "\"diameterMm\":5.0 | \"diameterMm\":20.0 | holes[2].diameterMm"
     })
     void badBoresNameTheField(String from, String to, String field) throws Exception {
         mvc.perform(post("/api/v1/templates/tone-holes.svg").contentType(MediaType.APPLICATION_JSON)

@@ -53,11 +53,12 @@ public final class Radiation {
      * @param ka      Helmholtz number, &gt;= 0
      */
     public static void normalisedImpedance(boolean flanged, double ka, double[] out) {
-        double mod = flanged ? flangedModulus(ka) : unflangedModulus(ka);
+        // Beyond the fits' range (ka > 3.5) the quadratic |R| would turn negative: hold it in [0, 1].
+        double mod = Math.max(0, Math.min(1, flanged ? flangedModulus(ka) : unflangedModulus(ka)));
         double l = flanged ? flangedEndCorrection(ka) : unflangedEndCorrection(ka);
         double phi = -2 * ka * l; // R = -|R| e^{j phi}
-        double rr = -mod * Math.cos(phi);
-        double ri = -mod * Math.sin(phi);
+        double rr = -mod * SmallAngle.cos(phi);
+        double ri = -mod * SmallAngle.sin(phi);
         // (1 + R) / (1 - R)
         double nr = 1 + rr;
         double ni = ri;

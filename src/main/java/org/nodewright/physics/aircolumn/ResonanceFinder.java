@@ -12,8 +12,10 @@ import org.hipparchus.optim.univariate.UnivariatePointValuePair;
 
 /**
  * Finds the playing resonances on a sampled input-impedance curve and refines each beyond the grid:
- * Brent's method (Hipparchus {@link BrentOptimizer}) on ln|Z| (closed input, maxima) or -ln|Z|
- * (open input, minima) within the two grid cells around the sampled extremum. The quality factor
+ * a peak at least {@link #WIDE_PEAK_CELLS} cells wide by the vertex of the parabola through the
+ * three samples of ln|Z| around it; a sharper one by Brent's method (Hipparchus
+ * {@link BrentOptimizer}) on ln|Z| (closed input, maxima) or -ln|Z| (open input, minima) within
+ * the two grid cells around the sampled extremum. The quality factor
  * is f0 / (f+ - f-), f+- the half-power points where |Z|^2 (or |Y|^2) falls to half its extreme,
  * interpolated on the grid when the bandwidth spans several cells, else solved with Hipparchus
  * {@link BrentSolver}.
@@ -25,6 +27,8 @@ public final class ResonanceFinder {
     private static final double HALF_POWER = 0.5 * Math.log(2);
     private static final int MAX_EVAL = 60;
     private static final double MAX_Q = 1e7;
+    /** Peaks whose half-power half-width spans at least this many cells are refined on the grid. */
+    static final int WIDE_PEAK_CELLS = 8;
 
     private final TransferMatrixSolver solver;
     private final double sign;
@@ -70,15 +74,53 @@ public final class ResonanceFinder {
             }
             double lo = f0 + (i - 1) * df;
             double hi = f0 + (i + 1) * df;
-            UnivariatePointValuePair best = new BrentOptimizer(1e-12, 1e-9).optimize(new MaxEval(MAX_EVAL),
-                    new UnivariateObjectiveFunction(this::objective), GoalType.MAXIMIZE,
-                    new SearchInterval(lo, hi, f0 + i * df));
-            double fr = best.getPoint();
-            double peak = best.getValue();
+            double fr = f0 + i * df;
+            double peak = h[i];
+            double width = halfWidthInCells(h, i, l, r);
+            if (width >= WIDE_PEAK_CELLS) {
+                // A peak many cells wide: the parabola through ln|Z| at the three samples locates it
+                // to a small fraction of a cell (error ~ (df / bandwidth)^2 of the offset), with no
+                // further evaluations; Q from the grid-interpolated half-power points.
+                double den = h[i - 1] - 2 * h[i] + h[i + 1];
+                double t = den < 0 ? 0.5 * (h[i - 1] - h[i + 1]) / den : 0;
+                fr = f0 + (i + t) * df;
+                peak = h[i] - 0.25 * (h[i - 1] - h[i + 1]) * t;
+                double q = quality(f0, df, h, i, l, r, fr, peak);
+                out.add(new Resonance(out.size() + 1, fr, q, Math.exp(sign * peak)));
+                continue;
+            }
+            try {
+                UnivariatePointValuePair best = new BrentOptimizer(1e-12, 1e-9).optimize(new MaxEval(MAX_EVAL),
+                        new UnivariateObjectiveFunction(this::objective), GoalType.MAXIMIZE,
+                        new SearchInterval(lo, hi, f0 + i * df));
+                if (best.getValue() >= peak || Double.isNaN(peak)) {
+                    fr = best.getPoint();
+                    peak = best.getValue();
+                }
+            } catch (RuntimeException e) {
+                // Brent did not converge within its evaluation cap: keep the grid extremum.
+            }
             double q = quality(f0, df, h, i, l, r, fr, peak);
             out.add(new Resonance(out.size() + 1, fr, q, Math.exp(sign * peak)));
         }
         return out;
+    }
+
+    /** Cells from the sample peak to the nearer half-power crossing (0 when not bracketed). */
+    private static int halfWidthInCells(double[] h, int i, int l, int r) {
+        double target = h[i] - HALF_POWER;
+        int left = i;
+        while (left > l && h[left] >= target) {
+            left--;
+        }
+        int right = i;
+        while (right < r && h[right] >= target) {
+            right++;
+        }
+        if (h[left] >= target || h[right] >= target) {
+            return 0;
+        }
+        return Math.min(i - left, right - i);
     }
 
     private double quality(double f0, double df, double[] h, int i, int l, int r, double fr, double peak) {

@@ -18,7 +18,7 @@ public record StandingWaveProfile(double frequencyHz, double[] positions, double
         List<Double> pressureNodes, List<Double> pressureAntinodes) {
 
     /** Samples used to locate nodes; the node is then refined by a parabola through |p|^2. */
-    static final int FINE_SAMPLES = 1201;
+    static final int FINE_SAMPLES = 801;
 
     public StandingWaveProfile {
         if (positions.length != pressure.length || positions.length != flow.length) {

@@ -54,9 +54,17 @@ final class ToneHoleModel {
      *
      * @param k      wavenumber omega / c
      * @param sw     sqrt(rho omega / mu), so that rv = b sw (ignored without losses)
+     * @param rotRe  real part of e^{-2jk te} (te = {@link #chimneyLength()})
+     * @param rotIm  imaginary part of e^{-2jk te}
      * @param losses include wall losses in the chimney
      */
-    void impedances(double k, double sw, boolean losses, KeefeExpansion keefe, AirProperties air, double[] out) {
+    /** Chimney length t + t_m, m. */
+    double chimneyLength() {
+        return te;
+    }
+
+    void impedances(double k, double sw, double rotRe, double rotIm, boolean losses, KeefeExpansion keefe,
+            AirProperties air, double[] out) {
         // Chimney propagation Gamma = jk(1 + G), characteristic factor z (normalised to Z0h).
         double gr = 0, gi = 0, zr = 1, zi = 0;
         if (losses) {
@@ -77,21 +85,30 @@ final class ToneHoleModel {
                 zi = ex[1].getImaginary();
             }
         }
-        // X = Gamma te = a + jb with a = -k gi te, b = k (1 + gr) te; tanh X = (sinh 2a + j sin 2b)/(cosh 2a + cos 2b).
+        // X = Gamma te = jk te + (a + jb), a = -k gi te, b = k gr te; with E = e^{-2X},
+        // tanh X = (1 - E) / (1 + E) and E = e^{-2jk te} e^{-2a} e^{-2jb}.
         double a = -k * gi * te;
-        double bb = k * (1 + gr) * te;
-        double e2a = Math.exp(2 * a);
-        double sinh2a = (e2a - 1 / e2a) / 2;
-        double cosh2a = (e2a + 1 / e2a) / 2;
-        double s2b = Math.sin(2 * bb);
-        double c2b = Math.cos(2 * bb);
-        double den = cosh2a + c2b;
-        double tr = sinh2a / den;
-        double tim = s2b / den;
+        double bb = k * gr * te;
+        double er = rotRe;
+        double ei = rotIm;
+        if (losses) {
+            double ea = SmallAngle.expNeg(2 * a);
+            double cb = SmallAngle.cos(2 * bb);
+            double sb = SmallAngle.sin(2 * bb);
+            double nr = ea * (er * cb + ei * sb);
+            double ni = ea * (ei * cb - er * sb);
+            er = nr;
+            ei = ni;
+        }
+        double dnr = 1 + er;
+        double dni = ei;
+        double dd = dnr * dnr + dni * dni;
+        double tr = ((1 - er) * dnr - ei * dni) / dd;
+        double tim = (-ei * dnr - (1 - er) * dni) / dd;
         double cr;
         double ci;
         if (open) {
-            double[] rad = new double[2];
+            double[] rad = out; // scratch: out is written only at the end
             Radiation.normalisedImpedance(true, k * radius, rad);
             // Zch = z (zl + z T)/(z + zl T), all normalised to Z0h.
             double ztr = zr * tr - zi * tim;

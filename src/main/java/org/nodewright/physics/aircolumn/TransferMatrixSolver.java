@@ -18,7 +18,8 @@ import org.hipparchus.complex.Complex;
  * C = j (S1 / rho c) [(x2/x1 + 1/(k x1)^2) sin kL - L cos kL / (k x1^2)],
  * D = (x1/x2) cos kL + sin kL / (k x2); with losses k becomes the complex wavenumber -j Gamma and
  * rho c is multiplied by the characteristic-impedance factor, both taken at the mean radius
- * (lossy cones are cut into pieces whose radii differ by at most 15 %).
+ * (lossy cones are cut into pieces whose radii differ by at most 15 %; collinear segments are
+ * first joined, see {@link #mergeCollinear}).
  *
  * <p>Speed: the hot loop uses primitive-double complex arithmetic, no objects, because allocating
  * a complex object per operation (about 60 per element and frequency) would make the garbage
@@ -80,7 +81,7 @@ public final class TransferMatrixSolver {
         List<ToneHoleModel> models = new ArrayList<>();
         double xs = 0;
         int h = 0;
-        for (BoreSegment seg : column.segments()) {
+        for (BoreSegment seg : mergeCollinear(column.segments())) {
             double xe = xs + seg.length();
             double from = xs;
             while (h < sorted.size() && sorted.get(h).position() <= xe) {
@@ -150,6 +151,42 @@ public final class TransferMatrixSolver {
         outputRadius = column.segments().get(column.segments().size() - 1).outputRadius();
     }
 
+    /**
+     * Joins consecutive segments that form one straight cone or cylinder (same taper, no step):
+     * the exact cone matrix of the whole run equals the product of its parts without losses, and
+     * with losses the run is cut again below (radii within an element differ by at most 15 %), so
+     * a bore drawn as many collinear frusta costs no more than its distinct tapers.
+     */
+    static List<BoreSegment> mergeCollinear(List<BoreSegment> segments) {
+        List<BoreSegment> out = new ArrayList<>();
+        BoreSegment run = null;
+        for (BoreSegment s : segments) {
+            if (run != null && collinear(run, s)) {
+                run = new BoreSegment(run.length() + s.length(), run.inputRadius(), s.outputRadius());
+            } else {
+                if (run != null) {
+                    out.add(run);
+                }
+                run = s;
+            }
+        }
+        out.add(run);
+        return out;
+    }
+
+    private static boolean collinear(BoreSegment a, BoreSegment b) {
+        double scale = Math.max(a.outputRadius(), b.inputRadius());
+        if (Math.abs(a.outputRadius() - b.inputRadius()) > 1e-9 * scale) {
+            return false;
+        }
+        if (a.isCylinder() && b.isCylinder()) {
+            return true;
+        }
+        double ta = (a.outputRadius() - a.inputRadius()) / a.length();
+        double tb = (b.outputRadius() - b.inputRadius()) / b.length();
+        return Math.abs(ta - tb) <= 1e-9 * Math.max(Math.abs(ta), Math.abs(tb)) && ta != 0 && tb != 0;
+    }
+
     private void addPieces(List<double[]> pieces, double from, double length, double ra, double rb) {
         int n = 1;
         if (losses && ra != rb) {
@@ -201,17 +238,26 @@ public final class TransferMatrixSolver {
     private void sweep(double f0, double df, int from, int to, double[] outRe, double[] outIm) {
         double c = air.speedOfSound();
         double rhoOverMu = air.density() / air.viscosity();
+        // e^{-jkL} of every duct (and e^{-2jk te} of every hole chimney), advanced by rotation.
         double[] rotRe = new double[count];
         double[] rotIm = new double[count];
         double[] stepRe = new double[count];
         double[] stepIm = new double[count];
+        double[] rotLen = new double[count];
+        for (int e = 0; e < count; e++) {
+            rotLen[e] = isHole[e] ? 2 * holes[e].chimneyLength() : len[e];
+        }
         double dk = 2 * Math.PI * df / c;
         for (int e = 0; e < count; e++) {
-            stepRe[e] = Math.cos(dk * len[e]);
-            stepIm[e] = -Math.sin(dk * len[e]);
+            stepRe[e] = Math.cos(dk * rotLen[e]);
+            stepIm[e] = -Math.sin(dk * rotLen[e]);
         }
-        double[] st = new double[4];
         double[] hz = new double[4];
+        double[] st = new double[4];
+        double[] g = keefe.g;
+        double[] z = keefe.z;
+        double[] gv = keefe.gInv;
+        double[] zv = keefe.zInv;
         for (int i = from; i < to; i++) {
             double f = f0 + i * df;
             double omega = 2 * Math.PI * f;
@@ -221,39 +267,154 @@ public final class TransferMatrixSolver {
             double invK = 1 / k;
             boolean reseed = (i - from) % RESEED == 0;
             load(k, st);
+            double pr = st[0];
+            double pi = st[1];
+            double ur = st[2];
+            double ui = st[3];
             for (int e = count - 1; e >= 0; e--) {
-                if (isHole[e]) {
-                    holes[e].impedances(k, sw, losses, keefe, air, hz);
-                    applyHole(st, hz);
-                    continue;
-                }
                 double er;
                 double ei;
                 if (reseed) {
-                    double th = k * len[e];
+                    double th = k * rotLen[e];
                     er = Math.cos(th);
                     ei = -Math.sin(th);
                 } else {
-                    double pr = rotRe[e];
-                    double pi = rotIm[e];
-                    er = pr * stepRe[e] - pi * stepIm[e];
-                    ei = pr * stepIm[e] + pi * stepRe[e];
+                    double or = rotRe[e];
+                    double oi = rotIm[e];
+                    er = or * stepRe[e] - oi * stepIm[e];
+                    ei = or * stepIm[e] + oi * stepRe[e];
                 }
                 rotRe[e] = er;
                 rotIm[e] = ei;
-                applyDuct(st, er, ei, k, invK, invSw, len[e], r21[e], r12[e], ix1[e], ix2[e], lx12[e], ix12[e],
-                        s1[e], invPiR1R2[e], invRm[e], cone[e]);
+                if (isHole[e]) {
+                    holes[e].impedances(k, sw, er, ei, losses, keefe, air, hz);
+                    st[0] = pr;
+                    st[1] = pi;
+                    st[2] = ur;
+                    st[3] = ui;
+                    applyHole(st, hz);
+                    pr = st[0];
+                    pi = st[1];
+                    ur = st[2];
+                    ui = st[3];
+                    continue;
+                }
+                // The body of applyDuct, inlined by hand with the state in locals (the method is too
+                // large for the JIT to inline); ResonanceTest checks both paths give the same state.
+                double gr = 0, gi = 0, zr = 1, zi = 0, zir = 1, zii = 0, qr = 0, qi = 0;
+                if (losses) {
+                    double ep = invRm[e] * invSw; // 1 / rv
+                    if (ep <= KeefeExpansion.MAX_INV_RV) {
+                        gr = ep * (g[0] + ep * (g[2] + ep * g[4]));
+                        gi = ep * (g[1] + ep * (g[3] + ep * g[5]));
+                        zr = 1 + ep * (z[0] + ep * (z[2] + ep * z[4]));
+                        zi = ep * (z[1] + ep * (z[3] + ep * z[5]));
+                        zir = 1 + ep * (zv[0] + ep * (zv[2] + ep * zv[4]));
+                        zii = ep * (zv[1] + ep * (zv[3] + ep * zv[5]));
+                        qr = ep * (gv[0] + ep * (gv[2] + ep * gv[4]));
+                        qi = ep * (gv[1] + ep * (gv[3] + ep * gv[5]));
+                    } else {
+                        double[] ex = exactLoss(1 / ep);
+                        gr = ex[0];
+                        gi = ex[1];
+                        zr = ex[2];
+                        zi = ex[3];
+                        zir = ex[4];
+                        zii = ex[5];
+                        qr = ex[6];
+                        qi = ex[7];
+                    }
+                    double a = -k * gi * len[e];
+                    double b = k * gr * len[e];
+                    double ea;
+                    double cb;
+                    double sb;
+                    if (Math.abs(a) < 0.02 && Math.abs(b) < 0.02) {
+                        // Short element: 5th-order Taylor series, truncation below 1e-12.
+                        ea = 1 - a * (1 - a * H2 * (1 - a * H3 * (1 - a * H4 * (1 - a * H5))));
+                        double b2 = b * b;
+                        cb = 1 - b2 * H2 * (1 - b2 * H12 * (1 - b2 * H30));
+                        sb = b * (1 - b2 * H6 * (1 - b2 * H20));
+                    } else {
+                        ea = Math.exp(-a);
+                        cb = Math.cos(b);
+                        sb = Math.sin(b);
+                    }
+                    double nr = ea * (er * cb + ei * sb);
+                    double ni = ea * (ei * cb - er * sb);
+                    er = nr;
+                    ei = ni;
+                }
+                double m2 = er * er + ei * ei;
+                double ivr = er / m2;
+                double ivi = -ei / m2;
+                double chr = (ivr + er) * 0.5;
+                double chi = (ivi + ei) * 0.5;
+                double shr = (ivr - er) * 0.5;
+                double shi = (ivi - ei) * 0.5;
+                double ipr = invPiR1R2[e];
+                double br = (zr * shr - zi * shi) * ipr;
+                double bi = (zr * shi + zi * shr) * ipr;
+                double ar;
+                double ai;
+                double cr;
+                double ci;
+                double dr;
+                double di;
+                double area = s1[e];
+                if (!cone[e]) {
+                    ar = chr;
+                    ai = chi;
+                    dr = chr;
+                    di = chi;
+                    cr = (zir * shr - zii * shi) * area;
+                    ci = (zir * shi + zii * shr) * area;
+                } else {
+                    double ikr = (1 + qr) * invK;
+                    double iki = qi * invK;
+                    double jsr = -(shr * iki + shi * ikr);
+                    double jsi = shr * ikr - shi * iki;
+                    double q21 = r21[e];
+                    double q12 = r12[e];
+                    double i1 = ix1[e];
+                    double i2 = ix2[e];
+                    ar = q21 * chr + jsr * i1;
+                    ai = q21 * chi + jsi * i1;
+                    dr = q12 * chr - jsr * i2;
+                    di = q12 * chi - jsi * i2;
+                    double lx = lx12[e];
+                    double ix = ix12[e];
+                    double t1r = (chr * ikr - chi * iki) * lx;
+                    double t1i = (chr * iki + chi * ikr) * lx;
+                    double fr = q21 + (ikr * ikr - iki * iki) * ix;
+                    double fi = 2 * ikr * iki * ix;
+                    double wr = t1i + shr * fr - shi * fi;
+                    double wi = -t1r + shr * fi + shi * fr;
+                    cr = (zir * wr - zii * wi) * area;
+                    ci = (zir * wi + zii * wr) * area;
+                }
+                double npr = ar * pr - ai * pi + br * ur - bi * ui;
+                double npi = ar * pi + ai * pr + br * ui + bi * ur;
+                double nur = cr * pr - ci * pi + dr * ur - di * ui;
+                double nui = cr * pi + ci * pr + dr * ui + di * ur;
+                pr = npr;
+                pi = npi;
+                ur = nur;
+                ui = nui;
             }
-            double zr;
-            double zi;
-            double ur = st[2];
-            double ui = st[3];
             double d = ur * ur + ui * ui;
-            zr = (st[0] * ur + st[1] * ui) / d;
-            zi = (st[1] * ur - st[0] * ui) / d;
-            outRe[i] = zr * inputArea;
-            outIm[i] = zi * inputArea;
+            outRe[i] = (pr * ur + pi * ui) / d * inputArea;
+            outIm[i] = (pi * ur - pr * ui) / d * inputArea;
         }
+    }
+
+    /** {G re, G im, z re, z im, 1/z re, 1/z im, q re, q im} from the exact Bessel form at rv. */
+    private double[] exactLoss(double rv) {
+        Complex[] ex = ZwikkerKosten.normalisedAt(rv, air.gamma(), nu);
+        Complex zInv = ex[1].reciprocal();
+        Complex q = ex[0].reciprocal();
+        return new double[] {ex[0].getReal() - 1, ex[0].getImaginary(), ex[1].getReal(), ex[1].getImaginary(),
+            zInv.getReal(), zInv.getImaginary(), q.getReal() - 1, q.getImaginary()};
     }
 
     /** Input impedance / (rho c / S_input) at one frequency, {re, im}. */
@@ -332,17 +493,15 @@ public final class TransferMatrixSolver {
                 qr = e * (gv[0] + e * (gv[2] + e * gv[4]));
                 qi = e * (gv[1] + e * (gv[3] + e * gv[5]));
             } else {
-                Complex[] ex = ZwikkerKosten.normalisedAt(1 / e, air.gamma(), nu);
-                gr = ex[0].getReal() - 1;
-                gi = ex[0].getImaginary();
-                zr = ex[1].getReal();
-                zi = ex[1].getImaginary();
-                Complex zInv = ex[1].reciprocal();
-                zir = zInv.getReal();
-                zii = zInv.getImaginary();
-                Complex q = ex[0].reciprocal();
-                qr = q.getReal() - 1;
-                qi = q.getImaginary();
+                double[] ex = exactLoss(1 / e);
+                gr = ex[0];
+                gi = ex[1];
+                zr = ex[2];
+                zi = ex[3];
+                zir = ex[4];
+                zii = ex[5];
+                qr = ex[6];
+                qi = ex[7];
             }
             // Gamma L = jkL + (a + jb) with a = -k gi L, b = k gr L; multiply e^{-jkL} by e^{-a} e^{-jb}.
             double a = -k * gi * l;
@@ -448,7 +607,8 @@ public final class TransferMatrixSolver {
         for (int e = count - 1; e >= 0; e--) {
             downstream[e] = st.clone();
             if (isHole[e]) {
-                holes[e].impedances(k, sw, losses, keefe, air, hz);
+                double th = 2 * k * holes[e].chimneyLength();
+                holes[e].impedances(k, sw, Math.cos(th), -Math.sin(th), losses, keefe, air, hz);
                 applyHole(st, hz);
             } else {
                 applyDuct(st, Math.cos(k * len[e]), -Math.sin(k * len[e]), k, invK, invSw, len[e], r21[e], r12[e],

@@ -1,5 +1,7 @@
 package org.nodewright.physics.inverse;
 
+import org.nodewright.physics.aircolumn.Fingering;
+
 /**
  * The acoustic model the tone-hole solver drives: the frequency a fingering sounds for a hole
  * layout, searched near a guess (the previous answer or the target). Implementations wrap the

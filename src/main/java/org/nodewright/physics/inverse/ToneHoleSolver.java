@@ -3,6 +3,7 @@ package org.nodewright.physics.inverse;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.function.BooleanSupplier;
+import org.nodewright.physics.aircolumn.Fingering;
 import org.hipparchus.linear.Array2DRowRealMatrix;
 import org.hipparchus.linear.ArrayRealVector;
 import org.hipparchus.linear.RealVector;
@@ -30,7 +31,7 @@ import org.hipparchus.util.Pair;
 public final class ToneHoleSolver {
 
     /** Finite-difference step: small against a hole, large against rounding of a frequency search. */
-    public static final double STEP_MM = 1e-3;
+    public static final double STEP_MM = 1e-2;
     public static final double SPACING_WEIGHT = 50.0;
     public static final double STAY_WEIGHT = 1e-3;
 
@@ -62,9 +63,11 @@ public final class ToneHoleSolver {
             throw new IllegalArgumentException("at least one fingering is needed");
         }
         for (Fingering f : fingerings) {
-            if (f.open().length != start.holeCount()) {
-                throw new IllegalArgumentException("fingering " + f.name() + " lists " + f.open().length
-                        + " holes, the bore has " + start.holeCount());
+            for (int h : f.closedHoles()) {
+                if (h < 0 || h >= start.holeCount()) {
+                    throw new IllegalArgumentException("fingering " + f.name() + " closes hole " + h
+                            + ", the bore has " + start.holeCount());
+                }
             }
         }
         Run run = new Run(model, start, lengthBeforeFootMm, fingerings, limits, progress, cancelled);
@@ -155,10 +158,10 @@ public final class ToneHoleSolver {
             this.parameters = holes + (limits.varyDiameters() ? holes : 0) + (limits.varyFoot() ? 1 : 0);
             this.lower = new double[parameters];
             this.upper = new double[parameters];
-            double shortestBore = lengthBeforeFoot + (limits.varyFoot() ? limits.minFootMm() : start.footLengthMm());
+            double longestBore = lengthBeforeFoot + (limits.varyFoot() ? limits.maxFootMm() : start.footLengthMm());
             for (int h = 0; h < holes; h++) {
                 lower[h] = limits.minPositionMm();
-                upper[h] = shortestBore - limits.maxPositionMargin();
+                upper[h] = longestBore - limits.maxPositionMargin();
                 if (limits.varyDiameters()) {
                     lower[holes + h] = limits.minDiameterMm();
                     upper[holes + h] = limits.maxDiameterMm();
@@ -206,10 +209,16 @@ public final class ToneHoleSolver {
             return new HoleLayout(pos, dia, limits.varyFoot() ? x[parameters - 1] : start.footLengthMm());
         }
 
+        /** Box limits, then no hole centre nearer the (possibly moved) output end than the margin. */
         RealVector clamp(RealVector point) {
             double[] x = point.toArray();
             for (int p = 0; p < parameters; p++) {
                 x[p] = Math.min(upper[p], Math.max(lower[p], x[p]));
+            }
+            double foot = limits.varyFoot() ? x[parameters - 1] : start.footLengthMm();
+            double last = lengthBeforeFoot + foot - limits.maxPositionMargin();
+            for (int h = 0; h < holes; h++) {
+                x[h] = Math.max(lower[h], Math.min(last, x[h]));
             }
             return new ArrayRealVector(x, false);
         }

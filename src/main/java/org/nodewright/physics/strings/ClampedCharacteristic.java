@@ -42,8 +42,16 @@ public final class ClampedCharacteristic {
         // A fresh solver per call: Hipparchus solvers keep per-solve state and are not thread-safe.
         BracketingNthOrderBrentSolver solver =
                 new BracketingNthOrderBrentSolver(RELATIVE_ACCURACY, ABSOLUTE_ACCURACY, SOLVER_ORDER);
-        return solver.solve(MAX_EVALUATIONS, b -> characteristic(b, tau), n * Math.PI, (n + 1) * Math.PI,
-                AllowedSolution.ANY_SIDE);
+        double lo = n * Math.PI;
+        double hi = (n + 1) * Math.PI;
+        // Under high tension the root sits just above nπ, at about nπ(1 + 2/a) (Fletcher 1964's
+        // clamped correction); a bracket a few times that wide saves most of the iterations.
+        double a0 = Math.sqrt(lo * lo + tau);
+        double narrow = lo + 3 * hi / a0;
+        if (narrow < hi && characteristic(lo, tau) * characteristic(narrow, tau) < 0) {
+            hi = narrow;
+        }
+        return solver.solve(MAX_EVALUATIONS, b -> characteristic(b, tau), lo, hi, AllowedSolution.ANY_SIDE);
     }
 
     /** ω·L²·√(μ/(E·I)) = a·b: frequency f_n = b·√(b²·E·I/μ + T·L²/μ)/(2π·L²). */

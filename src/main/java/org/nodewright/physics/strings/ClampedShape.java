@@ -63,7 +63,10 @@ public final class ClampedShape implements ModeShape {
             k[i] *= rough;
         }
         ClampedShape raw = new ClampedShape(n, a, b, k, new double[0], new double[0]);
-        double[] interior = raw.findNodes(SAMPLES_PER_LOBE);
+        double[] interior = raw.findPredictedNodes();
+        if (interior.length != n - 1 && n > 1) {
+            interior = raw.findNodes(SAMPLES_PER_LOBE);
+        }
         if (interior.length != n - 1 && n > 1) {
             interior = raw.findNodes(SAMPLES_PER_LOBE * 16);
         }
@@ -134,6 +137,36 @@ public final class ClampedShape implements ModeShape {
 
     public int n() {
         return n;
+    }
+
+    /**
+     * Interior nodes bracketed around the zeros of the trigonometric part alone,
+     * C·cos bξ + D·sin bξ = R·sin(bξ + φ), i.e. ξ_j = (jπ − φ)/b for j = 1..n−1; the decaying
+     * exponentials only shift them slightly near the ends. Each bracket must show a sign change,
+     * else this returns nothing and the grid search takes over.
+     */
+    private double[] findPredictedNodes() {
+        int left = (n - 1) / 2;
+        double phi = Math.atan2(c, d);
+        double half = Math.PI / (4 * b);
+        double[] out = new double[n - 1];
+        double previous = 0;
+        for (int j = 1; j <= left; j++) {
+            double guess = (j * Math.PI - phi) / b;
+            double lo = Math.max(guess - half, previous + 1e-12);
+            double hi = Math.min(guess + half, 0.5 - 1e-12);
+            if (!(lo < hi) || value(lo) * value(hi) >= 0) {
+                return new double[0];
+            }
+            double z = rtsafe(0, lo, hi);
+            out[j - 1] = z;
+            out[n - 1 - j] = 1 - z;
+            previous = z;
+        }
+        if (n % 2 == 0) {
+            out[left] = 0.5;
+        }
+        return out;
     }
 
     /**

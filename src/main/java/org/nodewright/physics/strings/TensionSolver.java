@@ -7,7 +7,7 @@ import org.hipparchus.analysis.solvers.BracketingNthOrderBrentSolver;
  * Tension that makes the sounding fundamental equal a target pitch, stiffness included.
  * Flexible: T = μ(2Lf)². Pinned stiff: f1² = T/(4L²μ) + π²EI/(4L⁴μ) from Fletcher's f1 = f0·√(1+B),
  * so T = 4L²μf² − π²EI/L² in closed form. Clamped: f1(T) rises monotonically with T, solved with a
- * bracketing Brent solver between T → 0 (the clamped beam's own pitch) and the flexible tension.
+ * bracketing Brent solver below the pinned tension (clamped ends sound higher at equal tension).
  */
 public final class TensionSolver {
 
@@ -34,15 +34,21 @@ public final class TensionSolver {
             }
             return t;
         }
-        double tiny = flexible * 1e-12;
-        double low = fundamental(lengthM, tiny, linearDensityKgPerM, bendingStiffnessNm2, end) - targetHz;
-        if (low >= 0) {
-            throw unreachable(targetHz);
+        // Clamped ends are stiffer than pinned ones, so the pinned tension bounds the answer from
+        // above; half of it is a tight lower bound whenever B is modest, else fall back to T → 0.
+        double pinned = flexible - Math.PI * Math.PI * bendingStiffnessNm2 / (lengthM * lengthM);
+        double hi = pinned > 0 ? pinned : flexible;
+        double lo = hi / 2;
+        if (fundamental(lengthM, lo, linearDensityKgPerM, bendingStiffnessNm2, end) >= targetHz) {
+            lo = flexible * 1e-12;
+            if (fundamental(lengthM, lo, linearDensityKgPerM, bendingStiffnessNm2, end) >= targetHz) {
+                throw unreachable(targetHz);
+            }
         }
         BracketingNthOrderBrentSolver solver = new BracketingNthOrderBrentSolver(RELATIVE_ACCURACY, 1e-300, 5);
         return solver.solve(MAX_EVALUATIONS,
                 t -> fundamental(lengthM, t, linearDensityKgPerM, bendingStiffnessNm2, end) - targetHz,
-                tiny, flexible, AllowedSolution.ANY_SIDE);
+                lo, hi, AllowedSolution.ANY_SIDE);
     }
 
     /** Sounding fundamental for a tension (pitch from tension). */

@@ -14,14 +14,14 @@ import org.apache.pdfbox.pdmodel.graphics.image.PDImage;
  * bottom-left), through PDFBox's own content-stream interpreter. Curves are recorded as
  * their end points only, marked as curves.
  */
-final class PdfPaths extends PDFGraphicsStreamEngine {
+public final class PdfPaths extends PDFGraphicsStreamEngine {
 
-    record Segment(double x1, double y1, double x2, double y2, boolean curve) {
-        double length() {
+    public record Segment(double x1, double y1, double x2, double y2, boolean curve) {
+        public double length() {
             return Math.hypot(x2 - x1, y2 - y1);
         }
 
-        boolean vertical() {
+        public boolean vertical() {
             return !curve && Math.abs(x2 - x1) < 1e-6 && Math.abs(y2 - y1) > 1e-6;
         }
     }
@@ -34,7 +34,7 @@ final class PdfPaths extends PDFGraphicsStreamEngine {
         super(page);
     }
 
-    static List<Segment> of(PDPage page) throws IOException {
+    public static List<Segment> of(PDPage page) throws IOException {
         PdfPaths engine = new PdfPaths(page);
         engine.processPage(page);
         return engine.stroked;

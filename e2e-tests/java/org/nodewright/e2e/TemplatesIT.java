@@ -1,0 +1,182 @@
+package org.nodewright.e2e;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.within;
+
+import java.io.ByteArrayInputStream;
+import java.nio.charset.StandardCharsets;
+import java.time.Duration;
+import java.util.Base64;
+import java.util.List;
+import java.util.Map;
+import javax.xml.parsers.DocumentBuilderFactory;
+import org.apache.pdfbox.Loader;
+import org.junit.jupiter.api.Test;
+import org.nodewright.templates.render.PdfPaths;
+import org.openqa.selenium.By;
+import org.openqa.selenium.JavascriptExecutor;
+import org.openqa.selenium.WebElement;
+import org.openqa.selenium.support.ui.WebDriverWait;
+import org.w3c.dom.Element;
+import org.w3c.dom.NodeList;
+
+/** The bench templates page in a real browser: fret template download, tone-hole solve, apply. */
+class TemplatesIT extends BrowserTestBase {
+
+    /** 1 pt = 1/72 in, 1 in = 25.4 mm (exact). */
+    private static final double PT_PER_MM = 72.0 / 25.4;
+
+    private String fetchFromPage(String url, String body, boolean binary) {
+        Object result = ((JavascriptExecutor) driver).executeAsyncScript(
+                "const done = arguments[arguments.length - 1];"
+                        + "fetch(arguments[0], {method: 'POST', headers: {'Content-Type': 'application/json'}, body: arguments[1]})"
+                        + ".then(r => arguments[2] ? r.arrayBuffer().then(b => { let s = ''; const a = new Uint8Array(b);"
+                        + " for (let i = 0; i < a.length; i++) s += String.fromCharCode(a[i]); return btoa(s); }) : r.text())"
+                        + ".then(done, e => done('ERROR ' + e));", url, body, binary);
+        return (String) result;
+    }
+
+    @Test
+    void fretTemplatePreviewsAndItsSvgAndPdfMeasureTrue() throws Exception {
+        driver.get(url("/templates"));
+        WebElement scale = waitFor(By.id("fret-scale"));
+        scale.clear();
+        scale.sendKeys("650");
+        WebElement count = driver.findElement(By.id("fret-count"));
+        count.clear();
+        count.sendKeys("22");
+        driver.findElement(By.id("fret-positions")).sendKeys("bridge = 652.5");
+        driver.findElement(By.id("fret-preview")).click();
+        wait.until(d -> String.valueOf(js("return document.getElementById('fret-image').getAttribute('src') || ''"))
+                .startsWith("blob:"));
+        assertThat((Long) js("return document.getElementById('fret-image').naturalWidth")).isGreaterThan(0L);
+        screenshot("templates-fret-preview");
+
+        // What the page downloads, fetched the same way: the SVG parsed as XML.
+        String request = "{\"scaleLengthMm\":650,\"count\":22,\"divisionsPerOctave\":12,\"lineLengthMm\":50,"
+                + "\"positions\":[{\"label\":\"bridge\",\"positionMm\":652.5}]}";
+        String svg = fetchFromPage("/api/v1/templates/frets.svg", request, false);
+        var doc = DocumentBuilderFactory.newInstance().newDocumentBuilder()
+                .parse(new ByteArrayInputStream(svg.getBytes(StandardCharsets.UTF_8)));
+        NodeList lines = doc.getElementsByTagName("line");
+        double nut = Double.NaN;
+        double fret12 = Double.NaN;
+        double tick0 = Double.NaN;
+        double tick100 = Double.NaN;
+        for (int i = 0; i < lines.getLength(); i++) {
+            Element e = (Element) lines.item(i);
+            if ("0".equals(e.getAttribute("data-fret"))) {
+                nut = Double.parseDouble(e.getAttribute("x1"));
+            } else if ("12".equals(e.getAttribute("data-fret"))) {
+                fret12 = Double.parseDouble(e.getAttribute("x1"));
+            } else if ("0".equals(e.getAttribute("data-mm"))) {
+                tick0 = Double.parseDouble(e.getAttribute("x1"));
+            } else if ("100".equals(e.getAttribute("data-mm"))) {
+                tick100 = Double.parseDouble(e.getAttribute("x1"));
+            }
+        }
+        assertThat(fret12 - nut).isCloseTo(325.0, within(0.01)); // the octave at half the scale (common practice)
+        assertThat(tick100 - tick0).isCloseTo(100.0, within(1e-9));
+        assertThat(doc.getDocumentElement().getAttribute("width")).endsWith("mm");
+
+        // The PDF on Letter: every page carries a ruler whose 0 and 100 mm ticks are 100 mm apart.
+        String pdf64 = fetchFromPage("/api/v1/templates/frets.pdf?paper=letter", request, true);
+        try (var pdf = Loader.loadPDF(Base64.getDecoder().decode(pdf64))) {
+            assertThat(pdf.getNumberOfPages()).isGreaterThan(1);
+            for (var page : pdf.getPages()) {
+                List<Double> major = PdfPaths.of(page).stream().filter(PdfPaths.Segment::vertical)
+                        .filter(s -> Math.abs(s.length() / PT_PER_MM - 5.0) < 1e-3)
+                        .filter(s -> Math.min(s.y1(), s.y2()) / PT_PER_MM < 34.0)
+                        .map(PdfPaths.Segment::x1).sorted().toList();
+                assertThat((major.get(major.size() - 1) - major.get(0)) / PT_PER_MM).isCloseTo(100.0, within(1e-3));
+            }
+        }
+    }
+
+    @Test
+    void toneHoleSolveConvergesAndItsResultIsAppliedAndHandedToTheBoreBench() throws Exception {
+        driver.get(url("/templates"));
+        wait.until(d -> String.valueOf(js("return document.getElementById('bore-json').value")).contains("segments"));
+        String before = String.valueOf(js("return document.getElementById('bore-json').value"));
+        driver.findElement(By.id("solve-start")).click();
+        new WebDriverWait(driver, Duration.ofSeconds(60)).until(d ->
+                "succeeded".equals(js("return document.getElementById('solve-state').dataset.status")));
+        assertThat(((Number) js("return document.getElementById('solve-progress').value")).doubleValue()).isEqualTo(1.0);
+        @SuppressWarnings("unchecked")
+        List<String> cents = (List<String>) js(
+                "return [...document.querySelectorAll('#note-rows tr')].map(r => r.dataset.cents)");
+        assertThat(cents).hasSize(7).allSatisfy(c -> assertThat(Math.abs(Double.parseDouble(c))).isLessThan(3.0));
+        screenshot("templates-solved");
+
+        driver.findElement(By.id("solve-apply")).click();
+        String after = String.valueOf(js("return document.getElementById('bore-json').value"));
+        assertThat(after).isNotEqualTo(before);
+        @SuppressWarnings("unchecked")
+        List<Object> solved = (List<Object>) js("return [...document.querySelectorAll('#hole-rows tr')]"
+                + ".map(r => Number(r.children[1].textContent))");
+        @SuppressWarnings("unchecked")
+        List<Object> applied = (List<Object>) js("return JSON.parse(document.getElementById('bore-json').value)"
+                + ".holes.map(h => Number(h.positionMm.toFixed(2)))");
+        assertThat(applied).hasSize(6);
+        for (int i = 0; i < 6; i++) {
+            assertThat(((Number) applied.get(i)).doubleValue()).isCloseTo(((Number) solved.get(i)).doubleValue(),
+                    within(0.006));
+        }
+
+        // The drilling template of the applied bore shows each hole where the solver put it.
+        driver.findElement(By.id("bore-preview")).click();
+        wait.until(d -> String.valueOf(js("return document.getElementById('bore-image').getAttribute('src') || ''"))
+                .startsWith("blob:"));
+
+        // Open in the bore bench: saved as an air-column design and opened by the design bar's ?design= hook.
+        driver.findElement(By.id("solve-open")).click();
+        wait.until(d -> d.getCurrentUrl().contains("/air-columns?design="));
+        String id = driver.getCurrentUrl().replaceAll(".*design=", "");
+        @SuppressWarnings("unchecked")
+        Map<String, Object> design = (Map<String, Object>) ((JavascriptExecutor) driver).executeAsyncScript(
+                "const done = arguments[arguments.length - 1];"
+                        + "fetch('/api/v1/designs/' + arguments[0]).then(r => r.json()).then(done);", id);
+        @SuppressWarnings("unchecked")
+        Map<String, Object> bore = (Map<String, Object>) design.get("parameters");
+        @SuppressWarnings("unchecked")
+        List<Map<String, Object>> holes = (List<Map<String, Object>>) bore.get("holes");
+        assertThat(holes).hasSize(6);
+        for (int i = 0; i < 6; i++) {
+            assertThat(((Number) holes.get(i).get("positionMm")).doubleValue())
+                    .isCloseTo(((Number) solved.get(i)).doubleValue(), within(0.006));
+        }
+        assertThat((List<?>) bore.get("fingerings")).hasSize(7);
+        screenshot("templates-open-in-bore-bench");
+    }
+
+    @Test
+    void compensationAndGaugePickerFillTheirTables() throws Exception {
+        driver.get(url("/templates"));
+        waitFor(By.id("comp-run")).click();
+        wait.until(d -> !d.findElements(By.cssSelector("#comp-rows tr")).isEmpty());
+        @SuppressWarnings("unchecked")
+        List<String> setbacks = (List<String>) js("return [...document.querySelectorAll('#comp-rows tr')].map(r => r.dataset.setback)");
+        assertThat(setbacks).hasSize(6).allSatisfy(v -> assertThat(Double.parseDouble(v)).isPositive());
+        assertThat(driver.findElement(By.id("comp-model")).getText()).contains("Varieschi");
+        driver.findElement(By.id("gauge-pick")).click();
+        wait.until(d -> d.findElements(By.cssSelector("#gauge-rows tr")).size() == 7);
+        screenshot("templates-compensation-and-gauges");
+    }
+
+    @Test
+    void cancelStopsALongSolve() throws Exception {
+        driver.get(url("/templates"));
+        wait.until(d -> String.valueOf(js("return document.getElementById('bore-json').value")).contains("segments"));
+        // Ask for diameters too and start; cancel at once.
+        driver.findElement(By.id("vary-diameters")).click();
+        driver.findElement(By.id("solve-start")).click();
+        wait.until(org.openqa.selenium.support.ui.ExpectedConditions.elementToBeClickable(By.id("solve-cancel")));
+        driver.findElement(By.id("solve-cancel")).click();
+        new WebDriverWait(driver, Duration.ofSeconds(60)).until(d -> {
+            Object s = js("return document.getElementById('solve-state').dataset.status");
+            return "cancelled".equals(s) || "succeeded".equals(s);
+        });
+        assertThat(driver.findElement(By.id("solve-start")).isEnabled()).isTrue();
+        assertThat(driver.findElement(By.id("solve-cancel")).isEnabled()).isFalse();
+    }
+}
