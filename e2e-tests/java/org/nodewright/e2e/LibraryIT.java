@@ -73,8 +73,9 @@ class LibraryIT extends BrowserTestBase {
         driver.findElement(By.cssSelector("#revision-list tr[data-version='1'] .view-revision")).click();
         By tension = By.cssSelector("#revision-params tr[data-path=tensionN]");
         assertThat(settledText(tension)).contains("70");
-        assertThat(wait.ignoring(org.openqa.selenium.StaleElementReferenceException.class)
-                .until(d -> d.findElement(tension).getAttribute("class"))).contains("differs");
+        String tensionClass = wait.ignoring(org.openqa.selenium.StaleElementReferenceException.class)
+                .until(d -> d.findElement(tension).getAttribute("class"));
+        assertThat(tensionClass).contains("differs");
         driver.findElement(By.cssSelector("#revision-list tr[data-version='1'] .restore-revision")).click();
         wait.until(d -> "3".equals(d.findElement(By.cssSelector("main")).getAttribute("data-version")));
         assertThat(driver.findElements(By.cssSelector("#revision-list tbody tr"))).hasSize(3);
