@@ -18,6 +18,7 @@ import org.springframework.core.env.PropertySource;
 public class DataDirectoryEnvironment implements EnvironmentPostProcessor {
 
     static final String PROPERTY = "app.data-dir.absolute";
+    static final String SOURCE_NAME = "nodewrightDataDirectory";
 
     @Override
     public void postProcessEnvironment(ConfigurableEnvironment environment, SpringApplication application) {
@@ -25,15 +26,17 @@ public class DataDirectoryEnvironment implements EnvironmentPostProcessor {
     }
 
     /**
-     * The environment is kept in a field, not as the property source's "source": Boot walks into a
-     * source that is itself an environment and would then loop over this property source forever.
+     * Answers {@code app.data-dir.absolute} only. Its source object is a plain marker, never the
+     * environment: Boot's configuration-property adapter walks a source whose object is an
+     * Environment as nested property sources, which here would contain this very source and
+     * never end (start-up spins until the heap is gone).
      */
     private static final class AbsoluteDataDirectory extends PropertySource<Object> {
 
         private final ConfigurableEnvironment environment;
 
         AbsoluteDataDirectory(ConfigurableEnvironment environment) {
-            super("nodewrightDataDirectory", new Object());
+            super(SOURCE_NAME, new Object());
             this.environment = environment;
         }
 

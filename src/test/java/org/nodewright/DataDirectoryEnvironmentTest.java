@@ -25,4 +25,20 @@ class DataDirectoryEnvironmentTest {
         assertThat(Path.of(resolved)).isAbsolute().isEqualTo(wanted.toAbsolutePath().normalize());
         assertThat(Files.isDirectory(wanted)).isTrue();
     }
+
+    @Test
+    void bootsPropertyBinderCanWalkTheSourcesAndFindsTheFolder(@TempDir Path tmp) {
+        StandardEnvironment env = new StandardEnvironment();
+        new DataDirectoryEnvironment().postProcessEnvironment(env, null);
+        env.getPropertySources().addFirst(new MapPropertySource("late", Map.of("app.data-dir", tmp.toString())));
+        // A source backed by the Environment itself would be walked as nested sources without end.
+        assertThat(env.getPropertySources().get(DataDirectoryEnvironment.SOURCE_NAME).getSource())
+                .isNotInstanceOf(org.springframework.core.env.Environment.class);
+        org.springframework.boot.context.properties.source.ConfigurationPropertySources.attach(env);
+
+        String bound = org.springframework.boot.context.properties.bind.Binder.get(env)
+                .bind(DataDirectoryEnvironment.PROPERTY, String.class).get();
+
+        assertThat(Path.of(bound)).isEqualTo(tmp.toAbsolutePath().normalize());
+    }
 }

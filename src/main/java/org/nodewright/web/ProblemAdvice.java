@@ -213,6 +213,10 @@ public class ProblemAdvice extends ResponseEntityExceptionHandler {
     }
 
     private static String shortJacksonMessage(JacksonException je) {
+        if (je instanceof tools.jackson.databind.exc.InvalidFormatException ife && ife.getTargetType() != null
+                && ife.getTargetType().isEnum()) {
+            return "is not one of " + enumWords(ife.getTargetType());
+        }
         String m = je.getOriginalMessage();
         if (m == null) {
             return "is not readable";
@@ -222,6 +226,20 @@ public class ProblemAdvice extends ResponseEntityExceptionHandler {
         // Keep it short and free of class names.
         m = m.replaceAll("\\(class [^)]*\\)", "").replaceAll("`[a-z]+(\\.[A-Za-z0-9_$]+)+`", "value");
         return m.length() > 200 ? m.substring(0, 200) : m;
+    }
+
+    /** The words an enum accepts in JSON: each constant's {@code @JsonProperty} value, else its name. */
+    static java.util.List<String> enumWords(Class<?> type) {
+        List<String> words = new ArrayList<>();
+        for (java.lang.reflect.Field f : type.getFields()) {
+            if (!f.isEnumConstant()) {
+                continue;
+            }
+            com.fasterxml.jackson.annotation.JsonProperty jp =
+                    f.getAnnotation(com.fasterxml.jackson.annotation.JsonProperty.class);
+            words.add(jp != null && !jp.value().isEmpty() ? jp.value() : f.getName());
+        }
+        return words;
     }
 
     private static String lastNode(String propertyPath) {

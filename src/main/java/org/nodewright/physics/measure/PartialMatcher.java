@@ -28,6 +28,8 @@ public final class PartialMatcher {
     private static final int TRIAL_DIVISORS = 3;
     /** … and the lowest few loud peaks. */
     private static final int LOWEST_TRIAL_PEAKS = 8;
+    /** A matched peak further than this from the walk's own fitted law is a stray, in cents. */
+    private static final double STRAY_CENTS = 15.0;
     /** Above this many consecutive missing partials the series has ended. */
     private static final int MAX_CONSECUTIVE_MISSING = 6;
 
@@ -151,7 +153,20 @@ public final class PartialMatcher {
             fit1 = fb[0];
             fitB = fb[1];
         }
-        return new Trial(List.copyOf(out), out.size() - MISSING_PENALTY * missing, levelSum);
+        // A peak taken that the law fitted to the whole walk misses by far was noise, not a partial:
+        // it counts as missing (this keeps noise from propping up a trial an octave too low).
+        int found = 0;
+        if (count > 0) {
+            double[] fb = StiffStringLaw.lineFit(ns, hz, count);
+            for (int i = 0; i < count; i++) {
+                if (Math.abs(StiffStringLaw.cents(hz[i], StiffStringLaw.frequency(ns[i], fb[0], fb[1]))) <= STRAY_CENTS) {
+                    found++;
+                } else {
+                    missing++;
+                }
+            }
+        }
+        return new Trial(List.copyOf(out), found - MISSING_PENALTY * missing, levelSum);
     }
 
     private static SpectralPeak strongestWithin(List<SpectralPeak> sorted, double hz, double halfWidth) {

@@ -141,6 +141,53 @@ class ClampedModesTest {
         }
     }
 
+    /**
+     * Independent shape: the null vector of the 4×4 boundary matrix in the original cosh/sinh basis,
+     * X = A·cosh aξ + B·sinh aξ + C·cos bξ + D·sin bξ, from Hipparchus' SVD (no symmetry assumed, no
+     * exponential rewriting). That basis cancels catastrophically as cosh aξ grows (about e^a·1e-16),
+     * so it is used only for small a, and its own error bounds the tolerance: nodes must match
+     * ours to 1e-9 of the length (0.05 mm on 650 mm is 7.7e-5), the normalised shapes to 1e-6,
+     * for the first four modes (a ≤ 17, cosh a ≤ 1e7).
+     */
+    @ParameterizedTest(name = "tau={0}")
+    @CsvSource(textBlock = """
+            2
+            20
+            80
+            """)
+    void shapesAndNodesAgreeWithTheBoundaryMatrixNullVector(double tau) {
+        double l = 0.65;
+        StringModel s = new StringModel(l, 70, 5e-4, 70 * l * l / tau, EndCondition.CLAMPED);
+        org.hipparchus.analysis.solvers.BisectionSolver bisection =
+                new org.hipparchus.analysis.solvers.BisectionSolver(1e-14, 1e-14);
+        for (Mode m : new ModeSolver().modes(s, 4)) {
+            double b = ClampedCharacteristic.root(m.n(), tau);
+            double a = Math.sqrt(b * b + tau);
+            org.hipparchus.linear.RealMatrix bc = org.hipparchus.linear.MatrixUtils.createRealMatrix(new double[][] {
+                    {1, 0, 1, 0},
+                    {0, a, 0, b},
+                    {Math.cosh(a), Math.sinh(a), Math.cos(b), Math.sin(b)},
+                    {a * Math.sinh(a), a * Math.cosh(a), -b * Math.sin(b), b * Math.cos(b)}});
+            org.hipparchus.linear.RealMatrix v = new org.hipparchus.linear.SingularValueDecomposition(bc).getV();
+            double[] k = v.getColumn(3);
+            java.util.function.DoubleUnaryOperator x = xi -> k[0] * Math.cosh(a * xi) + k[1] * Math.sinh(a * xi)
+                    + k[2] * Math.cos(b * xi) + k[3] * Math.sin(b * xi);
+            ModeShape ours = m.shape();
+            double[] nodes = ours.nodes();
+            for (int i = 1; i < nodes.length - 1; i++) {
+                double z = nodes[i];
+                double independent = bisection.solve(10_000, x::applyAsDouble, z - 0.2 / m.n(), z + 0.2 / m.n());
+                assertThat(z).isCloseTo(independent, within(1e-9));
+            }
+            double mid = ours.antinodes()[0];
+            double scale = ours.value(mid) / x.applyAsDouble(mid);
+            for (int i = 0; i <= 50; i++) {
+                double xi = i / 50.0;
+                assertThat(ours.value(xi)).isCloseTo(scale * x.applyAsDouble(xi), within(1e-6));
+            }
+        }
+    }
+
     @Test
     void stiffClampedShapeIsNotASineNearTheEnds() {
         // τ = 25: the bending boundary layer is wide; the shape departs visibly from sin(πξ).
