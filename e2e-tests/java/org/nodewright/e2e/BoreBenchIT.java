@@ -221,13 +221,11 @@ class BoreBenchIT extends BrowserTestBase {
         // E5 closes holes 1-5; move hole 5 below hole 6: E5 must now close holes 1-4 and 6.
         driver.findElement(By.cssSelector("#hole-rows tr:nth-child(5) button.down")).click();
         assertThat(field("holes[5].positionMm").getDomProperty("value")).isEqualTo("215.5");
-        List<Boolean> closed = driver.findElements(By.cssSelector("#fingering-rows tr:nth-child(2) .fingering-holes input"))
-                .stream().map(WebElement::isSelected).toList();
+        List<Object> closed = closedHolesOfRow(2);
         assertThat(closed).containsExactly(true, true, true, true, false, true);
         // Removing hole 1 drops it from every fingering and renumbers the rest.
         driver.findElement(By.cssSelector("#hole-rows tr:nth-child(1) button.remove")).click();
-        List<Boolean> after = driver.findElements(By.cssSelector("#fingering-rows tr:nth-child(2) .fingering-holes input"))
-                .stream().map(WebElement::isSelected).toList();
+        List<Object> after = closedHolesOfRow(2);
         assertThat(after).containsExactly(true, true, true, false, true);
         // Inches on screen: 203 mm shows as 7.99213 in.
         new Select(driver.findElement(By.id("units"))).selectByValue("inch");
@@ -313,6 +311,13 @@ class BoreBenchIT extends BrowserTestBase {
         type(field("segments[0].inputDiameterMm"), plain(boreMm));
         type(field("segments[0].outputDiameterMm"), plain(boreMm));
         type(driver.findElement(By.id("points")), "2000");
+    }
+
+    /** The hole boxes of a fingering row, read in one go (the table re-renders after each analysis). */
+    @SuppressWarnings("unchecked")
+    private List<Object> closedHolesOfRow(int row) {
+        return (List<Object>) js("return [...document.querySelectorAll('#fingering-rows tr:nth-child(' + arguments[0]"
+                + " + ') .fingering-holes input')].map(b => b.checked)", row);
     }
 
     private static String plain(double v) {
