@@ -320,5 +320,11 @@ setParameters(preset('six-hole-whistle'));
 import('/js/common/design-bar.js')
   .then((m) => m.mountDesignBar(document.getElementById('design-bar'), { kind: 'air-column', getParameters, setParameters }))
   .catch(() => {});
-import('/js/listen-air.js').catch(() => {});
-import('/js/measure-air.js').catch(() => {});
+// A panel that loads after the first analysis is handed that analysis again.
+const replayLast = () => {
+  if (state.response) {
+    document.dispatchEvent(new CustomEvent('nodewright:air-analyzed', { detail: { request: state.request, response: state.response } }));
+  }
+};
+import('/js/listen-air.js').then(replayLast).catch(() => {});
+import('/js/measure-air.js').then(replayLast).catch(() => {});

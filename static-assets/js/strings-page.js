@@ -612,8 +612,14 @@ function mountNeighbours() {
   import('/js/common/design-bar.js')
     .then((m) => m.mountDesignBar(document.getElementById('design-bar'), { kind: 'string', getParameters, setParameters }))
     .catch(() => {});
-  import('/js/listen-strings.js').catch(() => {});
-  import('/js/measure-strings.js').catch(() => {});
+  // A panel that loads after the first analysis is handed that analysis again.
+  const replayLast = () => {
+    if (state.last) {
+      document.dispatchEvent(new CustomEvent('nodewright:string-analyzed', { detail: state.last }));
+    }
+  };
+  import('/js/listen-strings.js').then(replayLast).catch(() => {});
+  import('/js/measure-strings.js').then(replayLast).catch(() => {});
 }
 
 async function start() {
