@@ -50,6 +50,14 @@ class ApplicationSmokeTest {
     }
 
     @Test
+    void theOpenApiDescriptionIsServedWithOurTitle() throws Exception {
+        mvc.perform(MockMvcRequestBuilders.get("/v3/api-docs"))
+                .andExpect(MockMvcResultMatchers.status().isOk())
+                .andExpect(MockMvcResultMatchers.jsonPath("$.info.title").value("Nodewright API"))
+                .andExpect(MockMvcResultMatchers.jsonPath("$.paths['/api/v1/strings/analyze']").exists());
+    }
+
+    @Test
     void unknownApiPathIsAProblemDocumentNotAStackTrace() throws Exception {
         mvc.perform(MockMvcRequestBuilders.get("/api/v1/no-such-thing"))
                 .andExpect(MockMvcResultMatchers.status().isNotFound())

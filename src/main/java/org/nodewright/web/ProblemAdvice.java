@@ -221,6 +221,9 @@ public class ProblemAdvice extends ResponseEntityExceptionHandler {
         if (m == null) {
             return "is not readable";
         }
+        if (m.startsWith("Non-standard token")) {
+            return "must be a finite number (NaN and Infinity are not accepted)";
+        }
         int cut = m.indexOf('\n');
         m = cut > 0 ? m.substring(0, cut) : m;
         // Keep it short and free of class names.
