@@ -324,34 +324,42 @@ public final class TransferMatrixSolver {
                         qr = ex[6];
                         qi = ex[7];
                     }
+                }
+                // cosh and sinh of Gamma L = a + j theta, theta = kL + b, from cos/sin theta (the
+                // rotated e^{-jkL} times e^{-jb}) and cosh/sinh a by short series: no exp, no division
+                // (the old E, 1/E form needed one complex reciprocal per element and frequency).
+                double cth = er;
+                double sth = -ei;
+                double cha = 1;
+                double sha = 0;
+                if (losses) {
                     double a = -k * gi * len[e];
                     double b = k * gr * len[e];
-                    double ea;
                     double cb;
                     double sb;
-                    if (Math.abs(a) < 0.02 && Math.abs(b) < 0.02) {
-                        // Short element: 5th-order Taylor series, truncation below 1e-12.
-                        ea = 1 - a * (1 - a * H2 * (1 - a * H3 * (1 - a * H4 * (1 - a * H5))));
+                    if (Math.abs(a) < 0.01 && Math.abs(b) < 0.01) {
+                        // Short element (the usual case): Taylor series (A&S 4.3.65-66, 4.5.62-63);
+                        // the first omitted terms, x^6/720 and x^5/120, are below 1.4e-15 and 8.4e-13.
+                        double a2 = a * a;
+                        cha = 1 + a2 * H2 * (1 + a2 * H12);
+                        sha = a * (1 + a2 * H6);
                         double b2 = b * b;
-                        cb = 1 - b2 * H2 * (1 - b2 * H12 * (1 - b2 * H30));
-                        sb = b * (1 - b2 * H6 * (1 - b2 * H20));
+                        cb = 1 - b2 * H2 * (1 - b2 * H12);
+                        sb = b * (1 - b2 * H6);
                     } else {
-                        ea = Math.exp(-a);
+                        cha = Math.cosh(a);
+                        sha = Math.sinh(a);
                         cb = Math.cos(b);
                         sb = Math.sin(b);
                     }
-                    double nr = ea * (er * cb + ei * sb);
-                    double ni = ea * (ei * cb - er * sb);
-                    er = nr;
-                    ei = ni;
+                    // e^{-j theta} = (er + j ei)(cb - j sb)
+                    cth = er * cb + ei * sb;
+                    sth = er * sb - ei * cb;
                 }
-                double m2 = er * er + ei * ei;
-                double ivr = er / m2;
-                double ivi = -ei / m2;
-                double chr = (ivr + er) * 0.5;
-                double chi = (ivi + ei) * 0.5;
-                double shr = (ivr - er) * 0.5;
-                double shi = (ivi - ei) * 0.5;
+                double chr = cha * cth;
+                double chi = sha * sth;
+                double shr = sha * cth;
+                double shi = cha * sth;
                 double ipr = invPiR1R2[e];
                 double br = (zr * shr - zi * shi) * ipr;
                 double bi = (zr * shi + zi * shr) * ipr;
