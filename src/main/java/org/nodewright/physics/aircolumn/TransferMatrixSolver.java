@@ -27,7 +27,10 @@ import org.hipparchus.complex.Complex;
  * grid e^{-jkL} of each element is advanced by one complex rotation per frequency (re-seeded
  * exactly every 128 steps), and the wall-loss factor e^{-(Gamma - jk)L}, small for short
  * elements, by short Taylor series; so most element-frequency pairs need no sine, cosine or
- * exponential at all.
+ * exponential at all. cosh and sinh of Gamma L are formed from cos/sin of its imaginary part and
+ * cosh/sinh of its (small) real part, so no complex reciprocal is needed, and Keefe's loss
+ * polynomials carry each element's radius powers, length, 1/(pi r1 r2) and S1 in precomputed
+ * coefficients ({@code lossCoef}). CurvedBoreSweepTest checks the sweep against the per-element path.
  */
 public final class TransferMatrixSolver {
 
