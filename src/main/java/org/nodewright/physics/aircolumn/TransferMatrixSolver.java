@@ -27,7 +27,10 @@ import org.hipparchus.complex.Complex;
  * grid e^{-jkL} of each element is advanced by one complex rotation per frequency (re-seeded
  * exactly every 128 steps), and the wall-loss factor e^{-(Gamma - jk)L}, small for short
  * elements, by short Taylor series; so most element-frequency pairs need no sine, cosine or
- * exponential at all.
+ * exponential at all. cosh and sinh of Gamma L are formed from cos/sin of its imaginary part and
+ * cosh/sinh of its (small) real part, so no complex reciprocal is needed, and Keefe's loss
+ * polynomials carry each element's radius powers, length, 1/(pi r1 r2) and S1 in precomputed
+ * coefficients ({@code lossCoef}). CurvedBoreSweepTest checks the sweep against the per-element path.
  */
 public final class TransferMatrixSolver {
 
@@ -39,6 +42,7 @@ public final class TransferMatrixSolver {
     private static final long PARALLEL_WORK = 200_000;
     private static final int CHUNK = 512;
     private static final double MAX_LOSSY_CONE_RATIO = 1.15;
+    private static final int LOSS_COEFS = 24;
 
     private final AirColumn column;
     private final AirProperties air;
@@ -65,6 +69,12 @@ public final class TransferMatrixSolver {
     private final double[] lx12;
     private final double[] ix12;
     private final boolean[] cone;
+    /**
+     * Per duct, Keefe's coefficients (order 1..3 in 1/rv) pre-multiplied by invRm^n and the factor
+     * each is used with, as polynomials in 1/sqrt(rho omega/mu): [0..2] a/(k/sqrt) = -L Im G,
+     * [3..5] b = L Re G, [6..11] z/(pi r1 r2) re, im, [12..17] S1/z re, im, [18..23] q re, im.
+     */
+    private final double[] lossCoef;
     private final ToneHoleModel[] holes;
     private final double inputArea;
     private final double outputRadius;
@@ -119,6 +129,7 @@ public final class TransferMatrixSolver {
         ix12 = new double[count];
         cone = new boolean[count];
         holes = new ToneHoleModel[count];
+        lossCoef = new double[count * LOSS_COEFS];
         for (int e = 0; e < count; e++) {
             double[] p = pieces.get(e);
             start[e] = p[0];
@@ -144,6 +155,19 @@ public final class TransferMatrixSolver {
                 ix2[e] = 1 / x2[e];
                 ix12[e] = 1 / (x1[e] * x1[e]);
                 lx12[e] = p[1] * ix12[e];
+            }
+            double rn = 1;
+            for (int n = 0; n < 3; n++) {
+                rn *= invRm[e];
+                int o = e * LOSS_COEFS + n;
+                lossCoef[o] = -len[e] * rn * keefe.g[2 * n + 1];
+                lossCoef[o + 3] = len[e] * rn * keefe.g[2 * n];
+                lossCoef[o + 6] = invPiR1R2[e] * rn * keefe.z[2 * n];
+                lossCoef[o + 9] = invPiR1R2[e] * rn * keefe.z[2 * n + 1];
+                lossCoef[o + 12] = s1[e] * rn * keefe.zInv[2 * n];
+                lossCoef[o + 15] = s1[e] * rn * keefe.zInv[2 * n + 1];
+                lossCoef[o + 18] = rn * keefe.gInv[2 * n];
+                lossCoef[o + 21] = rn * keefe.gInv[2 * n + 1];
             }
         }
         BoreSegment first = column.segments().get(0);
@@ -254,10 +278,6 @@ public final class TransferMatrixSolver {
         }
         double[] hz = new double[4];
         double[] st = new double[4];
-        double[] g = keefe.g;
-        double[] z = keefe.z;
-        double[] gv = keefe.gInv;
-        double[] zv = keefe.zInv;
         for (int i = from; i < to; i++) {
             double f = f0 + i * df;
             double omega = 2 * Math.PI * f;
@@ -265,6 +285,8 @@ public final class TransferMatrixSolver {
             double sw = losses ? Math.sqrt(rhoOverMu * omega) : 0;
             double invSw = losses ? 1 / sw : 0;
             double invK = 1 / k;
+            double kws = k * invSw;
+            double kv = invK * invSw;
             boolean reseed = (i - from) % RESEED == 0;
             load(k, st);
             double pr = st[0];
@@ -301,77 +323,86 @@ public final class TransferMatrixSolver {
                 }
                 // The body of applyDuct, inlined by hand with the state in locals (the method is too
                 // large for the JIT to inline); ResonanceTest checks both paths give the same state.
-                double gr = 0, gi = 0, zr = 1, zi = 0, zir = 1, zii = 0, qr = 0, qi = 0;
+                // Loss terms with the element's factors folded in (see lossCoef): B's 1/(pi r1 r2), C's
+                // S1 and the length are inside the polynomials in 1/sqrt(rho omega/mu), so each needs
+                // only its Horner steps: zrS = Re(z)/(pi r1 r2), zirS = Re(1/z) S1, ik = 1/k_c.
+                double zrS = invPiR1R2[e], ziS = 0, zirS = s1[e], ziiS = 0, ikr = invK, iki = 0, a = 0, b = 0;
                 if (losses) {
                     double ep = invRm[e] * invSw; // 1 / rv
                     if (ep <= KeefeExpansion.MAX_INV_RV) {
-                        gr = ep * (g[0] + ep * (g[2] + ep * g[4]));
-                        gi = ep * (g[1] + ep * (g[3] + ep * g[5]));
-                        zr = 1 + ep * (z[0] + ep * (z[2] + ep * z[4]));
-                        zi = ep * (z[1] + ep * (z[3] + ep * z[5]));
-                        zir = 1 + ep * (zv[0] + ep * (zv[2] + ep * zv[4]));
-                        zii = ep * (zv[1] + ep * (zv[3] + ep * zv[5]));
-                        qr = ep * (gv[0] + ep * (gv[2] + ep * gv[4]));
-                        qi = ep * (gv[1] + ep * (gv[3] + ep * gv[5]));
+                        int o = e * LOSS_COEFS;
+                        double[] lc = lossCoef;
+                        a = kws * (lc[o] + invSw * (lc[o + 1] + invSw * lc[o + 2]));
+                        b = kws * (lc[o + 3] + invSw * (lc[o + 4] + invSw * lc[o + 5]));
+                        zrS += invSw * (lc[o + 6] + invSw * (lc[o + 7] + invSw * lc[o + 8]));
+                        ziS = invSw * (lc[o + 9] + invSw * (lc[o + 10] + invSw * lc[o + 11]));
+                        zirS += invSw * (lc[o + 12] + invSw * (lc[o + 13] + invSw * lc[o + 14]));
+                        ziiS = invSw * (lc[o + 15] + invSw * (lc[o + 16] + invSw * lc[o + 17]));
+                        ikr += kv * (lc[o + 18] + invSw * (lc[o + 19] + invSw * lc[o + 20]));
+                        iki = kv * (lc[o + 21] + invSw * (lc[o + 22] + invSw * lc[o + 23]));
                     } else {
                         double[] ex = exactLoss(1 / ep);
-                        gr = ex[0];
-                        gi = ex[1];
-                        zr = ex[2];
-                        zi = ex[3];
-                        zir = ex[4];
-                        zii = ex[5];
-                        qr = ex[6];
-                        qi = ex[7];
+                        a = -k * ex[1] * len[e];
+                        b = k * ex[0] * len[e];
+                        double ipr = zrS;
+                        double area = zirS;
+                        zrS = ex[2] * ipr;
+                        ziS = ex[3] * ipr;
+                        zirS = ex[4] * area;
+                        ziiS = ex[5] * area;
+                        ikr = (1 + ex[6]) * invK;
+                        iki = ex[7] * invK;
                     }
-                    double a = -k * gi * len[e];
-                    double b = k * gr * len[e];
-                    double ea;
+                }
+                // cosh and sinh of Gamma L = a + j theta, theta = kL + b, from cos/sin theta (the
+                // rotated e^{-jkL} times e^{-jb}) and cosh/sinh a by short series: no exp, no division
+                // (the old E, 1/E form needed one complex reciprocal per element and frequency).
+                double cth = er;
+                double sth = -ei;
+                double cha = 1;
+                double sha = 0;
+                if (losses) {
                     double cb;
                     double sb;
-                    if (Math.abs(a) < 0.02 && Math.abs(b) < 0.02) {
-                        // Short element: 5th-order Taylor series, truncation below 1e-12.
-                        ea = 1 - a * (1 - a * H2 * (1 - a * H3 * (1 - a * H4 * (1 - a * H5))));
+                    if (Math.abs(a) < 0.01 && Math.abs(b) < 0.01) {
+                        // Short element (the usual case): Taylor series (A&S 4.3.65-66, 4.5.62-63);
+                        // the first omitted terms, x^6/720 and x^5/120, are below 1.4e-15 and 8.4e-13.
+                        double a2 = a * a;
+                        cha = 1 + a2 * H2 * (1 + a2 * H12);
+                        sha = a * (1 + a2 * H6);
                         double b2 = b * b;
-                        cb = 1 - b2 * H2 * (1 - b2 * H12 * (1 - b2 * H30));
-                        sb = b * (1 - b2 * H6 * (1 - b2 * H20));
+                        cb = 1 - b2 * H2 * (1 - b2 * H12);
+                        sb = b * (1 - b2 * H6);
                     } else {
-                        ea = Math.exp(-a);
+                        cha = Math.cosh(a);
+                        sha = Math.sinh(a);
                         cb = Math.cos(b);
                         sb = Math.sin(b);
                     }
-                    double nr = ea * (er * cb + ei * sb);
-                    double ni = ea * (ei * cb - er * sb);
-                    er = nr;
-                    ei = ni;
+                    // e^{-j theta} = (er + j ei)(cb - j sb)
+                    cth = er * cb + ei * sb;
+                    sth = er * sb - ei * cb;
                 }
-                double m2 = er * er + ei * ei;
-                double ivr = er / m2;
-                double ivi = -ei / m2;
-                double chr = (ivr + er) * 0.5;
-                double chi = (ivi + ei) * 0.5;
-                double shr = (ivr - er) * 0.5;
-                double shi = (ivi - ei) * 0.5;
-                double ipr = invPiR1R2[e];
-                double br = (zr * shr - zi * shi) * ipr;
-                double bi = (zr * shi + zi * shr) * ipr;
+                double chr = cha * cth;
+                double chi = sha * sth;
+                double shr = sha * cth;
+                double shi = cha * sth;
+                double br = zrS * shr - ziS * shi;
+                double bi = zrS * shi + ziS * shr;
                 double ar;
                 double ai;
                 double cr;
                 double ci;
                 double dr;
                 double di;
-                double area = s1[e];
                 if (!cone[e]) {
                     ar = chr;
                     ai = chi;
                     dr = chr;
                     di = chi;
-                    cr = (zir * shr - zii * shi) * area;
-                    ci = (zir * shi + zii * shr) * area;
+                    cr = zirS * shr - ziiS * shi;
+                    ci = zirS * shi + ziiS * shr;
                 } else {
-                    double ikr = (1 + qr) * invK;
-                    double iki = qi * invK;
                     double jsr = -(shr * iki + shi * ikr);
                     double jsi = shr * ikr - shi * iki;
                     double q21 = r21[e];
@@ -390,8 +421,8 @@ public final class TransferMatrixSolver {
                     double fi = 2 * ikr * iki * ix;
                     double wr = t1i + shr * fr - shi * fi;
                     double wi = -t1r + shr * fi + shi * fr;
-                    cr = (zir * wr - zii * wi) * area;
-                    ci = (zir * wi + zii * wr) * area;
+                    cr = zirS * wr - ziiS * wi;
+                    ci = zirS * wi + ziiS * wr;
                 }
                 double npr = ar * pr - ai * pi + br * ur - bi * ui;
                 double npi = ar * pi + ai * pr + br * ui + bi * ur;
