@@ -6,6 +6,7 @@ import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
 import org.nodewright.web.FieldProblem;
+import org.nodewright.web.ProblemAdvice;
 import org.springframework.stereotype.Component;
 import tools.jackson.core.JacksonException;
 import tools.jackson.databind.JsonNode;
@@ -41,7 +42,7 @@ public class DesignParameters {
         try {
             request = mapper.treeToValue(parameters, type);
         } catch (JacksonException e) {
-            return List.of(new FieldProblem(join(prefix, jsonPath(e)), shortMessage(e)));
+            return List.of(new FieldProblem(join(prefix, ProblemAdvice.jsonPath(e)), ProblemAdvice.readableMessage(e)));
         } catch (IllegalArgumentException e) {
             return List.of(new FieldProblem(prefix, e.getMessage() == null ? "is invalid" : e.getMessage()));
         }
@@ -58,32 +59,5 @@ public class DesignParameters {
             return prefix;
         }
         return path.startsWith("[") ? prefix + path : prefix + "." + path;
-    }
-
-    /** Dotted path of a Jackson failure inside the parameters: {@code segments[2].lengthMm}. */
-    private static String jsonPath(JacksonException e) {
-        StringBuilder sb = new StringBuilder();
-        for (JacksonException.Reference ref : e.getPath()) {
-            if (ref.getPropertyName() != null) {
-                if (!sb.isEmpty()) {
-                    sb.append('.');
-                }
-                sb.append(ref.getPropertyName());
-            } else if (ref.getIndex() >= 0) {
-                sb.append('[').append(ref.getIndex()).append(']');
-            }
-        }
-        return sb.toString();
-    }
-
-    private static String shortMessage(JacksonException e) {
-        String m = e.getOriginalMessage();
-        if (m == null) {
-            return "is not readable";
-        }
-        int cut = m.indexOf('\n');
-        m = cut > 0 ? m.substring(0, cut) : m;
-        m = m.replaceAll("\\(class [^)]*\\)", "").replaceAll("`[a-z]+(\\.[A-Za-z0-9_$]+)+`", "value");
-        return m.length() > 200 ? m.substring(0, 200) : m;
     }
 }

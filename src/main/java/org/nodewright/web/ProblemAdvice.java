@@ -88,7 +88,7 @@ public class ProblemAdvice extends ResponseEntityExceptionHandler {
             if (!path.isEmpty()) {
                 field = path;
             }
-            message = shortJacksonMessage(je);
+            message = readableMessage(je);
         }
         return problem(badRequest("The request body could not be read.", List.of(new FieldProblem(field, message))),
                 headers);
@@ -170,7 +170,7 @@ public class ProblemAdvice extends ResponseEntityExceptionHandler {
     }
 
     /** Dotted path of a Jackson failure: {@code segments[2].lengthMm}. */
-    static String jsonPath(JacksonException je) {
+    public static String jsonPath(JacksonException je) {
         StringBuilder sb = new StringBuilder();
         List<JacksonException.Reference> path = je.getPath();
         if (je instanceof StreamReadException sre && sre.processor() != null) {
@@ -212,7 +212,8 @@ public class ProblemAdvice extends ResponseEntityExceptionHandler {
         return sb.toString();
     }
 
-    private static String shortJacksonMessage(JacksonException je) {
+    /** A short message for a Jackson failure, free of class names; also used for saved-design parameters. */
+    public static String readableMessage(JacksonException je) {
         if (je instanceof tools.jackson.databind.exc.InvalidFormatException ife && ife.getTargetType() != null
                 && ife.getTargetType().isEnum()) {
             return "is not one of " + enumWords(ife.getTargetType());
