@@ -1,8 +1,7 @@
 // Measurement panel of the bore bench: import a measured input-impedance curve (CSV of frequency,
 // magnitude, phase), draw it over the predicted curve in the impedance chart and list its peaks
 // beside the nearest predicted resonance.
-import { postForm, showFieldErrors, clearFieldErrors } from './common/api.js';
-import { loadPanel, texts, role, sig, centsBetween, onPageEvent } from './measure/panel.js';
+import { loadPanel, texts, role, sig, centsBetween, onPageEvent, sendUpload } from './measure/panel.js';
 
 const MEASURED_COLOUR = '#b5651d';
 const state = { panel: null, t: null, analysis: null, measured: null };
@@ -26,24 +25,9 @@ async function onSubmit(e) {
   data.append('file', file);
   if (form.elements.phaseUnit.value) data.append('phaseUnit', form.elements.phaseUnit.value);
   data.append('inputEnd', state.analysis?.request?.inputEnd === 'open' ? 'open' : 'closed');
-  status.textContent = state.t('busy');
-  let result;
-  try {
-    result = await postForm('/api/v1/measurements/impedance', data);
-  } catch (err) {
-    status.textContent = state.t('serverDown');
-    return;
-  }
-  if (!result.ok) {
-    showFieldErrors(form, result.problem);
-    const why = (result.problem?.errors ?? []).map((x) => x.message).join('; ') || result.problem?.detail || String(result.status);
-    status.textContent = state.t('failed', why);
-    p.dataset.measured = 'failed';
-    return;
-  }
-  clearFieldErrors(form);
-  status.textContent = '';
-  state.measured = result.data;
+  const measured = await sendUpload(state, form, '/api/v1/measurements/impedance', data);
+  if (!measured) return;
+  state.measured = measured;
   showMeasured();
 }
 

@@ -1,8 +1,7 @@
 // Measurement panel of the string bench: upload a recording (WAV) or a table of partials (CSV),
 // show the measured partials against the predicted ones in the partials chart and a table of
 // residuals, and apply the fit back to the design as an effective linear density and modulus.
-import { postForm, showFieldErrors, clearFieldErrors } from './common/api.js';
-import { loadPanel, texts, role, sig, centsBetween, onPageEvent } from './measure/panel.js';
+import { loadPanel, texts, role, sig, centsBetween, onPageEvent, sendUpload } from './measure/panel.js';
 
 const MEASURED_COLOUR = '#b5651d';
 const state = { panel: null, t: null, analysis: null, measured: null };
@@ -32,24 +31,9 @@ async function onSubmit(e) {
   data.append('file', file);
   if (form.elements.expectedF1Hz.value !== '') data.append('expectedF1Hz', form.elements.expectedF1Hz.value);
   if (form.elements.maxPartials.value !== '') data.append('maxPartials', form.elements.maxPartials.value);
-  status.textContent = state.t('busy');
-  let result;
-  try {
-    result = await postForm(isCsv(file) ? '/api/v1/measurements/partials-csv' : '/api/v1/measurements/partials', data);
-  } catch (err) {
-    status.textContent = state.t('serverDown');
-    return;
-  }
-  if (!result.ok) {
-    const unclaimed = showFieldErrors(form, result.problem);
-    const why = (result.problem?.errors ?? []).map((x) => x.message).join('; ') || result.problem?.detail || String(result.status);
-    status.textContent = state.t('failed', why) + (unclaimed.length ? '' : '');
-    p.dataset.measured = 'failed';
-    return;
-  }
-  clearFieldErrors(form);
-  status.textContent = '';
-  state.measured = result.data;
+  const measured = await sendUpload(state, form, isCsv(file) ? '/api/v1/measurements/partials-csv' : '/api/v1/measurements/partials', data);
+  if (!measured) return;
+  state.measured = measured;
   showMeasured();
 }
 

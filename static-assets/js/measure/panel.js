@@ -1,3 +1,4 @@
+import { postForm, showFieldErrors, clearFieldErrors } from '../common/api.js';
 // Helpers of the measurement and listening panels: load a panel's HTML (its text comes from
 // messages/measurements.properties through the server), read its texts, format numbers.
 
@@ -46,4 +47,30 @@ export const centsBetween = (hz, refHz) => 1200 * Math.log2(hz / refHz);
 /** Listens for a page event on window in the capture phase, whether dispatched on document or window. */
 export function onPageEvent(name, handler) {
   window.addEventListener(name, handler, true);
+}
+
+/**
+ * Posts an upload form's data and reports progress and refusals in the panel's status line and
+ * on the form's fields. Resolves to the response data, or null when it was refused or unreachable.
+ */
+export async function sendUpload(state, form, url, data) {
+  const status = role(state.panel, 'status');
+  status.textContent = state.t('busy');
+  let result;
+  try {
+    result = await postForm(url, data);
+  } catch (err) {
+    status.textContent = state.t('serverDown');
+    return null;
+  }
+  if (!result.ok) {
+    showFieldErrors(form, result.problem);
+    const why = (result.problem?.errors ?? []).map((x) => x.message).join('; ') || result.problem?.detail || String(result.status);
+    status.textContent = state.t('failed', why);
+    state.panel.dataset.measured = 'failed';
+    return null;
+  }
+  clearFieldErrors(form);
+  status.textContent = '';
+  return result.data;
 }
