@@ -23,6 +23,6 @@ public record BarMaterial(String id, String name, double density, double youngsM
 
     /** True for woods, whose dust needs the grinding caution. */
     public boolean isWood() {
-        return source.contains("Wood Handbook") || id.equals("rosewood") || id.equals("padauk");
+        return id.equals("rosewood") || id.equals("padauk") || id.equals("maple");
     }
 }

@@ -21,6 +21,8 @@ public final class ModeLine {
     private static final int MAX_EVAL = 200;
     /** Two roots closer than this share of the length are one. */
     private static final double SAME_ROOT = 1e-9;
+    /** Two maxima of |w| closer than this share of the length are one antinode (far closer than any two real ones). */
+    private static final double SAME_ANTINODE = 2e-3;
 
     private final double[] x;
     private final double[][] coef;
@@ -98,7 +100,27 @@ public final class ModeLine {
                 maxima.add(p);
             }
         }
-        return maxima;
+        return mergeClusters(maxima, SAME_ANTINODE * len);
+    }
+
+    /**
+     * Maxima closer than {@code gap} are one antinode at their mean position: a C⁰ Timoshenko
+     * element's slope may jump at a boundary lying on the crest and split it in two.
+     */
+    private static List<Double> mergeClusters(List<Double> maxima, double gap) {
+        List<Double> out = new ArrayList<>();
+        int i = 0;
+        while (i < maxima.size()) {
+            int j = i;
+            double sum = maxima.get(i);
+            while (j + 1 < maxima.size() && maxima.get(j + 1) - maxima.get(j) < gap) {
+                j++;
+                sum += maxima.get(j);
+            }
+            out.add(sum / (j - i + 1));
+            i = j + 1;
+        }
+        return out;
     }
 
     /** The largest |w| over the bar, from the element polynomials' ends and stationary points. */

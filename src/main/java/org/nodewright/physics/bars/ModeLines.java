@@ -21,13 +21,14 @@ final class ModeLines {
         double[] w = raw.sample(xs);
         int big = 0;
         for (int i = 1; i < SAMPLES; i++) {
-            if (Math.abs(w[i]) > Math.abs(w[big]) * (1 + 1e-9)) {
+            if (Math.abs(w[i]) > Math.abs(w[big])) {
                 big = i;
             }
         }
-        double scale = 1.0 / w[big];
+        double peak = w[big];
+        double scale = 1.0 / peak;
         for (int i = 0; i < SAMPLES; i++) {
-            w[i] *= scale;
+            w[i] = w[i] / peak;
         }
         ModeLine line = raw.scaled(scale);
         List<Double> nodes = new ArrayList<>();

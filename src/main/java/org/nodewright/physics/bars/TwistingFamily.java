@@ -12,7 +12,7 @@ import java.util.List;
 final class TwistingFamily {
 
     /** Quadratic elements per half-wave of the highest twisting mode wanted (error under 0.05 cent). */
-    static final double ELEMENTS_PER_HALF_WAVE = 4.0;
+    static final double ELEMENTS_PER_HALF_WAVE = 6.0;
     static final int MIN_ELEMENTS = 12;
     /** Gauss points per element: exact for a tapered rectangle's I_p (cubic) times the quadratic basis squared (degree 7). */
     private static final int RULE = 4;
