@@ -171,6 +171,21 @@ class StringsApiBadInputTest {
         assertProblem(res, 400, field, query);
     }
 
+    // The shapes query option: "chart" or "none", and none cannot go with a shapeSamples count.
+    @ParameterizedTest(name = "{index}: {0}")
+    @CsvSource(delimiter = '|', textBlock = """
+            shapes=all      | ''                       | shapes
+            shapes=NONE     | ''                       | shapes
+            shapes=         | ''                       | shapes
+            shapes=none     | , "shapeSamples": 11     | shapeSamples
+            """)
+    void malformedShapesOptionIsA400(String query, String extra, String field) throws Exception {
+        String body = BASE.substring(0, BASE.length() - 1) + extra + "}";
+        MockHttpServletResponse res = mvc.perform(post("/api/v1/strings/analyze?" + query)
+                .contentType(MediaType.APPLICATION_JSON).content(body)).andReturn().getResponse();
+        assertProblem(res, 400, field, query + " " + extra);
+    }
+
     @ParameterizedTest(name = "{index}: {0}")
     @CsvSource(delimiter = '|', textBlock = """
             /api/v1/strings/analyze     | text/plain
