@@ -9,7 +9,7 @@ import org.nodewright.physics.inverse.GaugePicker;
 import org.nodewright.physics.inverse.GaugeStock;
 import org.nodewright.physics.strings.Material;
 import org.nodewright.physics.strings.Materials;
-import org.nodewright.physics.strings.StressCheck;
+import org.nodewright.strings.StressWording;
 import org.nodewright.strings.StringRules;
 import org.springframework.web.bind.annotation.PostMapping;
 import org.springframework.web.bind.annotation.RequestBody;
@@ -21,6 +21,12 @@ import org.springframework.web.bind.annotation.RestController;
 class GaugeController {
 
     private static final double INCH_MM = 25.4;
+
+    private final StressWording wording;
+
+    GaugeController(StressWording wording) {
+        this.wording = wording;
+    }
 
     @PostMapping(path = "/api/v1/inverse/gauges", consumes = "application/json")
     @Operation(summary = "Pick gauges for a target tension profile (or one string's gauge for one tension)",
@@ -53,9 +59,9 @@ class GaugeController {
                     : request.availableGaugesMm().stream().map(mm -> mm * 1e-3).toList();
             GaugePicker.Pick p = GaugePicker.pick(t, gauges);
             total += p.choice().tensionN();
-            picks.add(GaugeResponse.StringPick.of(p));
+            picks.add(GaugeResponse.StringPick.of(p, wording.warnings(p.stress())));
         }
-        return new GaugeResponse(picks, total, StressCheck.CAUTION);
+        return new GaugeResponse(picks, total, wording.caution());
     }
 
     record GaugeResponse(List<StringPick> strings, double totalTensionN, String caution) {
@@ -71,7 +77,7 @@ class GaugeController {
                 double linearDensityKgPerM, double tensionN, double offPct, double exactDiameterMm,
                 double stressPa, double stressPct, Neighbour thinner, Neighbour thicker, List<String> warnings) {
 
-            static StringPick of(GaugePicker.Pick p) {
+            static StringPick of(GaugePicker.Pick p, List<String> warnings) {
                 var c = p.choice().construction();
                 double outerMm = p.choice().outerDiameterM() * 1e3;
                 boolean wound = p.target().wound();
@@ -80,7 +86,7 @@ class GaugeController {
                         wound ? c.coreDiameterM() * 1e3 : null, wound ? c.wrapDiameterM() * 1e3 : null,
                         c.linearDensityKgPerM(), p.choice().tensionN(), 100 * p.offFraction(),
                         p.exactDiameterM() * 1e3, p.stress().stressPa(), 100 * p.stress().fractionOfStrength(),
-                        Neighbour.of(p.thinner()), Neighbour.of(p.thicker()), p.stress().warnings());
+                        Neighbour.of(p.thinner()), Neighbour.of(p.thicker()), warnings);
             }
         }
     }

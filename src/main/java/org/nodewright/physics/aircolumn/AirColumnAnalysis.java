@@ -9,7 +9,7 @@ import org.nodewright.physics.tuning.Note;
  */
 public record AirColumnAnalysis(AirProperties air, double[] frequencyHz, double[] magnitude, double[] phaseRad,
         List<ResonanceResult> resonances, HarmonicSeries series, List<FingeringResult> fingerings,
-        List<String> warnings) {
+        List<AirColumnWarning> warnings) {
 
     /**
      * One resonance with its nearest note, standing wave and register alignment.
