@@ -3,6 +3,7 @@
 // τ = Q/(π f) (a resonator of quality factor Q loses amplitude as e^{−πft/Q}). "blown": the
 // harmonics of the lowest resonance, each ∝ |Z(h·f1)|/h, held for 1.5 s — resonances that line up
 // with harmonics strengthen them, as in a reed or lip-driven tone. Not a played note.
+import { showPanelFailure } from './common/panels.js';
 import { loadPanel, texts, role, onPageEvent } from './measure/panel.js';
 import { play, setVolume, stopAll, state as audioState } from './measure/voices.js';
 
@@ -72,4 +73,4 @@ onPageEvent('nodewright:air-analyzed', (e) => {
   if (e.detail?.response) state.analysis = e.detail;
 });
 
-init().catch((e) => console.warn('listening panel not loaded', e));
+init().catch((e) => showPanelFailure('listen-panel', 'listen-air', e));

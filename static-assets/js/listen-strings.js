@@ -1,6 +1,7 @@
 // Listening panel of the string bench: plays the designed string from its last analysis —
 // predicted partials (stiffness included) weighted by the pluck and the chosen pickups, each
 // decaying at its own rate — and compares two remembered versions ("A" and "B").
+import { showPanelFailure } from './common/panels.js';
 import { loadPanel, texts, role, sig, onPageEvent } from './measure/panel.js';
 import { play, schedule, audio, setVolume, stopAll, state as audioState } from './measure/voices.js';
 
@@ -129,4 +130,4 @@ onPageEvent('nodewright:string-analyzed', (e) => {
   if (state.panel) fillSources();
 });
 
-init().catch((e) => console.warn('listening panel not loaded', e));
+init().catch((e) => showPanelFailure('listen-panel', 'listen-strings', e));

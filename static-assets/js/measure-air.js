@@ -1,7 +1,10 @@
 // Measurement panel of the bore bench: import a measured input-impedance curve (CSV of frequency,
 // magnitude, phase), draw it over the predicted curve in the impedance chart and list its peaks
 // beside the nearest predicted resonance.
-import { loadPanel, texts, role, sig, centsBetween, onPageEvent, sendUpload } from './measure/panel.js';
+import { loadPanel, texts, role, sig, onPageEvent, sendUpload } from './measure/panel.js';
+import { cents as centsBetween } from './common/notes.js';
+import { drawChart, setOverlay } from './common/charts.js';
+import { showPanelFailure } from './common/panels.js';
 
 const MEASURED_COLOUR = '#b5651d';
 const state = { panel: null, t: null, analysis: null, measured: null };
@@ -59,29 +62,24 @@ function drawMeasured() {
   const m = state.measured;
   if (!m) return;
   const scaleOn = role(state.panel, 'scale').checked;
-  const pageCanvas = document.getElementById('impedance-chart');
-  const pageChart = pageCanvas && typeof Chart !== 'undefined' ? Chart.getChart(pageCanvas) : null;
-  const k = scaleOn && pageChart ? scaleToPrediction(m.impedance.magnitude, state.analysis?.response?.impedance?.magnitude) : 1;
+  const onBench = document.getElementById('impedance-chart') !== null;
+  const k = scaleOn && onBench ? scaleToPrediction(m.impedance.magnitude, state.analysis?.response?.impedance?.magnitude) : 1;
   const points = m.impedance.frequencyHz.map((x, i) => ({ x, y: m.impedance.magnitude[i] * k }));
   const dataset = { kind: 'measured', label: state.t('chartLabel'), data: points, yAxisID: 'y', borderColor: MEASURED_COLOUR,
     borderWidth: 1.2, borderDash: [5, 3], pointRadius: 0, tension: 0 };
-  if (pageChart) {
-    pageChart.data.datasets = pageChart.data.datasets.filter((ds) => ds.kind !== 'measured');
-    pageChart.data.datasets.push(dataset);
-    pageChart.update('none');
+  if (onBench) {
+    // The bench owns the impedance chart; the measured curve is an overlay it puts back after each redraw.
+    setOverlay('impedance-chart', 'measured', () => [dataset]);
     return;
   }
   const box = role(state.panel, 'own-chart');
   box.hidden = false;
-  const canvas = box.querySelector('canvas');
-  const old = Chart.getChart(canvas);
-  if (old) old.destroy();
-  new Chart(canvas, {
+  drawChart(box.querySelector('canvas'), {
     type: 'line',
     data: { datasets: [dataset] },
     options: { animation: false, parsing: false, maintainAspectRatio: false,
       scales: { x: { type: 'linear', title: { display: true, text: 'Hz' } }, y: { type: 'logarithmic' } } },
-  });
+  }, { replace: true });
 }
 
 async function init() {
@@ -98,8 +96,8 @@ async function init() {
 onPageEvent('nodewright:air-analyzed', (e) => {
   if (!e.detail?.response) return;
   state.analysis = e.detail;
-  // The page replaces its chart after each analysis (and may redraw it for a fingering): overlay after it.
-  if (state.measured) setTimeout(showMeasured, 0);
+  // The table compares with the new prediction; the chart overlay follows the bench's redraws by itself.
+  if (state.measured) showMeasured();
 });
 
-init().catch((e) => console.warn('impedance panel not loaded', e));
+init().catch((e) => showPanelFailure(document.getElementById('measure-air-panel') ? 'measure-air-panel' : 'measure-panel', 'measure-air', e));

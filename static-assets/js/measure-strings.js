@@ -1,7 +1,10 @@
 // Measurement panel of the string bench: upload a recording (WAV) or a table of partials (CSV),
 // show the measured partials against the predicted ones in the partials chart and a table of
 // residuals, and apply the fit back to the design as an effective linear density and modulus.
-import { loadPanel, texts, role, sig, centsBetween, onPageEvent, sendUpload } from './measure/panel.js';
+import { loadPanel, texts, role, sig, onPageEvent, sendUpload } from './measure/panel.js';
+import { cents as centsBetween } from './common/notes.js';
+import { drawChart, setOverlay } from './common/charts.js';
+import { showPanelFailure } from './common/panels.js';
 
 const MEASURED_COLOUR = '#b5651d';
 const state = { panel: null, t: null, analysis: null, measured: null };
@@ -68,37 +71,32 @@ function drawMeasured() {
   const m = state.measured;
   if (!m) return;
   const points = measuredCents(m);
-  const pageCanvas = document.getElementById('partials-chart');
-  const pageChart = pageCanvas && typeof Chart !== 'undefined' ? Chart.getChart(pageCanvas) : null;
-  if (pageChart) {
-    const data = pageChart.data;
-    const maxN = Math.max(...points.map((x) => x.n), ...(data.labels ?? []).map(Number));
-    if (!data.labels || data.labels.length < maxN) {
-      data.labels = Array.from({ length: maxN }, (_, i) => String(i + 1));
-    }
-    const byN = new Map(points.map((x) => [x.n, x.cents]));
-    data.datasets = data.datasets.filter((ds) => ds.kind !== 'measured');
-    data.datasets.push({
-      type: 'line', kind: 'measured', label: state.t('chartLabel'), showLine: false, pointRadius: 5,
-      pointStyle: 'rectRot', borderColor: MEASURED_COLOUR, backgroundColor: MEASURED_COLOUR,
-      data: data.labels.map((l) => (byN.has(Number(l)) ? byN.get(Number(l)) : null)),
+  if (document.getElementById('partials-chart')) {
+    // The bench owns its partials chart; the measured points ride on it as an overlay, put back
+    // after each of its redraws.
+    setOverlay('partials-chart', 'measured', (chart) => {
+      const data = chart.data;
+      const maxN = Math.max(...points.map((x) => x.n), ...(data.labels ?? []).map(Number));
+      if (!data.labels || data.labels.length < maxN) data.labels = Array.from({ length: maxN }, (_, i) => String(i + 1));
+      const byN = new Map(points.map((x) => [x.n, x.cents]));
+      return [{
+        type: 'line', kind: 'measured', label: state.t('chartLabel'), showLine: false, pointRadius: 5,
+        pointStyle: 'rectRot', borderColor: MEASURED_COLOUR, backgroundColor: MEASURED_COLOUR,
+        data: data.labels.map((l) => (byN.has(Number(l)) ? byN.get(Number(l)) : null)),
+      }];
     });
-    pageChart.update('none');
     return;
   }
   // No design chart on this page (the Measure page): draw our own.
   const box = role(state.panel, 'own-chart');
   box.hidden = false;
-  const canvas = box.querySelector('canvas');
-  const old = Chart.getChart(canvas);
-  if (old) old.destroy();
-  new Chart(canvas, {
+  drawChart(box.querySelector('canvas'), {
     type: 'scatter',
     data: { datasets: [{ kind: 'measured', label: state.t('chartLabel'), data: points.map((x) => ({ x: x.n, y: x.cents })),
       pointRadius: 5, pointStyle: 'rectRot', borderColor: MEASURED_COLOUR, backgroundColor: MEASURED_COLOUR }] },
     options: { animation: false, maintainAspectRatio: false,
       scales: { x: { title: { display: true, text: 'n' }, ticks: { stepSize: 1 } }, y: { title: { display: true, text: state.t('chartAxis') } } } },
-  });
+  }, { replace: true });
 }
 
 /** Tension, length and core diameter from the last analysis of the design, unless typed in. */
@@ -164,7 +162,7 @@ onPageEvent('nodewright:string-analyzed', (e) => {
   state.analysis = e.detail;
   if (!state.panel) return;
   fillApplyInputs(false);
-  if (state.measured) showMeasured(); // the page redrew its chart: put the measured points back
+  if (state.measured) showMeasured(); // the design changed: compare the measured partials with it again
 });
 
-init().catch((e) => console.warn('measurement panel not loaded', e));
+init().catch((e) => showPanelFailure('measure-panel', 'measure-strings', e));

@@ -97,7 +97,7 @@ class StringAnalysisService {
                 r.referenceA4OrDefault(), r.endOrDefault().name().toLowerCase(java.util.Locale.ROOT), r.stiffnessOn(),
                 clampedShapes ? "clamped-beam-under-tension" : "sine",
                 r.pickupCombination() == null ? null : r.pickupCombination().name().toLowerCase(java.util.Locale.ROOT),
-                modes);
+                modes, StressLevel.of(strength == null ? null : stress.fractionOfStrength()));
     }
 
     private static StringAnalysisResponse.ModeJson mode(StringAnalysis.ModeResponse m, double lengthMm,
