@@ -9,6 +9,7 @@ import org.nodewright.physics.aircolumn.BoreSegment;
 import org.nodewright.physics.aircolumn.InputEnd;
 import org.nodewright.physics.aircolumn.OutputEnd;
 import org.nodewright.physics.aircolumn.ToneHole;
+import org.nodewright.physics.tuning.EqualTemperament;
 import org.springframework.boot.context.event.ApplicationReadyEvent;
 import org.springframework.context.event.EventListener;
 import org.springframework.stereotype.Component;
@@ -39,7 +40,7 @@ class AirColumnWarmUp {
         for (OutputEnd end : OutputEnd.values()) {
             AirColumn col = new AirColumn(segs, holes, InputEnd.CLOSED, end, AirProperties.at(20, 50), true);
             for (int r = 0; r < 6; r++) {
-                new AirColumnAnalyzer(440, 201).analyze(col, 20, 3000, 4000, List.of());
+                new AirColumnAnalyzer(EqualTemperament.ISO_16_A4_HZ, 201).analyze(col, 20, 3000, 4000, List.of());
             }
         }
     }

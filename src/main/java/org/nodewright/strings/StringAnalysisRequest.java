@@ -12,8 +12,9 @@ import java.util.ArrayList;
 import java.util.List;
 import org.nodewright.physics.strings.Materials;
 import org.nodewright.physics.strings.ModeSolver;
-import org.nodewright.web.Finite;
+import org.nodewright.physics.tuning.EqualTemperament;
 import org.nodewright.web.FieldProblem;
+import org.nodewright.web.Finite;
 
 /**
  * Body of {@code POST /api/v1/strings/analyze}. Lengths in mm, tension in N, SI otherwise.
@@ -51,7 +52,7 @@ public record StringAnalysisRequest(
 
     public static final int DEFAULT_MODE_COUNT = 12;
     public static final int DEFAULT_SHAPE_SAMPLES = 201;
-    public static final double DEFAULT_A4_HZ = 440.0;
+    public static final double DEFAULT_A4_HZ = EqualTemperament.ISO_16_A4_HZ;
 
     /** Where and how the string is set in motion. */
     public record Pluck(@NotNull @Finite Double positionMm, Words.Kind kind) {
