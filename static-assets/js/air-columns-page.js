@@ -5,6 +5,7 @@
 import { clearFieldErrors, postJson, showFieldErrors } from './common/api.js';
 import { createRequestLoop } from './common/request-loop.js';
 import { loadPanels, showPanelFailure } from './common/panels.js';
+import { OPEN_AIR_COLUMN, BORE_FOR_TEMPLATES, handOver, handedOver } from './common/handover.js';
 import { fmt, fromMm } from './common/units.js';
 import { BoreEditor, parseNumber } from './air/editor.js';
 import { drawBore } from './air/drawing.js';
@@ -307,7 +308,28 @@ $('cents-tolerance').addEventListener('input', () => {
 $('reference-a4').addEventListener('input', changed);
 window.addEventListener('resize', () => drawCurrentBore());
 
-setParameters(preset('six-hole-whistle'));
+/** A bore handed over by the bench templates' solver (unsaved), else the workshop whistle. */
+function openFirstBore() {
+  try {
+    const handed = handedOver(OPEN_AIR_COLUMN, { take: true });
+    if (handed?.request) {
+      setParameters(handed.request);
+      $('handover-note').textContent = t('fromTemplates');
+      return;
+    }
+  } catch (error) {
+    $('handover-note').textContent = t('handOverFailed', error.message);
+  }
+  setParameters(preset('six-hole-whistle'));
+}
+
+/** This bore to the bench templates (drilling template, hole solver), unsaved. */
+$('send-to-templates').addEventListener('click', () => {
+  handOver(BORE_FOR_TEMPLATES, { source: 'air-columns', request: getParameters() });
+  window.location.assign('/templates#from-bore-bench');
+});
+
+openFirstBore();
 
 // Integration hooks: the design bar (save/load), and the listening and measuring panels, each
 // handed the last analysis when it loads; a panel that fails to load says so in its place.

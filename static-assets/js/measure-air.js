@@ -3,7 +3,7 @@
 // beside the nearest predicted resonance.
 import { loadPanel, texts, role, sig, onPageEvent, sendUpload } from './measure/panel.js';
 import { cents as centsBetween } from './common/notes.js';
-import { drawChart, setOverlay } from './common/charts.js';
+import { drawChart, setOverlay, clearOverlay } from './common/charts.js';
 import { showPanelFailure } from './common/panels.js';
 
 const MEASURED_COLOUR = '#b5651d';
@@ -29,9 +29,18 @@ async function onSubmit(e) {
   if (form.elements.phaseUnit.value) data.append('phaseUnit', form.elements.phaseUnit.value);
   data.append('inputEnd', state.analysis?.request?.inputEnd === 'open' ? 'open' : 'closed');
   const measured = await sendUpload(state, form, '/api/v1/measurements/impedance', data);
-  if (!measured) return;
+  if (!measured) { clearMeasured(); return; }
   state.measured = measured;
   showMeasured();
+}
+
+/** A refused upload leaves no earlier curve or table under its error. */
+function clearMeasured() {
+  state.measured = null;
+  role(state.panel, 'result').hidden = true;
+  role(state.panel, 'peaks').tBodies[0].replaceChildren();
+  role(state.panel, 'own-chart').hidden = true;
+  clearOverlay('impedance-chart', 'measured');
 }
 
 function showMeasured() {

@@ -3,8 +3,9 @@
 // residuals, and apply the fit back to the design as an effective linear density and modulus.
 import { loadPanel, texts, role, sig, onPageEvent, sendUpload } from './measure/panel.js';
 import { cents as centsBetween } from './common/notes.js';
-import { drawChart, setOverlay } from './common/charts.js';
+import { drawChart, setOverlay, clearOverlay } from './common/charts.js';
 import { showPanelFailure } from './common/panels.js';
+import { APPLY_STRING_PARAMETERS, handOver } from './common/handover.js';
 
 const MEASURED_COLOUR = '#b5651d';
 const state = { panel: null, t: null, analysis: null, measured: null };
@@ -35,9 +36,18 @@ async function onSubmit(e) {
   if (form.elements.expectedF1Hz.value !== '') data.append('expectedF1Hz', form.elements.expectedF1Hz.value);
   if (form.elements.maxPartials.value !== '') data.append('maxPartials', form.elements.maxPartials.value);
   const measured = await sendUpload(state, form, isCsv(file) ? '/api/v1/measurements/partials-csv' : '/api/v1/measurements/partials', data);
-  if (!measured) return;
+  if (!measured) { clearMeasured(); return; }
   state.measured = measured;
   showMeasured();
+}
+
+/** A refused upload leaves no earlier fit, table or points under its error. */
+function clearMeasured() {
+  state.measured = null;
+  role(state.panel, 'result').hidden = true;
+  role(state.panel, 'peaks').tBodies[0].replaceChildren();
+  role(state.panel, 'own-chart').hidden = true;
+  clearOverlay('partials-chart', 'measured');
 }
 
 function showMeasured() {
@@ -133,10 +143,22 @@ function preview() {
   return e;
 }
 
+const onBench = () => document.getElementById('string-form') !== null;
+
 function onApply() {
   const p = state.panel;
   const e = preview();
   if (!e) { role(p, 'status').textContent = state.t('missing'); return; }
+  if (!onBench()) {
+    // No design on this page: open the string bench with the fit and the values it was made with.
+    const { T, L, d } = applyInputs();
+    const handed = { lengthMm: L, diameterMm: d, tensionN: T, ...e };
+    handOver(APPLY_STRING_PARAMETERS, handed);
+    role(p, 'status').textContent = state.t('opening', sig(e.linearDensityKgPerM * 1000, 6), sig(e.youngsModulusPa / 1e9, 5));
+    p.dataset.applied = JSON.stringify(handed);
+    window.location.assign('/strings#from-measure');
+    return;
+  }
   document.dispatchEvent(new CustomEvent('nodewright:apply-string-parameters', { detail: { ...e } }));
   role(p, 'status').textContent = state.t('done', sig(e.linearDensityKgPerM * 1000, 6), sig(e.youngsModulusPa / 1e9, 5));
   p.dataset.applied = JSON.stringify(e);
@@ -152,6 +174,10 @@ async function init() {
   role(panel, 'apply').addEventListener('click', onApply);
   for (const name of ['tension', 'length', 'diameter']) {
     role(panel, name).addEventListener('input', (e) => { e.target.dataset.auto = 'false'; preview(); });
+  }
+  if (!onBench()) {
+    role(panel, 'apply-legend').textContent = state.t('openLegend');
+    role(panel, 'apply').textContent = state.t('openButton');
   }
   fillApplyInputs(false);
   panel.dataset.ready = 'true';

@@ -1,6 +1,7 @@
 // Set planner: the tension each string of a set needs for its pitch, its stress, and the total
 // load on the neck. Requests go to POST /api/v1/string-sets/analyze in mm and N.
 import { postJson } from './common/api.js';
+import { problemInUserUnits } from './common/units.js';
 import { readNumber, readPitch, unitInputs, loadMaterials, defaultWrap, localChecks } from './common/string-form.js';
 import { drawChart, baseOptions } from './common/charts.js';
 import { createRequestLoop, formView } from './common/request-loop.js';
@@ -199,6 +200,7 @@ const loop = createRequestLoop({
       form.dataset.analyses = String(Number(form.dataset.analyses || 0) + 1);   // lets tests and neighbours see a fresh answer
     },
     text: { fix: t('fixFields'), down: t('serverDown') },
+    prepare: (problem) => problemInUserUnits(problem, io.units),
   }),
 });
 const analyze = () => loop.run();

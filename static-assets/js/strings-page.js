@@ -3,11 +3,12 @@
 // the tables (tables.js); this file wires them to the page kernel's request loop.
 // The form speaks the user's units; every request to the API is in mm and N (units.js converts).
 import { postJson } from './common/api.js';
-import { toMm } from './common/units.js';
+import { toMm, problemInUserUnits } from './common/units.js';
 import { enableLineDrag } from './common/charts.js';
 import { createRequestLoop, formView } from './common/request-loop.js';
 import { loadPanels, showPanelFailure } from './common/panels.js';
 import { loadMaterials, defaultWrap } from './common/string-form.js';
+import { APPLY_STRING_PARAMETERS, handedOver } from './common/handover.js';
 import { form, $, t, io } from './strings/context.js';
 import { buildRequest, fillForm, showConstruction, wound } from './strings/form.js';
 import { addPickupRow, addPickupWhereRoom, buildSliders, syncSliders, moveMarker, onPickupsChanged } from './strings/pickups.js';
@@ -35,6 +36,7 @@ const loop = createRequestLoop({
     form, message: $('form-problem'), busy: $('busy'), render,
     stale: () => [...document.querySelectorAll('.bench-results, #modes-panel')],
     text: { fix: t('fixFields'), down: t('serverDown') },
+    prepare: (problem) => problemInUserUnits(problem, io.units),
   }),
 });
 const analyze = () => loop.run();
@@ -100,6 +102,16 @@ function mountNeighbours() {
   ], loop);
 }
 
+/** Values handed over by the Measure page's "Open the string bench with the fit" (unsaved). */
+function takeHandOver() {
+  try {
+    const handed = handedOver(APPLY_STRING_PARAMETERS, { take: true });
+    if (handed) fillForm(handed, true);
+  } catch (error) {
+    $('form-problem').textContent = t('handOverFailed', error.message);
+  }
+}
+
 async function start() {
   // Harrowgate Lane Workshop's parlour guitar, first string: a bridge pickup and a neck pickup.
   addPickupRow(610, 10);
@@ -108,6 +120,7 @@ async function start() {
   showConstruction();
   wire();
   await loadCatalogue();
+  takeHandOver();
   mountNeighbours();
   await analyze();
 }

@@ -37,3 +37,16 @@ test('display rounding', () => {
   assert.equal(fmt(647.6999999999999, 2), '647.70');
   assert.equal(fmt(null), '');
 });
+
+test('server messages in the user\'s units, without float noise', async () => {
+  const { inUserUnits, figure } = await import('../../../static-assets/js/common/units.js');
+  assert.equal(figure(647.6999999999999), '647.7');
+  // 647.7 mm = 25.5 in exactly (647.7 / 25.4).
+  assert.equal(inUserUnits('must lie strictly between the nut (0) and the bridge (647.6999999999999 mm)', { length: 'inch' }),
+    'must lie strictly between the nut (0) and the bridge (25.5 in)');
+  assert.equal(inUserUnits('must lie on the string, between 0 and 647.6999999999999 mm', { length: 'mm' }),
+    'must lie on the string, between 0 and 647.7 mm');
+  assert.equal(inUserUnits('must be at most 100 kg/m'), 'must be at most 100000 g/m');
+  assert.equal(inUserUnits('must be at least 1e-9 kg/m'), 'must be at least 0.000001 g/m');
+  assert.equal(inUserUnits('must be greater than 0'), 'must be greater than 0');
+});

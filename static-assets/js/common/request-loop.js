@@ -110,8 +110,9 @@ export function createRequestLoop({ build, send, view = {}, event = null, target
  * a busy marker (an element hidden while idle, or a function(on)) and a stale marker (class 'stale' while the results shown do
  * not belong to the form's values). render(request, response) draws an answer.
  *   text: { fix: message for refusals, down: message when the server did not answer }
+ *   prepare(problem) → problem: e.g. the messages in the user's units (units.js inUserUnits)
  */
-export function formView({ form, message, busy, stale = [], render, text, onRefused }) {
+export function formView({ form, message, busy, stale = [], render, text, onRefused, prepare = (p) => p }) {
   const staleEls = () => (typeof stale === 'function' ? stale() : stale);
   const mark = (on) => staleEls().forEach((el) => el.classList.toggle('stale', on));
   return {
@@ -126,6 +127,7 @@ export function formView({ form, message, busy, stale = [], render, text, onRefu
       render(request, response, seq);
     },
     refused(problem, request, seq, local) {
+      problem = prepare(problem);
       const unclaimed = showFieldErrors(form, problem);
       const detail = !local && problem?.detail ? ` ${problem.detail}` : '';
       if (message) {

@@ -26,3 +26,28 @@ export function fmt(value, digits = 3) {
   if (value === null || value === undefined || Number.isNaN(value)) return '';
   return Number(value).toFixed(digits);
 }
+
+/** A figure for a message: six significant digits at most, no float noise ("647.7", not "647.6999999999999"). */
+export function figure(value) {
+  return String(Number(Number(value).toPrecision(6)));
+}
+
+const FIGURE = '(-?\\d+(?:\\.\\d+)?(?:[eE][+-]?\\d+)?)';
+
+/**
+ * A server message in the user's units: lengths written "… mm" in the length unit shown, linear
+ * densities "… kg/m" in g/m (the field's unit), each figure rounded for reading. The server's
+ * field names and meanings stay as they are; only the words shown change.
+ */
+export function inUserUnits(message, { length = 'mm' } = {}) {
+  const lengthWord = length === 'inch' ? 'in' : length;
+  return String(message ?? '')
+    .replace(new RegExp(`${FIGURE} ?kg/m\\b`, 'g'), (_, v) => `${figure(Number(v) * 1000)} g/m`)
+    .replace(new RegExp(`${FIGURE} ?mm\\b`, 'g'), (_, v) => `${figure(fromMm(Number(v), length))} ${lengthWord}`);
+}
+
+/** A problem document whose field messages are shown in the user's units (inUserUnits). */
+export function problemInUserUnits(problem, units) {
+  if (!problem?.errors) return problem;
+  return { ...problem, errors: problem.errors.map((e) => ({ ...e, message: inUserUnits(e.message, units) })) };
+}

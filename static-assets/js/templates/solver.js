@@ -3,11 +3,9 @@
 // bore and opened in the bore bench).
 import { clearFieldErrors, getJson, postJson, sendJson } from '../common/api.js';
 import { fmt } from '../common/units.js';
+import { OPEN_AIR_COLUMN, BORE_FOR_TEMPLATES, handOver, handedOver } from '../common/handover.js';
 import { $, t, num, postForBlob, showProblem, say, showImage, download } from './shared.js';
 
-/** Hand-over keys (sessionStorage): the bore bench reads OPEN_KEY, and may leave a bore in FROM_KEY. */
-export const OPEN_KEY = 'nodewright.openAirColumn';
-export const FROM_KEY = 'nodewright.boreForTemplates';
 
 const POLL_MS = 200;
 const state = { job: null, result: null, timer: null, limits: {} };
@@ -83,12 +81,17 @@ async function loadDemo() {
 }
 
 function fromBench() {
-  const stored = sessionStorage.getItem(FROM_KEY);
-  if (!stored) {
+  let handed;
+  try {
+    handed = handedOver(BORE_FOR_TEMPLATES);
+  } catch (error) {
+    showProblem(borePanel, $('bore-message'), { detail: t('badJson', error.message) });
+    return;
+  }
+  if (!handed) {
     say($('bore-message'), t('noBench'));
     return;
   }
-  const handed = JSON.parse(stored);
   state.limits = {};
   showBore(handed.request || handed);
   say($('bore-message'), t('fromBench'));
@@ -219,19 +222,12 @@ function applyResult() {
 }
 
 /**
- * Hands the adjusted bore to the bore bench: saved as an air-column design in the shop library and
- * opened with /air-columns?design=ID (the design bar's own hook). When the library refuses it, the
- * bore goes through sessionStorage under OPEN_KEY and the page opens at /air-columns#from-templates.
+ * Hands the adjusted bore to the bore bench unsaved (sessionStorage); the bore bench opens it and
+ * says that it is not saved yet. Nothing goes to the shop library until someone saves it there.
  */
-async function openInBench() {
+function openInBench() {
   if (!state.result) return;
-  const stamp = new Date().toISOString().slice(0, 16).replace('T', ' ');
-  const answer = await postJson('/api/v1/designs', { name: `${t('solvedName')} ${stamp}`, kind: 'air-column', parameters: state.result.bore });
-  if (answer.ok && answer.data && answer.data.id !== undefined) {
-    window.location.assign(`/air-columns?design=${encodeURIComponent(answer.data.id)}`);
-    return;
-  }
-  sessionStorage.setItem(OPEN_KEY, JSON.stringify({ source: 'templates', request: state.result.bore }));
+  handOver(OPEN_AIR_COLUMN, { source: 'templates', request: state.result.bore });
   window.location.assign('/air-columns#from-templates');
 }
 
@@ -244,4 +240,4 @@ $('solve-cancel').addEventListener('click', cancelSolve);
 $('solve-apply').addEventListener('click', applyResult);
 $('solve-open').addEventListener('click', openInBench);
 
-if (sessionStorage.getItem(FROM_KEY)) fromBench(); else loadDemo();
+if (sessionStorage.getItem(BORE_FOR_TEMPLATES)) fromBench(); else loadDemo();

@@ -100,16 +100,17 @@ public @interface ValidAirColumn {
                 for (int j = 0; j < f.closedHoles().size(); j++) {
                     Integer idx = f.closedHoles().get(j);
                     if (idx != null && idx >= holeCount) {
-                        ok = fail(ctx, base + ".closedHoles[" + j + "]", "must be the index of a hole (0.."
-                                + (holeCount - 1) + ")");
+                        // The field path counts from 0 (the contract); the words number holes from 1, as the pages do.
+                        ok = fail(ctx, base + ".closedHoles[" + j + "]", "names hole " + (idx + 1)
+                                + ", but the bore has " + (holeCount == 0 ? "no holes" : "holes 1 to " + holeCount));
                     }
                 }
             }
             boolean hasNote = f.targetNote() != null;
             boolean hasHz = f.targetHz() != null;
             if (hasNote == hasHz) {
-                ok = fail(ctx, base + ".targetHz", hasNote ? "give targetHz or targetNote, not both"
-                        : "give targetHz or targetNote");
+                ok = fail(ctx, base + ".targetHz", hasNote ? "give the target pitch once: as a note or in Hz, not both"
+                        : "enter the target pitch: a note such as D5, or a frequency in Hz");
             } else if (hasNote && !NoteNames.isNoteName(f.targetNote())) {
                 ok = fail(ctx, base + ".targetNote", "must be a note name such as D5, F#4 or Bb3");
             }

@@ -13,6 +13,7 @@ import org.nodewright.physics.strings.StressCheck;
 import org.nodewright.physics.tuning.EqualTemperament;
 import org.nodewright.physics.tuning.NoteNames;
 import org.nodewright.web.BadRequestException;
+import org.nodewright.strings.StringAnalysisRequest;
 import org.nodewright.web.FieldProblem;
 import org.springframework.web.bind.annotation.PostMapping;
 import org.springframework.web.bind.annotation.RequestBody;
@@ -59,13 +60,13 @@ class GaugeController {
             }
             Material core = Materials.find(s.material()).orElse(null);
             if (core == null) {
-                problems.add(new FieldProblem(at + "material", "is not a material id of GET /api/v1/materials"));
+                problems.add(new FieldProblem(at + "material", StringAnalysisRequest.unknownMaterial(s.material())));
             }
             Material wrap = null;
             if (s.wrapMaterial() != null) {
                 wrap = Materials.find(s.wrapMaterial()).orElse(null);
                 if (wrap == null) {
-                    problems.add(new FieldProblem(at + "wrapMaterial", "is not a material id of GET /api/v1/materials"));
+                    problems.add(new FieldProblem(at + "wrapMaterial", StringAnalysisRequest.unknownMaterial(s.wrapMaterial())));
                 }
             }
             if (problems.isEmpty()) {

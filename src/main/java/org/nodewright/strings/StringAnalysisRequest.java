@@ -137,7 +137,7 @@ public record StringAnalysisRequest(
             double x = r.pluck.positionMm;
             if (!(x > 0 && x < length)) {
                 out.add(new FieldProblem("pluck.positionMm",
-                        "must lie strictly between the nut (0) and the bridge (" + length + " mm)"));
+                        "must lie strictly between the nut (0) and the bridge (" + FieldProblem.figure(length) + " mm)"));
             }
         }
         if (r.pickups == null) {
@@ -151,7 +151,7 @@ public record StringAnalysisRequest(
             double x = p.positionMm;
             if (!(x >= 0 && x <= length)) {
                 out.add(new FieldProblem("pickups[" + i + "].positionMm",
-                        "must lie on the string, between 0 and " + length + " mm"));
+                        "must lie on the string, between 0 and " + FieldProblem.figure(length) + " mm"));
             } else if (p.apertureMm != null && Double.isFinite(p.apertureMm) && p.apertureMm >= 0
                     && (x - p.apertureMm / 2 < 0 || x + p.apertureMm / 2 > length)) {
                 out.add(new FieldProblem("pickups[" + i + "].apertureMm",
@@ -161,8 +161,8 @@ public record StringAnalysisRequest(
     }
 
     /** Unknown-material message shared by requests. */
-    static String unknownMaterial(String id) {
-        return "is not a known material: '" + id + "' (see GET /api/v1/materials; known: "
+    public static String unknownMaterial(String id) {
+        return "is not a material of the catalogue: '" + id + "' (choose one of: "
                 + String.join(", ", Materials.all().stream().map(m -> m.id()).toList()) + ")";
     }
 }

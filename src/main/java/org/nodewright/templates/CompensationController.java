@@ -22,6 +22,7 @@ import org.nodewright.physics.templates.IntonationCompensation;
 import org.nodewright.physics.tuning.EqualTemperament;
 import org.nodewright.physics.tuning.NoteNames;
 import org.nodewright.web.BadRequestException;
+import org.nodewright.strings.StringAnalysisRequest;
 import org.nodewright.web.FieldProblem;
 import org.nodewright.web.Finite;
 import org.springframework.web.bind.annotation.PostMapping;
@@ -107,10 +108,10 @@ class CompensationController {
             Material core = Materials.find(s.material()).orElse(null);
             Material wrap = s.wrapMaterial() == null ? null : Materials.find(s.wrapMaterial()).orElse(null);
             if (core == null) {
-                problems.add(new FieldProblem(at + "material", "is not a material id of GET /api/v1/materials"));
+                problems.add(new FieldProblem(at + "material", StringAnalysisRequest.unknownMaterial(s.material())));
             }
             if (s.wrapMaterial() != null && wrap == null) {
-                problems.add(new FieldProblem(at + "wrapMaterial", "is not a material id of GET /api/v1/materials"));
+                problems.add(new FieldProblem(at + "wrapMaterial", StringAnalysisRequest.unknownMaterial(s.wrapMaterial())));
             }
             if ((s.wrapMaterial() == null) != (s.wrapDiameterMm() == null)) {
                 problems.add(new FieldProblem(at + "wrapDiameterMm", "give wrapMaterial and wrapDiameterMm together"));
