@@ -1,0 +1,97 @@
+package org.nodewright.web;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.post;
+
+import com.jayway.jsonpath.JsonPath;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.CsvSource;
+import org.springframework.beans.factory.annotation.Autowired;
+import org.springframework.boot.test.context.SpringBootTest;
+import org.springframework.boot.webmvc.test.autoconfigure.AutoConfigureMockMvc;
+import org.springframework.http.MediaType;
+import org.springframework.test.context.DynamicPropertyRegistry;
+import org.springframework.test.context.DynamicPropertySource;
+import org.springframework.test.web.servlet.MockMvc;
+
+/**
+ * Field messages a maker reads on the page: what to enter, in the page's own terms (hole numbers
+ * from 1, no parser or endpoint names, figures without binary noise). The field paths stay the
+ * contract's.
+ */
+@SpringBootTest
+@AutoConfigureMockMvc
+class UserWordsTest {
+
+    @DynamicPropertySource
+    static void dataDir(DynamicPropertyRegistry registry) throws Exception {
+        Path dir = Files.createTempDirectory("nodewright-words-");
+        registry.add("app.data-dir", dir::toString);
+    }
+
+    @Autowired
+    MockMvc mvc;
+
+    /** The message of the error on field, from a 400 answer. */
+    private String message(String url, String body, String field) throws Exception {
+        var result = mvc.perform(post(url).contentType(MediaType.APPLICATION_JSON).content(body)).andReturn();
+        assertThat(result.getResponse().getStatus()).isEqualTo(400);
+        String json = result.getResponse().getContentAsString();
+        List<String> messages = JsonPath.read(json, "$.errors[?(@.field == '" + field + "')].message");
+        assertThat(messages).as(json).isNotEmpty();
+        return messages.get(0);
+    }
+
+    @ParameterizedTest
+    @CsvSource(delimiter = '|', textBlock = """
+            "diameterMm": "abc"  | diameterMm
+            "lengthMm": "650"    | lengthMm
+            "tensionN": true     | tensionN
+            """)
+    void textInANumberFieldSaysEnterANumber(String replacement, String field) throws Exception {
+        String body = """
+                {"lengthMm": 650.0, "tensionN": 70.0, "material": "plain-steel", "diameterMm": 0.25}"""
+                .replace("\"" + field + "\": " + (field.equals("lengthMm") ? "650.0" : field.equals("tensionN") ? "70.0" : "0.25"),
+                        replacement);
+        String m = message("/api/v1/strings/analyze", body, field);
+        assertThat(m).startsWith("enter a number").doesNotContainIgnoringCase("coerce").doesNotContain("`");
+    }
+
+    @Test
+    void aPositionPastTheBridgeIsNamedWithoutFloatNoise() throws Exception {
+        // 25.5 inch typed on the page is 647.7 mm, which reaches the server as 647.6999999999999.
+        String m = message("/api/v1/strings/analyze", """
+                {"lengthMm": 647.6999999999999, "tensionN": 70.0, "material": "plain-steel", "diameterMm": 0.25,
+                 "pluck": {"positionMm": 700.0, "kind": "pluck"}}""", "pluck.positionMm");
+        assertThat(m).contains("647.7 mm").doesNotContain("6999");
+    }
+
+    @Test
+    void holesAreNumberedFromOneInTheWords() throws Exception {
+        String bore = """
+                {"segments": [{"lengthMm": 300.0, "inputDiameterMm": 15.0, "outputDiameterMm": 15.0}],
+                 "inputEnd": "closed", "outputEnd": "open-unflanged", "fMinHz": 20.0, "fMaxHz": 3000.0, "points": 400,
+                 "holes": [{"positionMm": 100.0, "diameterMm": 6.0, "chimneyMm": 3.0},
+                           {"positionMm": 150.0, "diameterMm": 6.0, "chimneyMm": 3.0}],
+                 "fingerings": [%s]}""";
+        // closedHoles counts from 0 (the contract): index 2 is a third hole, which this bore lacks.
+        String m = message("/api/v1/air-columns/analyze", bore.formatted("{\"closedHoles\": [2], \"targetHz\": 400.0}"),
+                "fingerings[0].closedHoles[0]");
+        assertThat(m).contains("hole 3").contains("holes 1 to 2").doesNotContain("index").doesNotContain("0..");
+        String none = message("/api/v1/air-columns/analyze", bore.formatted("{\"closedHoles\": [0]}"),
+                "fingerings[0].targetHz");
+        assertThat(none).contains("target pitch").doesNotContain("targetHz").doesNotContain("targetNote");
+    }
+
+    @Test
+    void anUnknownMaterialListsTheCatalogueWithoutNamingAnEndpoint() throws Exception {
+        String m = message("/api/v1/inverse/gauges", """
+                {"lengthMm": 650.0, "strings": [{"targetHz": 329.63, "targetTensionN": 70.0, "material": "unobtainium"}]}""",
+                "strings[0].material");
+        assertThat(m).contains("unobtainium").contains("plain-steel").doesNotContain("GET").doesNotContain("/api/");
+    }
+}
