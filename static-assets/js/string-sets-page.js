@@ -211,6 +211,7 @@ async function start() {
   const wrap = defaultWrap(state.materials);
   HOUSE_SET.forEach((s) => addRow(s.wrapDiameterMm ? { ...s, wrapMaterial: wrap } : s));
   io.showLabels();
+  io.remember(form, 'string-sets');
   form.addEventListener('submit', (e) => { e.preventDefault(); analyze(); });
   form.addEventListener('change', (e) => {
     const t = e.target;
@@ -229,7 +230,11 @@ async function start() {
   const getParameters = () => buildRequest().request;
   const setParameters = (p) => { fillForm(p || {}); return analyze(); };
   import('/js/common/design-bar.js')
-    .then((m) => m.mountDesignBar(document.getElementById('design-bar'), { kind: 'string-set', getParameters, setParameters }))
+    .then((m) => m.mountDesignBar(document.getElementById('design-bar'), {
+      kind: 'string-set', getParameters, setParameters,
+      getView: () => ({ units: { ...io.units } }),
+      setView: (view) => { io.showUnits(form, view.units); if (loop.last) render(loop.last.request, loop.last.response); },
+    }))
     .catch((error) => showPanelFailure('design-bar', t('designBarName'), error));
   await analyze();
 }

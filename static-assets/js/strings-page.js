@@ -94,7 +94,11 @@ function mountNeighbours() {
   const getParameters = () => buildRequest().request;
   const setParameters = (p) => { fillForm(p || {}, false); return analyze(); };
   import('/js/common/design-bar.js')
-    .then((m) => m.mountDesignBar($('design-bar'), { kind: 'string', getParameters, setParameters }))
+    .then((m) => m.mountDesignBar($('design-bar'), {
+      kind: 'string', getParameters, setParameters,
+      getView: () => ({ units: { ...io.units } }),
+      setView: (view) => { io.showUnits(form, view.units); syncSliders(); if (loop.last) render(loop.last.request, loop.last.response); },
+    }))
     .catch((error) => showPanelFailure('design-bar', t('designBarName'), error));
   loadPanels([
     { url: '/js/listen-strings.js', place: 'listen-panel', name: t('listenName') },
@@ -117,6 +121,7 @@ async function start() {
   addPickupRow(610, 10);
   addPickupRow(490, 10);
   io.showLabels();
+  io.remember(form, 'strings');
   showConstruction();
   wire();
   await loadCatalogue();

@@ -71,8 +71,28 @@ export function unitInputs() {
     document.querySelectorAll('[data-unit-label="length"]').forEach((el) => { el.textContent = units.length; });
     document.querySelectorAll('[data-unit-label="force"]').forEach((el) => { el.textContent = units.force; });
   }
+  /** Shows units {length, force} (either may be missing) in the selects and every input of root. */
+  function showUnits(root, wanted) {
+    for (const kind of ['length', 'force']) {
+      const unit = wanted?.[kind];
+      const select = document.getElementById(`${kind}-unit`);
+      if (!unit || !select || ![...select.options].some((o) => o.value === unit) || unit === units[kind]) continue;
+      select.value = unit;
+      switchUnit(root, kind, unit);
+    }
+  }
+  /** The units last chosen on this page in this browser come back on the next visit. */
+  function remember(root, page) {
+    const key = `nodewright.units.${page}`;
+    try { showUnits(root, JSON.parse(localStorage.getItem(key) || 'null')); } catch (error) { localStorage.removeItem(key); }
+    root.addEventListener('change', (e) => {
+      if (e.target.id === 'length-unit' || e.target.id === 'force-unit') localStorage.setItem(key, JSON.stringify(units));
+    });
+  }
   return {
     units,
+    showUnits,
+    remember,
     readLength: (input) => read('length', input),
     readForce: (input) => read('force', input),
     writeLength: (input, mm) => write('length', input, mm),

@@ -133,4 +133,26 @@ class StringBenchFirstUseIT extends StringPageTestBase {
         // old typed 70 N moved E4 by -9.3 cents): within a thousandth of a cent.
         assertThat(Math.abs(1200 * Math.log(atTension / atPitch) / Math.log(2))).isLessThan(0.001);
     }
+
+    @Test
+    void aDesignSavedInInchesAndPoundsReopensSoAndTheNameIsKept() {
+        new org.openqa.selenium.support.ui.Select(driver.findElement(By.id("length-unit"))).selectByValue("inch");
+        new org.openqa.selenium.support.ui.Select(driver.findElement(By.id("force-unit"))).selectByValue("lbf");
+        WebElement bar = waitFor(By.cssSelector("#design-bar[data-ready='true']"));
+        bar.findElement(By.cssSelector("[data-role='name']")).sendKeys("Parlour first string in inches");
+        bar.findElement(By.cssSelector("[data-role='who']")).sendKeys("Ada");
+        bar.findElement(By.cssSelector("[data-role='save']")).click();
+        wait.until(d -> d.findElement(By.id("design-bar")).getAttribute("data-design-id") != null);
+        String id = driver.findElement(By.id("design-bar")).getAttribute("data-design-id");
+
+        // A later visit in this browser, with the page's units back at their defaults.
+        js("localStorage.removeItem('nodewright.units.strings');");
+        driver.get(url("/strings?design=" + id));
+        wait.until(d -> id.equals(d.findElement(By.id("design-bar")).getAttribute("data-design-id")));
+        assertThat(driver.findElement(By.id("length-unit")).getAttribute("value")).isEqualTo("inch");
+        assertThat(driver.findElement(By.id("force-unit")).getAttribute("value")).isEqualTo("lbf");
+        // 650 mm = 25.59055 inch (1 inch = 25.4 mm exactly).
+        assertThat(driver.findElement(By.id("lengthMm")).getAttribute("value")).isEqualTo("25.59055");
+        assertThat(driver.findElement(By.cssSelector("#design-bar [data-role='who']")).getAttribute("value")).isEqualTo("Ada");
+    }
 }

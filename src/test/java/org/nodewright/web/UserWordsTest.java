@@ -94,4 +94,35 @@ class UserWordsTest {
                 "strings[0].material");
         assertThat(m).contains("unobtainium").contains("plain-steel").doesNotContain("GET").doesNotContain("/api/");
     }
+
+    @Test
+    void aStockListWithoutTheGaugeNeededIsWarned() throws Exception {
+        // E4 at 70 N on 650 mm of plain steel needs mu = T/(2Lf)^2 = 3.81e-4 kg/m (Mersenne), about 0.249 mm
+        // at 7.85 g/cm3 (steel, from memory): 0.20 mm gives some 35 % less tension, 0.25 mm about 1 % more.
+        String far = mvc.perform(post("/api/v1/inverse/gauges").contentType(MediaType.APPLICATION_JSON).content("""
+                {"lengthMm": 650.0, "availableGaugesMm": [0.20, 0.90],
+                 "strings": [{"targetHz": 329.63, "targetTensionN": 70.0, "material": "plain-steel"}]}"""))
+                .andReturn().getResponse().getContentAsString();
+        double offPct = ((Number) JsonPath.read(far, "$.strings[0].offPct")).doubleValue();
+        assertThat(offPct).isLessThan(-10);
+        List<String> warnings = JsonPath.read(far, "$.strings[0].warnings");
+        assertThat(warnings).anySatisfy(w -> assertThat(w).contains("below the target 70 N").contains("0.2 mm"));
+        String near = mvc.perform(post("/api/v1/inverse/gauges").contentType(MediaType.APPLICATION_JSON).content("""
+                {"lengthMm": 650.0, "availableGaugesMm": [0.25],
+                 "strings": [{"targetHz": 329.63, "targetTensionN": 70.0, "material": "plain-steel"}]}"""))
+                .andReturn().getResponse().getContentAsString();
+        List<String> none = JsonPath.read(near, "$.strings[0].warnings");
+        assertThat(none).noneSatisfy(w -> assertThat(w).contains("the target"));
+    }
+
+    @Test
+    void anUnknownDesignOpenedInTheBrowserGetsAPageNotAProblemDocument() throws Exception {
+        for (String id : List.of("987654321", "not-a-number")) {
+            var response = mvc.perform(org.springframework.test.web.servlet.request.MockMvcRequestBuilders
+                    .get("/library/" + id).accept(MediaType.TEXT_HTML)).andReturn().getResponse();
+            assertThat(response.getStatus()).isEqualTo(404);
+            assertThat(response.getContentType()).startsWith("text/html");
+            assertThat(response.getContentAsString()).contains("No such design").contains(id).contains("href=\"/library\"");
+        }
+    }
 }
