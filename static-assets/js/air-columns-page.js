@@ -20,7 +20,7 @@ const ANALYZE_URL = '/api/v1/air-columns/analyze';
 const $ = (id) => document.getElementById(id);
 const root = document.querySelector('main.air-bench');
 
-const state = { request: null, response: null, predictions: [] };
+const state = { request: null, response: null, predictions: [], tolerance: 10 };
 
 const editor = new BoreEditor({
   segmentBody: $('segment-rows'),
@@ -229,9 +229,25 @@ function showFingerings(request, response) {
   root.dataset.fingeringsReady = root.dataset.analyzed;
 }
 
+/**
+ * The cents tolerance fingerings are judged by. A negative or unreadable one is refused on its
+ * field (never silently replaced): the last good tolerance stays in use until it is fixed.
+ */
 const tolerance = () => {
-  const v = parseNumber($('cents-tolerance').value);
-  return v >= 0 ? v : 10;
+  const input = $('cents-tolerance');
+  const v = parseNumber(input.value);
+  const ok = Number.isFinite(v) && v >= 0;
+  input.classList.toggle('invalid', !ok);
+  input.setAttribute('aria-invalid', String(!ok));
+  let slot = document.querySelector('[data-error-for="cents-tolerance"]');
+  if (!ok && !slot) {
+    slot = Object.assign(document.createElement('span'), { className: 'field-error' });
+    slot.dataset.errorFor = 'cents-tolerance';
+    input.insertAdjacentElement('afterend', slot);
+  }
+  if (slot) slot.textContent = ok ? '' : t('badTolerance', fmt(state.tolerance, 1));
+  if (ok) state.tolerance = v;
+  return state.tolerance;
 };
 
 // ---- drawing, presets, parameters -------------------------------------------------------

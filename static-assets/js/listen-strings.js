@@ -2,7 +2,7 @@
 // predicted partials (stiffness included) weighted by the pluck and the chosen pickups, each
 // decaying at its own rate — and compares two remembered versions ("A" and "B").
 import { showPanelFailure } from './common/panels.js';
-import { loadPanel, texts, role, sig, onPageEvent } from './measure/panel.js';
+import { loadPanel, texts, role, showPlaying, sig, onPageEvent } from './measure/panel.js';
 import { play, schedule, audio, setVolume, stopAll, state as audioState } from './measure/voices.js';
 
 const LN_1000 = Math.log(1000); // T60: the time to fall 60 dB, e^{−σ·T60} = 1/1000
@@ -73,7 +73,7 @@ async function onPlay() {
   setVolume(Number(role(state.panel, 'volume').value));
   const { partials, durationS } = currentPartials();
   const count = await play(partials, durationS);
-  status.textContent = '';
+  showPlaying(state, status, count, durationS);
   state.panel.dataset.playing = String(count);
   report();
 }

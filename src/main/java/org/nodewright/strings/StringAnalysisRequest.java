@@ -56,6 +56,13 @@ public record StringAnalysisRequest(
     public static final int MAX_CHART_INTERVALS = 200;
     public static final double DEFAULT_A4_HZ = EqualTemperament.ISO_16_A4_HZ;
 
+    /**
+     * What an omitted top-level field means (JSON names and words), for comparing saved designs
+     * by their effective values: the same defaults the methods below apply.
+     */
+    public static final java.util.Map<String, Object> DEFAULTS = java.util.Map.of("referenceA4Hz", DEFAULT_A4_HZ,
+            "modeCount", DEFAULT_MODE_COUNT, "stiffness", false, "endCondition", "pinned");
+
     /** Where and how the string is set in motion. */
     public record Pluck(@NotNull @Finite Double positionMm, Words.Kind kind) {
         public Words.Kind kindOrDefault() {

@@ -125,4 +125,61 @@ class UserWordsTest {
             assertThat(response.getContentAsString()).contains("No such design").contains(id).contains("href=\"/library\"");
         }
     }
+
+    private long createString(String name, String parameters) throws Exception {
+        String json = mvc.perform(post("/api/v1/designs").contentType(MediaType.APPLICATION_JSON).content(
+                "{\"name\": \"" + name + "\", \"kind\": \"string\", \"parameters\": " + parameters + "}"))
+                .andReturn().getResponse().getContentAsString();
+        return ((Number) JsonPath.read(json, "$.id")).longValue();
+    }
+
+    private List<String> differences(long a, long b) throws Exception {
+        String json = mvc.perform(org.springframework.test.web.servlet.request.MockMvcRequestBuilders
+                .get("/api/v1/designs/compare").param("a", String.valueOf(a)).param("b", String.valueOf(b)))
+                .andReturn().getResponse().getContentAsString();
+        return JsonPath.read(json, "$.differences[*].path");
+    }
+
+    @Test
+    void compareLooksAtEffectiveValues() throws Exception {
+        // A4 = 440 Hz typed out against it left to its default, and E4 as 329.6276 Hz (from the
+        // note, 329.62756 Hz at A4 = 440 Hz) against 329.63 typed: 0.013 cents apart, one pitch.
+        long typed = createString("E typed", """
+                {"lengthMm": 650.0, "targetHz": 329.63, "material": "plain-steel", "diameterMm": 0.25,
+                 "referenceA4Hz": 440.0, "stiffness": false, "modeCount": 12}""");
+        long defaults = createString("E from the note", """
+                {"lengthMm": 650.0, "targetHz": 329.6276, "material": "plain-steel", "diameterMm": 0.25}""");
+        assertThat(differences(typed, defaults)).isEmpty();
+        long shorter = createString("E shorter", """
+                {"lengthMm": 648.0, "targetHz": 329.63, "material": "plain-steel", "diameterMm": 0.25, "modeCount": 16}""");
+        assertThat(differences(defaults, shorter)).containsExactlyInAnyOrder("lengthMm", "modeCount");
+    }
+
+    @Test
+    void anImportWithUnsortedTagsAddsNoRevisionAndSortsWithTheLatest() throws Exception {
+        long before = System.currentTimeMillis();
+        createString("Already here", """
+                {"lengthMm": 650.0, "tensionN": 70.0, "material": "plain-steel", "diameterMm": 0.25}""");
+        String params = "{\"lengthMm\": 640.0, \"tensionN\": 68.0, \"material\": \"plain-steel\", \"diameterMm\": 0.25}";
+        String doc = """
+                {"format": "nodewright-library", "formatVersion": 1, "designs": [
+                  {"name": "Old treble", "kind": "string", "parameters": %s, "notes": "", "tags": ["treble", "archive"],
+                   "author": "Bea", "createdAt": "2019-05-01T10:00:00Z", "updatedAt": "2019-05-01T10:00:00Z", "version": 1,
+                   "revisions": [{"version": 1, "name": "Old treble", "parameters": %s, "notes": "",
+                                  "tags": ["archive", "treble"], "savedBy": "Bea", "savedAt": "2019-05-01T10:00:00Z",
+                                  "comment": "first"}]}]}""".formatted(params, params);
+        String answer = mvc.perform(post("/api/v1/designs/import").contentType(MediaType.APPLICATION_JSON).content(doc))
+                .andReturn().getResponse().getContentAsString();
+        long id = ((Number) JsonPath.read(answer, "$.imported[0].id")).longValue();
+        String revisions = mvc.perform(org.springframework.test.web.servlet.request.MockMvcRequestBuilders
+                .get("/api/v1/designs/" + id + "/revisions")).andReturn().getResponse().getContentAsString();
+        assertThat((List<Object>) JsonPath.read(revisions, "$[*]")).hasSize(1);
+        assertThat((String) JsonPath.read(revisions, "$[0].savedAt")).startsWith("2019-05-01");
+        String one = mvc.perform(org.springframework.test.web.servlet.request.MockMvcRequestBuilders
+                .get("/api/v1/designs/" + id)).andReturn().getResponse().getContentAsString();
+        assertThat(java.time.Instant.parse(JsonPath.read(one, "$.updatedAt")).toEpochMilli()).isGreaterThanOrEqualTo(before - 1000);
+        String list = mvc.perform(org.springframework.test.web.servlet.request.MockMvcRequestBuilders.get("/api/v1/designs"))
+                .andReturn().getResponse().getContentAsString();
+        assertThat(((Number) JsonPath.read(list, "$[0].id")).longValue()).isEqualTo(id);
+    }
 }
