@@ -2,11 +2,14 @@
 // server's stressLevel), the modes table and the list of modes with a node near the pluck or a pickup.
 import { $, t, io, fmtLen, signed } from './context.js';
 import { fromNewton } from '../common/units.js';
-import { nearestNote } from '../common/notes.js';
+import { nearestNote, midiName, spelledWithFlats } from '../common/notes.js';
 import { cents } from './charts.js';
 
+/** Notes are spelt with flats when the target was typed with one ("Eb4" stays Eb4, not D#4). */
+const flats = () => spelledWithFlats($('targetHz').value);
+
 export function drawSummary(request, response) {
-  const note = response.note;
+  const note = { ...response.note, name: midiName(response.note.midi, flats()) };
   const ratio = response.stressFraction;
   const rows = [
     [t('tension'), `${fromNewton(response.tensionN, io.units.force).toFixed(io.units.force === 'N' ? 2 : 3)} ${io.units.force}`],
@@ -45,7 +48,7 @@ export function drawTable(request, response) {
   const tbody = $('modes-table').querySelector('tbody');
   tbody.replaceChildren();
   for (const m of response.modes) {
-    const note = nearestNote(m.frequencyHz, request.referenceA4Hz);
+    const note = nearestNote(m.frequencyHz, request.referenceA4Hz, { flats: flats() });
     const cells = [
       String(m.n), m.frequencyHz.toFixed(3), m.harmonicHz.toFixed(3), signed(cents(m), 2),
       `${note.name} ${signed(note.centsOff, 1)}`,

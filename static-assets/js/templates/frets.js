@@ -8,7 +8,8 @@ function fretRequest() {
   const problems = [];
   const field = (id, name, integer) => {
     const v = num($(id).value);
-    if (!Number.isFinite(v) || (integer && !Number.isInteger(v))) problems.push({ field: name, message: t('notNumber') });
+    if (!Number.isFinite(v)) problems.push({ field: name, message: t('notNumber') });
+    else if (integer && !Number.isInteger(v)) problems.push({ field: name, message: t('notWhole', v) });
     return Number.isFinite(v) ? v : null;
   };
   const request = {

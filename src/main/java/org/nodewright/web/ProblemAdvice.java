@@ -241,8 +241,14 @@ public class ProblemAdvice extends ResponseEntityExceptionHandler {
                 || type == int.class || type == long.class || type == short.class);
     }
 
-    /** The words an enum accepts in JSON: each constant's {@code @JsonProperty} value, else its name. */
+    /**
+     * The words an enum accepts in JSON: a core enum's {@link EnumWords}; otherwise each constant's
+     * {@code @JsonProperty} value, else its name.
+     */
     static java.util.List<String> enumWords(Class<?> type) {
+        if (EnumWords.isCoreEnum(type)) {
+            return EnumWords.words(type);
+        }
         List<String> words = new ArrayList<>();
         for (java.lang.reflect.Field f : type.getFields()) {
             if (!f.isEnumConstant()) {
