@@ -69,6 +69,8 @@ function showMeasured() {
     return tr;
   });
   role(p, 'peaks').tBodies[0].replaceChildren(...rows);
+  // Nothing to compare with until a design is analysed on this page (none on the Measure page).
+  role(p, 'peaks').classList.toggle('without-design', !state.analysis);
   p.dataset.measured = String(m.peaks.length);
   fillApplyInputs(false);
   drawMeasured();
