@@ -8,9 +8,10 @@ import org.nodewright.physics.aircolumn.AirColumnAnalysis;
 import org.nodewright.physics.aircolumn.AirProperties;
 import org.nodewright.physics.aircolumn.BoreSegment;
 import org.nodewright.physics.aircolumn.Fingering;
-import org.nodewright.physics.aircolumn.NoteName;
 import org.nodewright.physics.aircolumn.StandingWaveProfile;
 import org.nodewright.physics.aircolumn.ToneHole;
+import org.nodewright.physics.tuning.Note;
+import org.nodewright.physics.tuning.NoteNames;
 
 /** Turns a validated request into core values (millimetres to metres) and the analysis into JSON. */
 final class AirColumnMapper {
@@ -38,7 +39,7 @@ final class AirColumnMapper {
         List<Fingering> out = new ArrayList<>();
         for (AirColumnRequest.FingeringSpec f : r.fingeringsOrEmpty()) {
             double target = f.targetHz() != null ? f.targetHz()
-                    : NoteName.frequencyOf(f.targetNote(), r.referenceA4OrDefault());
+                    : NoteNames.frequencyHz(f.targetNote(), r.referenceA4OrDefault());
             out.add(new Fingering(f.name(), new HashSet<>(f.closedHoles()), target,
                     f.register() == null ? 1 : f.register()));
         }
@@ -77,7 +78,7 @@ final class AirColumnMapper {
                 a.series().name().toLowerCase(java.util.Locale.ROOT), profiles, fs, a.warnings());
     }
 
-    private static AirColumnResponse.Note note(NoteName n) {
+    private static AirColumnResponse.Note note(Note n) {
         return new AirColumnResponse.Note(n.name(), n.centsOff());
     }
 

@@ -10,6 +10,7 @@ import jakarta.validation.constraints.Positive;
 import jakarta.validation.constraints.PositiveOrZero;
 import jakarta.validation.constraints.Size;
 import java.util.List;
+import org.nodewright.physics.tuning.EqualTemperament;
 import org.nodewright.web.Finite;
 
 /**
@@ -92,7 +93,7 @@ public record AirColumnRequest(
     }
 
     double referenceA4OrDefault() {
-        return referenceA4Hz == null ? 440.0 : referenceA4Hz;
+        return referenceA4Hz == null ? EqualTemperament.ISO_16_A4_HZ : referenceA4Hz;
     }
 
     int profileSamplesOrDefault() {

@@ -1,6 +1,8 @@
 package org.nodewright.aircolumns;
 
 import java.util.List;
+import org.nodewright.web.ChartPrecision;
+import tools.jackson.databind.annotation.JsonSerialize;
 
 /**
  * The answer of {@code POST /api/v1/air-columns/analyze}. Contract fields: speedOfSoundMps,
@@ -40,8 +42,13 @@ public record AirColumnResponse(
     public record Impedance(double[] frequencyHz, double[] magnitude, double[] phaseRad) {
     }
 
-    /** Signed standing-wave shapes (largest magnitude 1) of pressure and volume flow at resonance n. */
-    public record Profile(int n, double frequencyHz, double[] xMm, double[] pressure, double[] flow) {
+    /**
+     * Signed standing-wave shapes (largest magnitude 1) of pressure and volume flow at resonance n,
+     * chart samples written to six significant digits ({@link ChartPrecision}).
+     */
+    public record Profile(int n, double frequencyHz, @JsonSerialize(using = ChartPrecision.class) double[] xMm,
+            @JsonSerialize(using = ChartPrecision.class) double[] pressure,
+            @JsonSerialize(using = ChartPrecision.class) double[] flow) {
     }
 
     /** A fingering's predicted pitch (null fields when its register was not found in range). */

@@ -9,6 +9,8 @@ import org.nodewright.physics.aircolumn.BoreSegment;
 import org.nodewright.physics.aircolumn.InputEnd;
 import org.nodewright.physics.aircolumn.OutputEnd;
 import org.nodewright.physics.aircolumn.ToneHole;
+import org.nodewright.physics.tuning.EqualTemperament;
+import org.springframework.boot.autoconfigure.condition.ConditionalOnProperty;
 import org.springframework.boot.context.event.ApplicationReadyEvent;
 import org.springframework.context.event.EventListener;
 import org.springframework.stereotype.Component;
@@ -16,8 +18,10 @@ import org.springframework.stereotype.Component;
 /**
  * Once the server is ready, analyses a small demo bore a few times on a low-priority background
  * thread so that the JIT has compiled the transfer-matrix loops before the first real request.
+ * {@code app.air-column.warm-up=false} turns it off (the tests do: there it only costs CPU).
  */
 @Component
+@ConditionalOnProperty(name = "app.air-column.warm-up", havingValue = "true", matchIfMissing = true)
 class AirColumnWarmUp {
 
     @EventListener(ApplicationReadyEvent.class)
@@ -39,7 +43,7 @@ class AirColumnWarmUp {
         for (OutputEnd end : OutputEnd.values()) {
             AirColumn col = new AirColumn(segs, holes, InputEnd.CLOSED, end, AirProperties.at(20, 50), true);
             for (int r = 0; r < 6; r++) {
-                new AirColumnAnalyzer(440, 201).analyze(col, 20, 3000, 4000, List.of());
+                new AirColumnAnalyzer(EqualTemperament.ISO_16_A4_HZ, 201).analyze(col, 20, 3000, 4000, List.of());
             }
         }
     }

@@ -11,7 +11,7 @@ import java.lang.annotation.RetentionPolicy;
 import java.lang.annotation.Target;
 import java.util.List;
 import java.util.Locale;
-import org.nodewright.physics.aircolumn.NoteName;
+import org.nodewright.physics.tuning.NoteNames;
 
 /**
  * Cross-field rules of {@link AirColumnRequest}, each reported on its own dotted path: fMaxHz
@@ -110,7 +110,7 @@ public @interface ValidAirColumn {
             if (hasNote == hasHz) {
                 ok = fail(ctx, base + ".targetHz", hasNote ? "give targetHz or targetNote, not both"
                         : "give targetHz or targetNote");
-            } else if (hasNote && !NoteName.isNoteName(f.targetNote())) {
+            } else if (hasNote && !NoteNames.isNoteName(f.targetNote())) {
                 ok = fail(ctx, base + ".targetNote", "must be a note name such as D5, F#4 or Bb3");
             }
             return ok;

@@ -8,6 +8,7 @@ import org.nodewright.aircolumns.OutputEndWord;
 import org.nodewright.physics.aircolumn.Fingering;
 import org.nodewright.physics.inverse.DemoWhistle;
 import org.nodewright.physics.inverse.SolverLimits;
+import org.nodewright.physics.tuning.EqualTemperament;
 
 /** The workshop's demo whistle as the API's own request shape. */
 final class DemoRequests {
@@ -29,7 +30,7 @@ final class DemoRequests {
         AirColumnRequest bore = new AirColumnRequest(
                 List.of(new AirColumnRequest.Segment(DemoWhistle.LENGTH_MM, DemoWhistle.BORE_MM, DemoWhistle.BORE_MM)),
                 InputEndWord.OPEN, OutputEndWord.OPEN_UNFLANGED, holes, DemoWhistle.TEMPERATURE_C,
-                DemoWhistle.HUMIDITY_PCT, true, 300.0, 3000.0, 3000, 440.0, null, fingerings);
+                DemoWhistle.HUMIDITY_PCT, true, 300.0, 3000.0, 3000, EqualTemperament.ISO_16_A4_HZ, null, fingerings);
         SolverLimits l = DemoWhistle.limits(false);
         return new ToneHoleSolveRequest(bore, new ToneHoleSolveRequest.Limits(l.minPositionMm(), l.maxPositionMargin(),
                 l.minSpacingMm(), l.minDiameterMm(), l.maxDiameterMm(), l.varyDiameters(), l.varyFoot(), l.minFootMm(),

@@ -7,10 +7,11 @@ import java.util.ArrayList;
 import java.util.List;
 import org.nodewright.physics.inverse.GaugePicker;
 import org.nodewright.physics.inverse.GaugeStock;
-import org.nodewright.physics.inverse.NoteNames;
 import org.nodewright.physics.strings.Material;
 import org.nodewright.physics.strings.Materials;
 import org.nodewright.physics.strings.StressCheck;
+import org.nodewright.physics.tuning.EqualTemperament;
+import org.nodewright.physics.tuning.NoteNames;
 import org.nodewright.web.BadRequestException;
 import org.nodewright.web.FieldProblem;
 import org.springframework.web.bind.annotation.PostMapping;
@@ -32,7 +33,7 @@ class GaugeController {
                     + "diameters), else the workshop stock list. Tension by Mersenne's law T = mu (2 L f)^2.")
     GaugeResponse pick(@Valid @RequestBody GaugeRequest request) {
         List<FieldProblem> problems = new ArrayList<>();
-        double a4 = request.referenceA4Hz() == null ? 440.0 : request.referenceA4Hz();
+        double a4 = request.referenceA4Hz() == null ? EqualTemperament.ISO_16_A4_HZ : request.referenceA4Hz();
         List<GaugePicker.Target> targets = new ArrayList<>();
         int n = request.strings().size();
         for (int i = 0; i < n; i++) {

@@ -5,10 +5,11 @@ import java.util.HashSet;
 import java.util.List;
 import org.nodewright.aircolumns.AirColumnRequest;
 import org.nodewright.physics.aircolumn.Fingering;
-import org.nodewright.physics.aircolumn.NoteName;
 import org.nodewright.physics.inverse.AirCoreFrequencyModel;
 import org.nodewright.physics.inverse.HoleLayout;
 import org.nodewright.physics.inverse.SolverLimits;
+import org.nodewright.physics.tuning.EqualTemperament;
+import org.nodewright.physics.tuning.NoteNames;
 import org.nodewright.web.BadRequestException;
 import org.nodewright.web.FieldProblem;
 
@@ -67,11 +68,11 @@ record ToneHoleSolveSetup(AirColumnRequest bore, AirCoreFrequencyModel model, Ho
         if (!problems.isEmpty()) {
             throw new BadRequestException(problems);
         }
-        double a4 = bore.referenceA4Hz() == null ? 440.0 : bore.referenceA4Hz();
+        double a4 = bore.referenceA4Hz() == null ? EqualTemperament.ISO_16_A4_HZ : bore.referenceA4Hz();
         List<Fingering> fingerings = new ArrayList<>();
         for (int i = 0; i < bore.fingerings().size(); i++) {
             AirColumnRequest.FingeringSpec f = bore.fingerings().get(i);
-            double hz = f.targetHz() != null ? f.targetHz() : NoteName.frequencyOf(f.targetNote(), a4);
+            double hz = f.targetHz() != null ? f.targetHz() : NoteNames.frequencyHz(f.targetNote(), a4);
             String name = f.name() == null || f.name().isBlank() ? "fingering " + (i + 1) : f.name();
             fingerings.add(new Fingering(name, new HashSet<>(f.closedHoles()), hz, f.register() == null ? 1 : f.register()));
         }

@@ -12,13 +12,15 @@ import java.util.ArrayList;
 import java.util.List;
 import org.nodewright.physics.strings.Materials;
 import org.nodewright.physics.strings.ModeSolver;
-import org.nodewright.web.Finite;
+import org.nodewright.physics.tuning.EqualTemperament;
 import org.nodewright.web.FieldProblem;
+import org.nodewright.web.Finite;
 
 /**
  * Body of {@code POST /api/v1/strings/analyze}. Lengths in mm, tension in N, SI otherwise.
  * Defaults when omitted: endCondition "pinned", stiffness false, modeCount 12, referenceA4Hz 440,
- * shapeSamples 201. Validating the record alone (Bean Validation) finds every problem, cross-field
+ * mode n's shape sampled at {@link #chartIntervals(int)} equal intervals unless
+ * {@code shapeSamples} asks for a fixed count (the query {@code ?shapes=none} leaves shapes out). Validating the record alone (Bean Validation) finds every problem, cross-field
  * rules included ({@link #crossFieldProblems()}).
  */
 @CrossFieldChecked
@@ -50,8 +52,9 @@ public record StringAnalysisRequest(
         @Min(2) @Max(2001) Integer shapeSamples) implements CrossFieldChecked.Rules {
 
     public static final int DEFAULT_MODE_COUNT = 12;
-    public static final int DEFAULT_SHAPE_SAMPLES = 201;
-    public static final double DEFAULT_A4_HZ = 440.0;
+    public static final int MIN_CHART_INTERVALS = 24;
+    public static final int MAX_CHART_INTERVALS = 200;
+    public static final double DEFAULT_A4_HZ = EqualTemperament.ISO_16_A4_HZ;
 
     /** Where and how the string is set in motion. */
     public record Pluck(@NotNull @Finite Double positionMm, Words.Kind kind) {
@@ -80,8 +83,20 @@ public record StringAnalysisRequest(
         return modeCount == null ? DEFAULT_MODE_COUNT : modeCount;
     }
 
-    public int shapeSamplesOrDefault() {
-        return shapeSamples == null ? DEFAULT_SHAPE_SAMPLES : shapeSamples;
+    /** Samples of mode n's shape: {@code shapeSamples} when given, else {@link #chartIntervals(int)} + 1. */
+    public int shapeSamplesFor(int n) {
+        return shapeSamples == null ? chartIntervals(n) + 1 : shapeSamples;
+    }
+
+    /**
+     * Equal intervals along the string for mode n by default: six per half-wave, so that the nodes
+     * and antinodes of a sine fall on samples and a straight line between samples stays within
+     * 3.4 % of the amplitude (1 − cos 15°, under a pixel on the bench's chart rows); at least
+     * {@value #MIN_CHART_INTERVALS}, at most {@value #MAX_CHART_INTERVALS} (a chart is a few hundred
+     * pixels wide).
+     */
+    public static int chartIntervals(int n) {
+        return Math.min(MAX_CHART_INTERVALS, Math.max(MIN_CHART_INTERVALS, 6 * n));
     }
 
     public double referenceA4OrDefault() {

@@ -1,6 +1,8 @@
 package org.nodewright.strings;
 
 import java.util.List;
+import org.nodewright.web.ChartPrecision;
+import tools.jackson.databind.annotation.JsonSerialize;
 
 /**
  * Answer of {@code POST /api/v1/strings/analyze}: every contract field plus extras for the page
@@ -34,6 +36,8 @@ public record StringAnalysisResponse(
      * One mode. Positions in mm from the nut ({@code nodesMm}, {@code antinodesMm}, ascending) and
      * from the bridge ({@code nodesFromBridgeMm}, {@code antinodesFromBridgeMm}, ascending from the
      * bridge). {@code pickupOutput} = excitation × gain; {@code combinedResponse} = g1 ± g2.
+     * {@code shapeX} (mm) and {@code shape} are chart samples, written to six significant digits
+     * ({@link ChartPrecision}); both null when the request says {@code "shapes": "none"}.
      */
     public record ModeJson(
             int n,
@@ -49,7 +53,7 @@ public record StringAnalysisResponse(
             List<Double> pickupOutput,
             Double combinedResponse,
             Double combinedOutput,
-            List<Double> shapeX,
-            List<Double> shape) {
+            @JsonSerialize(using = ChartPrecision.class) double[] shapeX,
+            @JsonSerialize(using = ChartPrecision.class) double[] shape) {
     }
 }

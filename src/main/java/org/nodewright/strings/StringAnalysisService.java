@@ -25,6 +25,11 @@ class StringAnalysisService {
     private static final double MM = 1e-3;
 
     StringAnalysisResponse analyze(StringAnalysisRequest r) {
+        return analyze(r, true);
+    }
+
+    /** The analysis; without {@code withShapes} the modes' shapeX and shape are null (lighter answer). */
+    StringAnalysisResponse analyze(StringAnalysisRequest r, boolean withShapes) {
         StringDesign design = toDesign(r);
         StringAnalysis a;
         try {
@@ -36,7 +41,7 @@ class StringAnalysisService {
             throw new BadRequestException("endCondition",
                     "the modes could not be computed for this combination of values: " + e.getMessage());
         }
-        return toResponse(r, a);
+        return toResponse(r, a, withShapes);
     }
 
     static StringDesign toDesign(StringAnalysisRequest r) {
@@ -73,16 +78,11 @@ class StringAnalysisService {
         return StringConstruction.wound(core, diameterMm * MM, Materials.get(wrapMaterial), wrapDiameterMm * MM);
     }
 
-    private static StringAnalysisResponse toResponse(StringAnalysisRequest r, StringAnalysis a) {
+    private static StringAnalysisResponse toResponse(StringAnalysisRequest r, StringAnalysis a, boolean withShapes) {
         double lengthMm = r.lengthMm();
-        int samples = r.shapeSamplesOrDefault();
-        List<Double> shapeX = new ArrayList<>(samples);
-        for (int i = 0; i < samples; i++) {
-            shapeX.add(lengthMm * i / (samples - 1));
-        }
         List<StringAnalysisResponse.ModeJson> modes = new ArrayList<>();
         for (StringAnalysis.ModeResponse m : a.modes()) {
-            modes.add(mode(m, lengthMm, shapeX));
+            modes.add(mode(m, lengthMm, r, withShapes));
         }
         StressCheck stress = a.stress();
         Double strength = stress == null || Double.isNaN(stress.tensileStrengthPa()) ? null : stress.tensileStrengthPa();
@@ -101,14 +101,22 @@ class StringAnalysisService {
     }
 
     private static StringAnalysisResponse.ModeJson mode(StringAnalysis.ModeResponse m, double lengthMm,
-            List<Double> shapeX) {
+            StringAnalysisRequest r, boolean withShapes) {
         Mode mode = m.mode();
         ModeShape shape = mode.shape();
         double[] nodes = shape.nodes();
         double[] antinodes = shape.antinodes();
-        List<Double> shapeValues = new ArrayList<>(shapeX.size());
-        for (Double x : shapeX) {
-            shapeValues.add(shape.value(x / lengthMm));
+        double[] shapeX = null;
+        double[] shapeValues = null;
+        if (withShapes) {
+            int samples = r.shapeSamplesFor(mode.n());
+            shapeX = new double[samples];
+            shapeValues = new double[samples];
+            for (int i = 0; i < samples; i++) {
+                double xi = (double) i / (samples - 1);
+                shapeX[i] = lengthMm * xi;
+                shapeValues[i] = shape.value(xi);
+            }
         }
         List<Double> outputs = null;
         Double combinedOutput = null;

@@ -3,10 +3,12 @@ package org.nodewright.strings;
 import jakarta.validation.Valid;
 import java.util.List;
 import org.nodewright.physics.strings.Materials;
+import org.nodewright.web.BadRequestException;
 import org.springframework.http.MediaType;
 import org.springframework.web.bind.annotation.GetMapping;
 import org.springframework.web.bind.annotation.PostMapping;
 import org.springframework.web.bind.annotation.RequestBody;
+import org.springframework.web.bind.annotation.RequestParam;
 import org.springframework.web.bind.annotation.RestController;
 
 /** JSON API of the string designer: analysis, sets and the materials catalogue. */
@@ -23,8 +25,27 @@ class StringsApiController {
 
     @PostMapping(path = "/api/v1/strings/analyze", consumes = MediaType.APPLICATION_JSON_VALUE,
             produces = MediaType.APPLICATION_JSON_VALUE)
-    StringAnalysisResponse analyze(@Valid @RequestBody StringAnalysisRequest request) {
-        return analysis.analyze(request);
+    StringAnalysisResponse analyze(@Valid @RequestBody StringAnalysisRequest request,
+            @RequestParam(name = "shapes", required = false) String shapes) {
+        return analysis.analyze(request, shapesWanted(shapes, request));
+    }
+
+    /**
+     * The {@code shapes} query option: {@code chart} (the default) sends each mode's shape samples,
+     * {@code none} leaves shapeX and shape out (null) — a pluck or pickup move changes no shape, so
+     * the bench asks for that lighter answer while a marker is dragged.
+     */
+    static boolean shapesWanted(String shapes, StringAnalysisRequest request) {
+        if (shapes == null || shapes.equals("chart")) {
+            return true;
+        }
+        if (!shapes.equals("none")) {
+            throw new BadRequestException("shapes", "must be \"chart\" or \"none\"");
+        }
+        if (request.shapeSamples() != null) {
+            throw new BadRequestException("shapeSamples", "asks for shapes that shapes=none leaves out");
+        }
+        return false;
     }
 
     @PostMapping(path = "/api/v1/string-sets/analyze", consumes = MediaType.APPLICATION_JSON_VALUE,

@@ -14,12 +14,13 @@ import jakarta.validation.constraints.PositiveOrZero;
 import jakarta.validation.constraints.Size;
 import java.util.ArrayList;
 import java.util.List;
-import org.nodewright.physics.inverse.NoteNames;
 import org.nodewright.physics.strings.IdealString;
 import org.nodewright.physics.strings.Material;
 import org.nodewright.physics.strings.Materials;
 import org.nodewright.physics.strings.StringConstruction;
 import org.nodewright.physics.templates.IntonationCompensation;
+import org.nodewright.physics.tuning.EqualTemperament;
+import org.nodewright.physics.tuning.NoteNames;
 import org.nodewright.web.BadRequestException;
 import org.nodewright.web.FieldProblem;
 import org.nodewright.web.Finite;
@@ -84,7 +85,7 @@ class CompensationController {
         if (saddle < 0) {
             problems.add(new FieldProblem("actionAt12thMm", "must be at least half of nutHeightMm"));
         }
-        double a4 = r.referenceA4Hz() == null ? 440.0 : r.referenceA4Hz();
+        double a4 = r.referenceA4Hz() == null ? EqualTemperament.ISO_16_A4_HZ : r.referenceA4Hz();
         List<IntonationCompensation.Setup> setups = new ArrayList<>();
         List<Double> pitches = new ArrayList<>();
         for (int i = 0; i < r.strings().size(); i++) {

@@ -12,11 +12,12 @@ import java.net.http.HttpClient;
 import java.net.http.HttpRequest;
 import java.net.http.HttpResponse;
 import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.Base64;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
 import org.nodewright.NodewrightApplication;
+import org.nodewright.TestProperties;
 import org.springframework.boot.builder.SpringApplicationBuilder;
 import org.springframework.boot.diagnostics.FailureAnalysis;
 import org.springframework.boot.web.server.context.WebServerApplicationContext;
@@ -33,11 +34,12 @@ class LanStartupTest {
     private static final HttpClient HTTP = HttpClient.newHttpClient();
 
     private static ConfigurableApplicationContext start(Path dataDir, String... args) {
-        String[] all = new String[args.length + 3];
+        String[] all = new String[args.length + 4];
         all[0] = "--server.port=0";
         all[1] = "--app.data-dir=" + dataDir;
-        all[2] = "--spring.main.banner-mode=off";
-        System.arraycopy(args, 0, all, 3, args.length);
+        all[2] = "--" + TestProperties.NO_BANNER;
+        all[3] = "--" + TestProperties.NO_WARM_UP;
+        System.arraycopy(args, 0, all, 4, args.length);
         return new SpringApplicationBuilder(NodewrightApplication.class).run(all);
     }
 
@@ -65,8 +67,8 @@ class LanStartupTest {
     }
 
     @Test
-    void byDefaultItListensOnLoopbackOnlyAndAsksForNoLogin() throws Exception {
-        try (ConfigurableApplicationContext app = start(Files.createTempDirectory("nodewright-local-"))) {
+    void byDefaultItListensOnLoopbackOnlyAndAsksForNoLogin(@TempDir Path dir) throws Exception {
+        try (ConfigurableApplicationContext app = start(dir)) {
             int port = port(app);
             assertThat(answers("127.0.0.1", port)).isTrue();
             assertThat(answers("127.0.0.2", port)).isFalse();
@@ -81,8 +83,7 @@ class LanStartupTest {
     }
 
     @Test
-    void lanModeListensOnAllInterfacesAndTheFirstStartAloneSetsTheAdminPassword() throws Exception {
-        Path dir = Files.createTempDirectory("nodewright-lan-start-");
+    void lanModeListensOnAllInterfacesAndTheFirstStartAloneSetsTheAdminPassword(@TempDir Path dir) throws Exception {
         try (ConfigurableApplicationContext app = start(dir, "--app.sharing.lan=true",
                 "--app.sharing.admin-password=first-start-pw")) {
             int port = port(app);
@@ -111,9 +112,11 @@ class LanStartupTest {
     }
 
     @Test
-    void lanModeRefusesToStartWithNoAdminAndNoPassword() throws Exception {
-        Path dir = Files.createTempDirectory("nodewright-lan-refused-");
-        assertThatThrownBy(() -> start(dir, "--app.sharing.lan=true").close())
+    void lanModeRefusesToStartWithNoAdminAndNoPassword(@TempDir Path dir) {
+        // The refusal is expected: keep Boot's failure report and the context's warning out of the log.
+        assertThatThrownBy(() -> start(dir, "--app.sharing.lan=true",
+                "--logging.level.org.springframework.boot.diagnostics=OFF",
+                "--logging.level.org.springframework.boot.web=OFF").close())
                 .satisfies(failure -> {
                     Throwable cause = failure;
                     while (cause != null && !(cause instanceof LanSetupException)) {

@@ -6,29 +6,18 @@ import static org.springframework.test.web.servlet.request.MockMvcRequestBuilder
 import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.post;
 import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.status;
 
-import java.nio.file.Files;
-import java.nio.file.Path;
 import org.junit.jupiter.api.Test;
+import org.nodewright.StoreFreeWebTest;
 import org.springframework.beans.factory.annotation.Autowired;
-import org.springframework.boot.test.context.SpringBootTest;
-import org.springframework.boot.webmvc.test.autoconfigure.AutoConfigureMockMvc;
 import org.springframework.http.MediaType;
-import org.springframework.test.context.DynamicPropertyRegistry;
-import org.springframework.test.context.DynamicPropertySource;
 import org.springframework.test.web.servlet.MockMvc;
 import tools.jackson.databind.JsonNode;
 import tools.jackson.databind.ObjectMapper;
 
 /** The strings API answers well-formed requests with the contract's fields and values. */
-@SpringBootTest
-@AutoConfigureMockMvc
+@StoreFreeWebTest
 class StringsApiTest {
 
-    @DynamicPropertySource
-    static void dataDir(DynamicPropertyRegistry registry) throws Exception {
-        Path dir = Files.createTempDirectory("nodewright-strings-");
-        registry.add("app.data-dir", dir::toString);
-    }
 
     @Autowired
     MockMvc mvc;
@@ -78,7 +67,42 @@ class StringsApiTest {
         assertThat(r.path("note").path("name").asString()).isEqualTo("C#4");
         assertThat(r.path("modeShapes").asString()).isEqualTo("sine");
         assertThat(r.path("caution").asString()).contains("eye protection");
-        assertThat(m3.path("shape")).hasSize(201);
+        // Default chart sampling: mode 3 at max(24, 6·3) = 24 equal intervals, the sine
+        // sin(3πx/L) written to 1e-5 (ChartPrecision), positions to 0.001 mm.
+        assertThat(m3.path("shape")).hasSize(25);
+        assertThat(m3.path("shapeX")).hasSize(25);
+        for (int i = 0; i <= 24; i++) {
+            double x = 650.0 * i / 24;
+            assertThat(m3.path("shapeX").get(i).asDouble()).isCloseTo(x, within(5e-4));
+            assertThat(m3.path("shape").get(i).asDouble()).isCloseTo(Math.sin(3 * Math.PI * x / 650), within(5e-6));
+        }
+    }
+
+    @Test
+    void shapeSamplingFollowsTheModeNumberAndCanBeLeftOut() throws Exception {
+        String body = """
+                {"lengthMm": 650.0, "tensionN": 70.0, "material": "plain-steel", "diameterMm": 0.30,
+                 "modeCount": 40, "pickups": [{"positionMm": 150.0}]%s}""";
+        JsonNode chart = postJson("/api/v1/strings/analyze", body.formatted(""));
+        // Six intervals per half-wave, at least 24, at most 200.
+        assertThat(chart.path("modes").get(0).path("shape")).hasSize(25);
+        assertThat(chart.path("modes").get(9).path("shape")).hasSize(61);
+        assertThat(chart.path("modes").get(39).path("shape")).hasSize(201);
+        // Mode 10's nodes x = kL/10 fall on samples, where sin(10πx/L) is 0 to the written precision.
+        for (int k = 0; k <= 10; k++) {
+            assertThat(chart.path("modes").get(9).path("shape").get(6 * k).asDouble()).isZero();
+        }
+        JsonNode none = postJson("/api/v1/strings/analyze?shapes=none", body.formatted(""));
+        assertThat(none.path("modes").get(9).path("shape").isNull()).isTrue();
+        assertThat(none.path("modes").get(9).path("shapeX").isNull()).isTrue();
+        // Everything else is the same answer.
+        for (int i = 0; i < 40; i++) {
+            JsonNode a = chart.path("modes").get(i);
+            JsonNode b = none.path("modes").get(i);
+            assertThat(b.path("frequencyHz").asDouble()).isEqualTo(a.path("frequencyHz").asDouble());
+            assertThat(b.path("nodesMm")).isEqualTo(a.path("nodesMm"));
+            assertThat(b.path("pickupResponse")).isEqualTo(a.path("pickupResponse"));
+        }
     }
 
     @Test

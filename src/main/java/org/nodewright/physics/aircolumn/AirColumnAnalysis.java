@@ -1,6 +1,7 @@
 package org.nodewright.physics.aircolumn;
 
 import java.util.List;
+import org.nodewright.physics.tuning.Note;
 
 /**
  * Everything computed for one bore: the impedance curve (divided by rho c / S_input), the
@@ -17,14 +18,14 @@ public record AirColumnAnalysis(AirProperties air, double[] frequencyHz, double[
      * @param seriesMember    m in the ideal series (n, or 2n - 1 for the odd series)
      * @param centsFromSeries 1200 log2(f_n / (m f_1 / m_1)), m_1 the first member (1)
      */
-    public record ResonanceResult(Resonance resonance, NoteName note, StandingWaveProfile profile,
+    public record ResonanceResult(Resonance resonance, Note note, StandingWaveProfile profile,
             double ratioToFirst, int seriesMember, double centsFromSeries) {
     }
 
     /**
      * The predicted sounding pitch of a fingering (NaN when the wanted register was not found).
      */
-    public record FingeringResult(Fingering fingering, double predictedHz, double centsFromTarget, NoteName note,
+    public record FingeringResult(Fingering fingering, double predictedHz, double centsFromTarget, Note note,
             double q) {
     }
 }

@@ -2,6 +2,8 @@ package org.nodewright.physics.aircolumn;
 
 import java.util.ArrayList;
 import java.util.List;
+import org.nodewright.physics.tuning.Cents;
+import org.nodewright.physics.tuning.EqualTemperament;
 
 /**
  * Runs the whole analysis of one bore: impedance sweep, resonances, profiles, register alignment
@@ -15,7 +17,7 @@ public final class AirColumnAnalyzer {
     static final int CELLS_PER_SPACING = 24;
     private static final int MAX_DETECTION_POINTS = 60_000;
 
-    private final double referenceA4;
+    private final EqualTemperament temperament;
     private final int profileSamples;
 
     /**
@@ -27,7 +29,7 @@ public final class AirColumnAnalyzer {
             throw new IllegalArgumentException("need A4 > 0 and 2..2001 profile samples: " + referenceA4 + ", "
                     + profileSamples);
         }
-        this.referenceA4 = referenceA4;
+        this.temperament = new EqualTemperament(referenceA4);
         this.profileSamples = profileSamples;
     }
 
@@ -63,8 +65,8 @@ public final class AirColumnAnalyzer {
         for (Resonance r : found) {
             int m = series.member(r.n());
             double ratio = r.frequencyHz() / f1;
-            double cents = NoteName.cents(r.frequencyHz(), m * f1);
-            results.add(new AirColumnAnalysis.ResonanceResult(r, NoteName.nearest(r.frequencyHz(), referenceA4),
+            double cents = Cents.between(r.frequencyHz(), m * f1);
+            results.add(new AirColumnAnalysis.ResonanceResult(r, temperament.nearest(r.frequencyHz()),
                     StandingWaveProfile.compute(solver, r.frequencyHz(), profileSamples), ratio, m, cents));
         }
         List<AirColumnAnalysis.FingeringResult> fr = new ArrayList<>();
@@ -123,8 +125,8 @@ public final class AirColumnAnalyzer {
             return new AirColumnAnalysis.FingeringResult(f, Double.NaN, Double.NaN, null, Double.NaN);
         }
         Resonance r = rs.get(f.register() - 1);
-        return new AirColumnAnalysis.FingeringResult(f, r.frequencyHz(), NoteName.cents(r.frequencyHz(), f.targetHz()),
-                NoteName.nearest(r.frequencyHz(), referenceA4), r.q());
+        return new AirColumnAnalysis.FingeringResult(f, r.frequencyHz(), Cents.between(r.frequencyHz(), f.targetHz()),
+                temperament.nearest(r.frequencyHz()), r.q());
     }
 
     private static String label(Fingering f) {

@@ -68,4 +68,22 @@ public final class Radiation {
         out[0] = (nr * dr + ni * di) / den;
         out[1] = (ni * dr - nr * di) / den;
     }
+
+    /**
+     * The state {P, U} (arbitrary scale, P/U = the load impedance / rho c) at an output end of
+     * the given radius: closed U = 0, ideal open P = 0, else the radiation impedance above over
+     * pi r^2.
+     */
+    static void outputLoad(OutputEnd end, double k, double radius, DuctKernel.State s) {
+        switch (end) {
+            case CLOSED -> s.set(1, 0, 0, 0);
+            case IDEAL_OPEN -> s.set(0, 0, 1, 0);
+            default -> {
+                double[] zr = new double[2];
+                normalisedImpedance(end == OutputEnd.OPEN_FLANGED, k * radius, zr);
+                double invS = 1 / (Math.PI * radius * radius);
+                s.set(zr[0] * invS, zr[1] * invS, 1, 0);
+            }
+        }
+    }
 }

@@ -39,7 +39,7 @@ public record StandingWaveProfile(double frequencyHz, double[] positions, double
         for (int j = 0; j < m; j++) {
             xs[j] = total * j / (m - 1);
         }
-        double[][] s = solver.standingWave(f, xs);
+        double[][] s = field(solver, f, xs);
         double[] p2 = new double[m];
         double pMax = 0;
         for (int j = 0; j < m; j++) {
@@ -75,6 +75,50 @@ public record StandingWaveProfile(double frequencyHz, double[] positions, double
         double[] pressure = signedShape(s[0], s[1], idx);
         double[] flow = signedShape(s[2], s[3], idx);
         return new StandingWaveProfile(f, px, pressure, flow, nodes, antinodes);
+    }
+
+    /**
+     * Pressure and volume flow along the bore at frequency f (Hz), sampled at the given positions
+     * (ascending, metres from the input end, clamped to 0..L), on a common arbitrary scale: the
+     * caller normalises. The load and every element of the solver's chain are applied from the
+     * output end with library sines and cosines, the state kept at each element's downstream side;
+     * a sample inside a duct then takes that duct's tail from the sample to its downstream end.
+     *
+     * @return {pRe[], pIm[], uRe[], uIm[]}
+     */
+    public static double[][] field(TransferMatrixSolver solver, double f, double[] positions) {
+        ElementChain chain = solver.chain();
+        DuctKernel.Frequency w = solver.frequencyTerms().at(f);
+        double k = w.k;
+        int count = chain.size();
+        DuctKernel.State[] downstream = new DuctKernel.State[count];
+        DuctKernel.State st = new DuctKernel.State();
+        solver.load(k, st);
+        for (int e = count - 1; e >= 0; e--) {
+            downstream[e] = st.copy();
+            ChainElement el = chain.get(e);
+            double th = k * el.rotationLength();
+            el.propagate(w, Math.cos(th), -Math.sin(th), st);
+        }
+        int m = positions.length;
+        double[][] out = new double[4][m];
+        double total = chain.length();
+        for (int j = 0; j < m; j++) {
+            double x = Math.min(Math.max(positions[j], 0), total);
+            int e = chain.ductIndexAt(x);
+            Duct d = (Duct) chain.get(e);
+            DuctKernel.State s = downstream[e].copy();
+            if (d.end() - x > 0) {
+                Duct tail = x > d.start ? d.tail(x, solver.keefe()) : d;
+                double th = k * tail.length;
+                tail.propagate(w, Math.cos(th), -Math.sin(th), s);
+            }
+            out[0][j] = s.pr;
+            out[1][j] = s.pi;
+            out[2][j] = s.ur;
+            out[3][j] = s.ui;
+        }
+        return out;
     }
 
     /** Vertex of the parabola through the three samples around j. */

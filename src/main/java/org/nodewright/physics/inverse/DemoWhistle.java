@@ -8,6 +8,8 @@ import org.nodewright.physics.aircolumn.BoreSegment;
 import org.nodewright.physics.aircolumn.Fingering;
 import org.nodewright.physics.aircolumn.InputEnd;
 import org.nodewright.physics.aircolumn.OutputEnd;
+import org.nodewright.physics.tuning.EqualTemperament;
+import org.nodewright.physics.tuning.NoteNames;
 
 /**
  * The Harrowgate Lane Workshop six-hole whistle in D (an invented instrument): a 285 mm cylinder
@@ -48,7 +50,7 @@ public final class DemoWhistle {
             for (int h = 0; h < POSITIONS_MM.length - step; h++) {
                 closed.add(h);
             }
-            out.add(new Fingering(NOTES[step], closed, NoteNames.frequencyHz(NOTES[step], 440.0), 1));
+            out.add(new Fingering(NOTES[step], closed, NoteNames.frequencyHz(NOTES[step], EqualTemperament.ISO_16_A4_HZ), 1));
         }
         return out;
     }

@@ -1,6 +1,7 @@
 package org.nodewright.physics.inverse;
 
 import java.util.Arrays;
+import org.nodewright.physics.Require;
 
 /**
  * What the tone-hole solver may move: the centre of every hole from the input end, every hole's
@@ -21,9 +22,7 @@ public record HoleLayout(double[] positionsMm, double[] diametersMm, double foot
                         + diametersMm[i] + " mm");
             }
         }
-        if (!(footLengthMm > 0) || !Double.isFinite(footLengthMm)) {
-            throw new IllegalArgumentException("footLengthMm must be positive, was " + footLengthMm);
-        }
+        Require.positive("footLengthMm", footLengthMm);
     }
 
     public int holeCount() {

@@ -3,7 +3,6 @@ package org.nodewright.physics.inverse;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.function.BooleanSupplier;
-import org.nodewright.physics.aircolumn.Fingering;
 import org.hipparchus.linear.Array2DRowRealMatrix;
 import org.hipparchus.linear.ArrayRealVector;
 import org.hipparchus.linear.RealVector;
@@ -12,6 +11,9 @@ import org.hipparchus.optim.nonlinear.vector.leastsquares.LeastSquaresOptimizer;
 import org.hipparchus.optim.nonlinear.vector.leastsquares.LeastSquaresProblem;
 import org.hipparchus.optim.nonlinear.vector.leastsquares.LevenbergMarquardtOptimizer;
 import org.hipparchus.util.Pair;
+import org.nodewright.physics.Require;
+import org.nodewright.physics.aircolumn.Fingering;
+import org.nodewright.physics.tuning.Cents;
 
 /**
  * Moves tone holes (and optionally resizes them and trims the foot) so that every fingering
@@ -43,12 +45,8 @@ public final class ToneHoleSolver {
      * @param maxEvaluations cap on model evaluations (each evaluates every fingering)
      */
     public ToneHoleSolver(double toleranceCents, int maxEvaluations) {
-        if (!(toleranceCents > 0) || !Double.isFinite(toleranceCents)) {
-            throw new IllegalArgumentException("toleranceCents must be positive, was " + toleranceCents);
-        }
-        if (maxEvaluations < 1) {
-            throw new IllegalArgumentException("maxEvaluations must be at least 1, was " + maxEvaluations);
-        }
+        Require.positive("toleranceCents", toleranceCents);
+        Require.atLeastOne("maxEvaluations", maxEvaluations);
         this.toleranceCents = toleranceCents;
         this.maxEvaluations = maxEvaluations;
     }
@@ -98,10 +96,10 @@ public final class ToneHoleSolver {
         double worst = 0;
         for (int i = 0; i < fingerings.size(); i++) {
             Fingering f = fingerings.get(i);
-            double c = cents(endHz[i], f.targetHz());
+            double c = Cents.between(endHz[i], f.targetHz());
             worst = Math.max(worst, Math.abs(c));
             notes.add(new ToneHoleSolution.Note(f.name(), f.targetHz(), startHz[i], endHz[i],
-                    cents(startHz[i], f.targetHz()), c));
+                    Cents.between(startHz[i], f.targetHz()), c));
         }
         List<ToneHoleSolution.HoleChange> holes = new ArrayList<>();
         for (int h = 0; h < start.holeCount(); h++) {
@@ -110,11 +108,6 @@ public final class ToneHoleSolver {
         }
         return new ToneHoleSolution(best, notes, holes, best.footLengthMm() - start.footLengthMm(), iterations,
                 run.evaluations, worst <= toleranceCents);
-    }
-
-    /** Cents from the target: 1200 log2(f / f_target) (the definition of the cent, Ellis 1885). */
-    static double cents(double hz, double targetHz) {
-        return 1200.0 * Math.log(hz / targetHz) / Math.log(2.0);
     }
 
     private static final class EvaluationCapReached extends RuntimeException {
@@ -247,7 +240,7 @@ public final class ToneHoleSolver {
             double[] r = new double[residualCount()];
             int k = 0;
             for (int i = 0; i < fingerings.size(); i++) {
-                r[k++] = cents(hz[i], fingerings.get(i).targetHz());
+                r[k++] = Cents.between(hz[i], fingerings.get(i).targetHz());
             }
             for (int p = 0; p < parameters; p++) {
                 r[k++] = STAY_WEIGHT * (x[p] - startPoint[p]);

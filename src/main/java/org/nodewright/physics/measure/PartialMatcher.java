@@ -3,6 +3,7 @@ package org.nodewright.physics.measure;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
+import org.nodewright.physics.tuning.Cents;
 
 /**
  * Gives spectral peaks their mode numbers. Starting from a trial f1, it walks up the series
@@ -159,7 +160,7 @@ public final class PartialMatcher {
         if (count > 0) {
             double[] fb = StiffStringLaw.lineFit(ns, hz, count);
             for (int i = 0; i < count; i++) {
-                if (Math.abs(StiffStringLaw.cents(hz[i], StiffStringLaw.frequency(ns[i], fb[0], fb[1]))) <= STRAY_CENTS) {
+                if (Math.abs(Cents.between(hz[i], StiffStringLaw.frequency(ns[i], fb[0], fb[1]))) <= STRAY_CENTS) {
                     found++;
                 } else {
                     missing++;

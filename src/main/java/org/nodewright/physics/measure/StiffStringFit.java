@@ -13,6 +13,7 @@ import org.hipparchus.optim.nonlinear.vector.leastsquares.LeastSquaresProblem;
 import org.hipparchus.optim.nonlinear.vector.leastsquares.LevenbergMarquardtOptimizer;
 import org.hipparchus.optim.nonlinear.vector.leastsquares.MultivariateJacobianFunction;
 import org.hipparchus.util.Pair;
+import org.nodewright.physics.tuning.Cents;
 
 /**
  * Least-squares fit of f1 and B in f_n = n·f1·√(1+B·n²) (Fletcher 1964, eq. 11) to measured
@@ -90,7 +91,7 @@ public final class StiffStringFit {
         double[] r = new double[partials.size()];
         for (int i = 0; i < r.length; i++) {
             MatchedPartial p = partials.get(i);
-            r[i] = StiffStringLaw.cents(p.frequencyHz(), StiffStringLaw.frequency(p.n(), fb[0], fb[1]));
+            r[i] = Cents.between(p.frequencyHz(), StiffStringLaw.frequency(p.n(), fb[0], fb[1]));
         }
         return r;
     }
@@ -111,7 +112,7 @@ public final class StiffStringFit {
             hz[i] = ps.get(i).frequencyHz();
         }
         double[] start = StiffStringLaw.lineFit(n, hz, m);
-        double c = 1200 / Math.log(2);
+        double c = Cents.PER_NATURAL_LOG;
         // Model: cents of the law above 1 Hz, c·ln(n·f1·√(1+B·n²)); target: c·ln(measured).
         MultivariateJacobianFunction model = point -> {
             double f1 = point.getEntry(0);

@@ -14,11 +14,6 @@ public final class StiffStringLaw {
         return n * f1Hz * Math.sqrt(1 + b * n * n);
     }
 
-    /** Interval from {@code referenceHz} to {@code hz} in cents: 1200·log2(hz / ref) (common practice). */
-    public static double cents(double hz, double referenceHz) {
-        return 1200 * Math.log(hz / referenceHz) / Math.log(2);
-    }
-
     /**
      * Closed-form least-squares estimate of (f1, B) from (f_n/n)² = f1² + f1²·B·n², a straight line
      * in n² (Fletcher 1964, eq. 11 squared). Used to start the iterative fit and to predict partials

@@ -2,6 +2,7 @@ package org.nodewright.physics.strings;
 
 import org.hipparchus.analysis.solvers.AllowedSolution;
 import org.hipparchus.analysis.solvers.BracketingNthOrderBrentSolver;
+import org.nodewright.physics.Require;
 
 /**
  * Eigenvalues of a stiff string (Euler–Bernoulli beam under tension) clamped at both ends.
@@ -33,12 +34,8 @@ public final class ClampedCharacteristic {
 
     /** The n-th root b_n = β_n·L of the clamped–clamped equation for τ = T·L²/(E·I) ≥ 0. */
     public static double root(int n, double tau) {
-        if (n < 1) {
-            throw new IllegalArgumentException("mode number must be at least 1, got " + n);
-        }
-        if (!(tau >= 0) || Double.isInfinite(tau)) {
-            throw new IllegalArgumentException("tau must be finite and not negative, got " + tau);
-        }
+        Require.atLeastOne("mode number", n);
+        Require.nonNegative("tau", tau);
         // A fresh solver per call: Hipparchus solvers keep per-solve state and are not thread-safe.
         BracketingNthOrderBrentSolver solver =
                 new BracketingNthOrderBrentSolver(RELATIVE_ACCURACY, ABSOLUTE_ACCURACY, SOLVER_ORDER);

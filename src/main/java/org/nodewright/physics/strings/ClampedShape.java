@@ -6,6 +6,7 @@ import org.hipparchus.optim.nonlinear.scalar.GoalType;
 import org.hipparchus.optim.univariate.BrentOptimizer;
 import org.hipparchus.optim.univariate.SearchInterval;
 import org.hipparchus.optim.univariate.UnivariateObjectiveFunction;
+import org.nodewright.physics.Require;
 
 /**
  * The exact mode shape of a stiff string clamped at both ends, in ξ = x/L:
@@ -53,8 +54,8 @@ public final class ClampedShape implements ModeShape {
      * @throws IllegalArgumentException for a non-positive a or b
      */
     public static ClampedShape of(int n, double a, double b) {
-        Checks.positive("a", a);
-        Checks.positive("b", b);
+        Require.positive("a", a);
+        Require.positive("b", b);
         double ea = Math.exp(-a);
         double s = (n % 2 == 1) ? 1 : -1;
         double[] k = {-(1 + s * ea), (a / b) * (1 - s * ea), 1, s};

@@ -2,6 +2,7 @@ package org.nodewright.physics.strings;
 
 import java.util.ArrayList;
 import java.util.List;
+import org.nodewright.physics.Require;
 
 /** Fret positions for N equal divisions of the octave. */
 public final class Frets {
@@ -14,14 +15,9 @@ public final class Frets {
 
     /** Fret k sits where the remaining length is L·2^(−k/N): x_k = L·(1 − 2^(−k/N)) (equal temperament). */
     public static List<Fret> equalDivisions(double scaleLengthM, int count, int divisionsPerOctave) {
-        Checks.positive("scaleLengthM", scaleLengthM);
-        if (count < 1 || count > MAX_FRETS) {
-            throw new IllegalArgumentException("fret count must be 1.." + MAX_FRETS + ", got " + count);
-        }
-        if (divisionsPerOctave < 1 || divisionsPerOctave > MAX_DIVISIONS) {
-            throw new IllegalArgumentException("divisions per octave must be 1.." + MAX_DIVISIONS
-                    + ", got " + divisionsPerOctave);
-        }
+        Require.positive("scaleLengthM", scaleLengthM);
+        Require.between("fret count", count, 1, MAX_FRETS);
+        Require.between("divisions per octave", divisionsPerOctave, 1, MAX_DIVISIONS);
         List<Fret> frets = new ArrayList<>(count);
         double previous = 0;
         for (int k = 1; k <= count; k++) {

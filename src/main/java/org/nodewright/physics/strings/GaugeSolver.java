@@ -3,6 +3,7 @@ package org.nodewright.physics.strings;
 import java.util.function.DoubleFunction;
 import org.hipparchus.analysis.solvers.AllowedSolution;
 import org.hipparchus.analysis.solvers.BracketingNthOrderBrentSolver;
+import org.nodewright.physics.Require;
 
 /**
  * The diameter that gives a wanted tension at a wanted pitch. For a flexible plain string it is
@@ -35,8 +36,8 @@ public final class GaugeSolver {
      */
     public double diameterM(DoubleFunction<StringConstruction> build, double guessM, double lengthM, double targetHz,
             double tensionN, boolean stiff, EndCondition end) {
-        Checks.positive("guessM", guessM);
-        Checks.positive("tensionN", tensionN);
+        Require.positive("guessM", guessM);
+        Require.positive("tensionN", tensionN);
         java.util.function.DoubleUnaryOperator excess = d -> needed(build.apply(d), lengthM, targetHz, stiff, end) - tensionN;
         double lo = guessM;
         double fLo = safeExcess(excess, lo);

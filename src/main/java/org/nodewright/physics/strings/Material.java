@@ -1,5 +1,7 @@
 package org.nodewright.physics.strings;
 
+import org.nodewright.physics.Require;
+
 /**
  * A string or wrap-wire material with typical properties.
  *
@@ -17,8 +19,8 @@ public record Material(String id, String name, double densityKgPerM3, double you
         if (id == null || id.isBlank() || name == null || source == null) {
             throw new IllegalArgumentException("material id, name and source are required");
         }
-        Checks.positive("densityKgPerM3", densityKgPerM3);
-        Checks.positive("youngsModulusPa", youngsModulusPa);
-        Checks.positive("tensileStrengthPa", tensileStrengthPa);
+        Require.positive("densityKgPerM3", densityKgPerM3);
+        Require.positive("youngsModulusPa", youngsModulusPa);
+        Require.positive("tensileStrengthPa", tensileStrengthPa);
     }
 }

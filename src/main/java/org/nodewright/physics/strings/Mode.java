@@ -1,5 +1,8 @@
 package org.nodewright.physics.strings;
 
+import org.nodewright.physics.Require;
+import org.nodewright.physics.tuning.Cents;
+
 /**
  * One transverse mode of a string.
  *
@@ -11,11 +14,9 @@ package org.nodewright.physics.strings;
 public record Mode(int n, double frequencyHz, double harmonicHz, ModeShape shape) {
 
     public Mode {
-        if (n < 1) {
-            throw new IllegalArgumentException("mode number must be at least 1, got " + n);
-        }
-        Checks.positive("frequencyHz", frequencyHz);
-        Checks.positive("harmonicHz", harmonicHz);
+        Require.atLeastOne("mode number", n);
+        Require.positive("frequencyHz", frequencyHz);
+        Require.positive("harmonicHz", harmonicHz);
         if (shape == null) {
             throw new IllegalArgumentException("shape is required");
         }
@@ -23,6 +24,6 @@ public record Mode(int n, double frequencyHz, double harmonicHz, ModeShape shape
 
     /** Cents of the partial above the harmonic n·f1: 1200·log2(f_n/(n·f1)). */
     public double centsFromHarmonic() {
-        return 1200.0 * Math.log(frequencyHz / harmonicHz) / Math.log(2.0);
+        return Cents.between(frequencyHz, harmonicHz);
     }
 }

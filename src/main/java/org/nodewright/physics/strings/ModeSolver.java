@@ -2,6 +2,7 @@ package org.nodewright.physics.strings;
 
 import java.util.ArrayList;
 import java.util.List;
+import org.nodewright.physics.Require;
 
 /** The first N transverse modes of a {@link StringModel}. */
 public final class ModeSolver {
@@ -10,9 +11,7 @@ public final class ModeSolver {
     public static final int MAX_MODES = 128;
 
     public List<Mode> modes(StringModel s, int count) {
-        if (count < 1 || count > MAX_MODES) {
-            throw new IllegalArgumentException("mode count must be 1.." + MAX_MODES + ", got " + count);
-        }
+        Require.between("mode count", count, 1, MAX_MODES);
         double f1 = s.idealFundamentalHz();
         List<Mode> modes = new ArrayList<>(count);
         for (int n = 1; n <= count; n++) {

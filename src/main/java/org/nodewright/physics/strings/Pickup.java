@@ -1,5 +1,7 @@
 package org.nodewright.physics.strings;
 
+import org.nodewright.physics.Require;
+
 /**
  * A pickup (or any sensor) reading the string's displacement averaged over its aperture.
  *
@@ -9,8 +11,8 @@ package org.nodewright.physics.strings;
 public record Pickup(double positionM, double apertureM) {
 
     public Pickup {
-        Checks.finite("positionM", positionM);
-        Checks.nonNegative("apertureM", apertureM);
+        Require.finite("positionM", positionM);
+        Require.nonNegative("apertureM", apertureM);
     }
 
     /** Gain for a mode: the mode shape averaged over [x − w/2, x + w/2] (its point value at w = 0). */

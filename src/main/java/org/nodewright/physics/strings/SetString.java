@@ -1,5 +1,7 @@
 package org.nodewright.physics.strings;
 
+import org.nodewright.physics.Require;
+
 /**
  * One string of a set.
  *
@@ -10,8 +12,8 @@ package org.nodewright.physics.strings;
 public record SetString(double lengthM, double targetHz, StringConstruction construction) {
 
     public SetString {
-        Checks.positive("lengthM", lengthM);
-        Checks.positive("targetHz", targetHz);
+        Require.positive("lengthM", lengthM);
+        Require.positive("targetHz", targetHz);
         if (construction == null) {
             throw new IllegalArgumentException("construction is required");
         }

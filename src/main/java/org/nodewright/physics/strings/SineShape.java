@@ -1,5 +1,7 @@
 package org.nodewright.physics.strings;
 
+import org.nodewright.physics.Require;
+
 /**
  * X(ξ) = sin(nπξ): the exact mode shape of a flexible string, and of a stiff string with pinned
  * (hinged) ends, whose beam-under-tension equation is solved exactly by sines.
@@ -9,9 +11,7 @@ package org.nodewright.physics.strings;
 public record SineShape(int n) implements ModeShape {
 
     public SineShape {
-        if (n < 1) {
-            throw new IllegalArgumentException("mode number must be at least 1, got " + n);
-        }
+        Require.atLeastOne("mode number", n);
     }
 
     @Override

@@ -1,5 +1,7 @@
 package org.nodewright.physics.strings;
 
+import org.nodewright.physics.Require;
+
 /**
  * How a string is built: a solid core, optionally with one round wrap wire.
  *
@@ -19,13 +21,13 @@ public record StringConstruction(Material core, double coreDiameterM, Material w
         if (core == null) {
             throw new IllegalArgumentException("core material is required");
         }
-        Checks.positive("coreDiameterM", coreDiameterM);
+        Require.positive("coreDiameterM", coreDiameterM);
         if (wrap == null) {
             if (wrapDiameterM != 0) {
                 throw new IllegalArgumentException("a wrap diameter needs a wrap material");
             }
         } else {
-            Checks.positive("wrapDiameterM", wrapDiameterM);
+            Require.positive("wrapDiameterM", wrapDiameterM);
         }
     }
 

@@ -1,6 +1,7 @@
 package org.nodewright.physics.strings;
 
 import java.util.List;
+import org.nodewright.physics.Require;
 
 /**
  * Everything needed to analyse one string, in SI units.
@@ -26,15 +27,13 @@ public record StringDesign(double lengthM, Double tensionN, Double targetHz, dou
         PickupCombination combination, double a4Hz) {
 
     public StringDesign {
-        Checks.positive("lengthM", lengthM);
+        Require.positive("lengthM", lengthM);
         if ((tensionN == null) == (targetHz == null)) {
             throw new IllegalArgumentException("give exactly one of tensionN and targetHz");
         }
-        Checks.positive("linearDensityKgPerM", linearDensityKgPerM);
-        Checks.nonNegative("bendingStiffnessNm2", bendingStiffnessNm2);
-        if (modeCount < 1 || modeCount > ModeSolver.MAX_MODES) {
-            throw new IllegalArgumentException("modeCount must be 1.." + ModeSolver.MAX_MODES + ", got " + modeCount);
-        }
+        Require.positive("linearDensityKgPerM", linearDensityKgPerM);
+        Require.nonNegative("bendingStiffnessNm2", bendingStiffnessNm2);
+        Require.between("modeCount", modeCount, 1, ModeSolver.MAX_MODES);
         if (excitationKind != null && !(excitationPositionM > 0 && excitationPositionM < lengthM)) {
             throw new IllegalArgumentException("the excitation point must lie strictly between the ends");
         }
@@ -42,6 +41,6 @@ public record StringDesign(double lengthM, Double tensionN, Double targetHz, dou
         if (combination != null && pickups.size() != 2) {
             throw new IllegalArgumentException("a pickup combination needs exactly two pickups");
         }
-        Checks.positive("a4Hz", a4Hz);
+        Require.positive("a4Hz", a4Hz);
     }
 }

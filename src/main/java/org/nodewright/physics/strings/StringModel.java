@@ -1,5 +1,7 @@
 package org.nodewright.physics.strings;
 
+import org.nodewright.physics.Require;
+
 /**
  * A uniform string under tension with optional bending stiffness, fixed at both ends.
  *
@@ -13,10 +15,10 @@ public record StringModel(double lengthM, double tensionN, double linearDensityK
         double bendingStiffnessNm2, EndCondition endCondition) {
 
     public StringModel {
-        Checks.positive("lengthM", lengthM);
-        Checks.positive("tensionN", tensionN);
-        Checks.positive("linearDensityKgPerM", linearDensityKgPerM);
-        Checks.nonNegative("bendingStiffnessNm2", bendingStiffnessNm2);
+        Require.positive("lengthM", lengthM);
+        Require.positive("tensionN", tensionN);
+        Require.positive("linearDensityKgPerM", linearDensityKgPerM);
+        Require.nonNegative("bendingStiffnessNm2", bendingStiffnessNm2);
         if (endCondition == null) {
             throw new IllegalArgumentException("endCondition is required");
         }

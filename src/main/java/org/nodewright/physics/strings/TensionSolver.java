@@ -2,6 +2,7 @@ package org.nodewright.physics.strings;
 
 import org.hipparchus.analysis.solvers.AllowedSolution;
 import org.hipparchus.analysis.solvers.BracketingNthOrderBrentSolver;
+import org.nodewright.physics.Require;
 
 /**
  * Tension that makes the sounding fundamental equal a target pitch, stiffness included.
@@ -22,7 +23,7 @@ public final class TensionSolver {
      */
     public double tensionFor(double lengthM, double linearDensityKgPerM, double bendingStiffnessNm2,
             EndCondition end, double targetHz) {
-        Checks.positive("targetHz", targetHz);
+        Require.positive("targetHz", targetHz);
         double flexible = IdealString.tensionN(lengthM, linearDensityKgPerM, targetHz);
         if (bendingStiffnessNm2 == 0) {
             return flexible;

@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import org.nodewright.physics.Require;
 import org.nodewright.physics.strings.Fret;
 import org.nodewright.physics.strings.Frets;
 
@@ -30,8 +31,8 @@ public record FretTemplate(double scaleLengthMm, int count, int divisionsPerOcta
     public static final int MAX_DIVISIONS = 96;
 
     public FretTemplate {
-        Checks.positive("scaleLengthMm", scaleLengthMm);
-        Checks.positive("lineLengthMm", lineLengthMm);
+        Require.positive("scaleLengthMm", scaleLengthMm);
+        Require.positive("lineLengthMm", lineLengthMm);
         if (count < 1 || count > MAX_FRETS) {
             throw new IllegalArgumentException("count must be 1.." + MAX_FRETS + ", was " + count);
         }

@@ -7,6 +7,8 @@ import org.hipparchus.linear.RealVector;
 import org.hipparchus.optim.nonlinear.vector.leastsquares.LeastSquaresBuilder;
 import org.hipparchus.optim.nonlinear.vector.leastsquares.LevenbergMarquardtOptimizer;
 import org.hipparchus.util.Pair;
+import org.nodewright.physics.Require;
+import org.nodewright.physics.tuning.Cents;
 
 /**
  * Saddle (and optionally nut) compensation of one fretted string, after the intonation model of
@@ -55,11 +57,11 @@ public final class IntonationCompensation {
     public record Setup(double scaleLengthMm, double openTensionN, double linearDensityKgPerM, double coreModulusPa,
             double coreAreaM2, double bendingStiffnessNm2, double nutHeightMm, double saddleHeightMm, int frets) {
         public Setup {
-            Checks.positive("scaleLengthMm", scaleLengthMm);
-            Checks.positive("openTensionN", openTensionN);
-            Checks.positive("linearDensityKgPerM", linearDensityKgPerM);
-            Checks.positive("coreModulusPa", coreModulusPa);
-            Checks.positive("coreAreaM2", coreAreaM2);
+            Require.positive("scaleLengthMm", scaleLengthMm);
+            Require.positive("openTensionN", openTensionN);
+            Require.positive("linearDensityKgPerM", linearDensityKgPerM);
+            Require.positive("coreModulusPa", coreModulusPa);
+            Require.positive("coreAreaM2", coreAreaM2);
             if (!(bendingStiffnessNm2 >= 0) || !(nutHeightMm >= 0) || !(saddleHeightMm >= 0)
                     || !Double.isFinite(bendingStiffnessNm2 + nutHeightMm + saddleHeightMm)) {
                 throw new IllegalArgumentException("stiffness and heights must be finite and >= 0");
@@ -132,7 +134,7 @@ public final class IntonationCompensation {
             double tension = s.openTensionN() + s.coreModulusPa() * s.coreAreaM2() * (pressed - open) / open;
             double vibrating = Math.hypot(saddleX - xn, hS);
             double fn = frequency(s, vibrating, tension);
-            e[n - 1] = 1200 * Math.log(fn / (f0 * Math.pow(2, n / 12.0))) / Math.log(2);
+            e[n - 1] = Cents.between(fn, f0 * Math.pow(2, n / 12.0));
         }
         return e;
     }

@@ -1,6 +1,7 @@
 package org.nodewright.physics.templates;
 
 import java.util.Map;
+import org.nodewright.physics.Require;
 
 /**
  * One thing drawn on a template sheet. Coordinates are millimetres on the sheet, x to the right,
@@ -20,11 +21,11 @@ public sealed interface Mark permits Mark.Stroke, Mark.Ring, Mark.Caption {
     record Stroke(double x1, double y1, double x2, double y2, double widthMm, Role role, Map<String, String> data)
             implements Mark {
         public Stroke {
-            Checks.finite("x1", x1);
-            Checks.finite("y1", y1);
-            Checks.finite("x2", x2);
-            Checks.finite("y2", y2);
-            Checks.positive("widthMm", widthMm);
+            Require.finite("x1", x1);
+            Require.finite("y1", y1);
+            Require.finite("x2", x2);
+            Require.finite("y2", y2);
+            Require.positive("widthMm", widthMm);
             data = Map.copyOf(data);
         }
 
@@ -41,10 +42,10 @@ public sealed interface Mark permits Mark.Stroke, Mark.Ring, Mark.Caption {
     record Ring(double cx, double cy, double radiusMm, double widthMm, Role role, Map<String, String> data)
             implements Mark {
         public Ring {
-            Checks.finite("cx", cx);
-            Checks.finite("cy", cy);
-            Checks.positive("radiusMm", radiusMm);
-            Checks.positive("widthMm", widthMm);
+            Require.finite("cx", cx);
+            Require.finite("cy", cy);
+            Require.positive("radiusMm", radiusMm);
+            Require.positive("widthMm", widthMm);
             data = Map.copyOf(data);
         }
     }
@@ -55,9 +56,9 @@ public sealed interface Mark permits Mark.Stroke, Mark.Ring, Mark.Caption {
         public enum Anchor { START, MIDDLE, END }
 
         public Caption {
-            Checks.finite("x", x);
-            Checks.finite("y", y);
-            Checks.positive("sizeMm", sizeMm);
+            Require.finite("x", x);
+            Require.finite("y", y);
+            Require.positive("sizeMm", sizeMm);
             if (text == null || text.isBlank()) {
                 throw new IllegalArgumentException("caption text must not be blank");
             }

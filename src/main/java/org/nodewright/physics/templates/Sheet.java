@@ -1,6 +1,7 @@
 package org.nodewright.physics.templates;
 
 import java.util.List;
+import org.nodewright.physics.Require;
 
 /**
  * A template at 1:1: its size in millimetres and the marks on it. Printing code tiles it over
@@ -16,8 +17,8 @@ public record Sheet(String title, double widthMm, double heightMm, List<Mark> ma
         if (title == null || title.isBlank()) {
             throw new IllegalArgumentException("sheet title must not be blank");
         }
-        Checks.positive("widthMm", widthMm);
-        Checks.positive("heightMm", heightMm);
+        Require.positive("widthMm", widthMm);
+        Require.positive("heightMm", heightMm);
         marks = List.copyOf(marks);
     }
 

@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import org.nodewright.physics.Require;
 
 /**
  * A tone-hole drilling template laid along a bore: the bore's profile (inside diameter) at 1:1
@@ -21,17 +22,17 @@ public record ToneHoleTemplate(String name, List<Section> sections, List<Hole> h
     /** One cylinder or cone frustum of the bore. */
     public record Section(double lengthMm, double inputDiameterMm, double outputDiameterMm) {
         public Section {
-            Checks.positive("lengthMm", lengthMm);
-            Checks.positive("inputDiameterMm", inputDiameterMm);
-            Checks.positive("outputDiameterMm", outputDiameterMm);
+            Require.positive("lengthMm", lengthMm);
+            Require.positive("inputDiameterMm", inputDiameterMm);
+            Require.positive("outputDiameterMm", outputDiameterMm);
         }
     }
 
     /** A hole: centre from the input end, diameter. */
     public record Hole(double positionMm, double diameterMm) {
         public Hole {
-            Checks.finite("positionMm", positionMm);
-            Checks.positive("diameterMm", diameterMm);
+            Require.finite("positionMm", positionMm);
+            Require.positive("diameterMm", diameterMm);
         }
     }
 

@@ -1,5 +1,7 @@
 package org.nodewright.physics.tuning;
 
+import org.nodewright.physics.Require;
+
 /**
  * Twelve-tone equal temperament around a settable A4 (ISO 16: 440 Hz by default).
  *
@@ -7,7 +9,7 @@ package org.nodewright.physics.tuning;
  */
 public record EqualTemperament(double a4Hz) {
 
-    /** ISO 16:1975 standard tuning frequency. */
+    /** ISO 16:1975 standard tuning frequency: the only default A4 of the application. */
     public static final double ISO_16_A4_HZ = 440.0;
 
     private static final String[] NAMES = {"C", "C#", "D", "D#", "E", "F", "F#", "G", "G#", "A", "A#", "B"};
@@ -16,9 +18,7 @@ public record EqualTemperament(double a4Hz) {
     private static final int A4_MIDI = 69;
 
     public EqualTemperament {
-        if (!(a4Hz > 0) || Double.isInfinite(a4Hz)) {
-            throw new IllegalArgumentException("a4Hz must be positive and finite, got " + a4Hz);
-        }
+        Require.positive("a4Hz", a4Hz);
     }
 
     public static EqualTemperament iso16() {
@@ -32,10 +32,8 @@ public record EqualTemperament(double a4Hz) {
 
     /** The nearest equal-tempered note to {@code frequencyHz} and how many cents it sits off it. */
     public Note nearest(double frequencyHz) {
-        if (!(frequencyHz > 0) || Double.isInfinite(frequencyHz)) {
-            throw new IllegalArgumentException("frequencyHz must be positive and finite, got " + frequencyHz);
-        }
-        double semitones = 12.0 * Math.log(frequencyHz / a4Hz) / Math.log(2.0);
+        Require.positive("frequencyHz", frequencyHz);
+        double semitones = Cents.between(frequencyHz, a4Hz) / 100.0;
         int midi = (int) Math.round(semitones) + A4_MIDI;
         double noteHz = frequencyOf(midi);
         return new Note(nameOf(midi), midi, noteHz, Cents.between(frequencyHz, noteHz));

@@ -1,0 +1,159 @@
+package org.nodewright.physics.aircolumn;
+
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.List;
+
+/**
+ * A bore as the chain of elements its transfer matrices are applied along, in order from the input
+ * end: {@link Duct}s (collinear segments first joined, see {@link #mergeCollinear}; lossy cones
+ * cut so that radii within one duct differ by at most 15 %) with a {@link SideHole} at each hole's
+ * centre, the duct there split in two.
+ */
+final class ElementChain {
+
+    private static final double MAX_LOSSY_CONE_RATIO = 1.15;
+
+    private final ChainElement[] elements;
+    private final Duct[] ducts;
+    private final double length;
+
+    private ElementChain(List<ChainElement> elements, double length) {
+        this.elements = elements.toArray(new ChainElement[0]);
+        this.ducts = elements.stream().filter(Duct.class::isInstance).map(Duct.class::cast).toArray(Duct[]::new);
+        this.length = length;
+        if (ducts.length == 0) {
+            throw new IllegalStateException("no duct element");
+        }
+    }
+
+    /** The chain of column (its segments, holes and whether losses cut the cones finer). */
+    static ElementChain of(AirColumn column, KeefeExpansion keefe) {
+        List<ChainElement> out = new ArrayList<>();
+        List<ToneHole> sorted = new ArrayList<>(column.holes());
+        sorted.sort(Comparator.comparingDouble(ToneHole::position));
+        boolean losses = column.losses();
+        double xs = 0;
+        int h = 0;
+        for (BoreSegment seg : mergeCollinear(column.segments())) {
+            double xe = xs + seg.length();
+            double from = xs;
+            while (h < sorted.size() && sorted.get(h).position() <= xe) {
+                ToneHole hole = sorted.get(h);
+                double at = hole.position();
+                if (at > from) {
+                    addDucts(out, from, at - from, seg.radiusAt(from - xs), seg.radiusAt(at - xs), losses, keefe);
+                    from = at;
+                }
+                out.add(new SideHole(at, new ToneHoleModel(hole, seg.radiusAt(at - xs))));
+                h++;
+            }
+            if (xe > from) {
+                addDucts(out, from, xe - from, seg.radiusAt(from - xs), seg.outputRadius(), losses, keefe);
+            }
+            xs = xe;
+        }
+        return new ElementChain(out, column.length());
+    }
+
+    private static void addDucts(List<ChainElement> out, double from, double length, double ra, double rb,
+            boolean losses, KeefeExpansion keefe) {
+        int n = 1;
+        if (losses && ra != rb) {
+            double ratio = Math.max(ra, rb) / Math.min(ra, rb);
+            n = (int) Math.ceil(Math.log(ratio) / Math.log(MAX_LOSSY_CONE_RATIO) - 1e-9);
+            n = Math.max(1, Math.min(n, 64));
+        }
+        for (int i = 0; i < n; i++) {
+            double a = ra + (rb - ra) * i / n;
+            double b = ra + (rb - ra) * (i + 1) / n;
+            out.add(new Duct(from + length * i / n, length / n, a, b, keefe));
+        }
+    }
+
+    /**
+     * Joins consecutive segments that form one straight cone or cylinder (same taper, no step):
+     * the exact cone matrix of the whole run equals the product of its parts without losses, and
+     * with losses the run is cut again (radii within an element differ by at most 15 %), so a bore
+     * drawn as many collinear frusta costs no more than its distinct tapers.
+     */
+    static List<BoreSegment> mergeCollinear(List<BoreSegment> segments) {
+        List<BoreSegment> out = new ArrayList<>();
+        BoreSegment run = null;
+        for (BoreSegment s : segments) {
+            if (run != null && collinear(run, s)) {
+                run = new BoreSegment(run.length() + s.length(), run.inputRadius(), s.outputRadius());
+            } else {
+                if (run != null) {
+                    out.add(run);
+                }
+                run = s;
+            }
+        }
+        out.add(run);
+        return out;
+    }
+
+    private static boolean collinear(BoreSegment a, BoreSegment b) {
+        double scale = Math.max(a.outputRadius(), b.inputRadius());
+        if (Math.abs(a.outputRadius() - b.inputRadius()) > 1e-9 * scale) {
+            return false;
+        }
+        if (a.isCylinder() && b.isCylinder()) {
+            return true;
+        }
+        double ta = (a.outputRadius() - a.inputRadius()) / a.length();
+        double tb = (b.outputRadius() - b.inputRadius()) / b.length();
+        return Math.abs(ta - tb) <= 1e-9 * Math.max(Math.abs(ta), Math.abs(tb)) && ta != 0 && tb != 0;
+    }
+
+    /** Number of elements (ducts and holes). */
+    int size() {
+        return elements.length;
+    }
+
+    /** Element e, counted from the input end. */
+    ChainElement get(int e) {
+        return elements[e];
+    }
+
+    /** The elements from the input end (a copy). */
+    ChainElement[] toArray() {
+        return elements.clone();
+    }
+
+    /** Total axial length, m. */
+    double length() {
+        return length;
+    }
+
+    /**
+     * Index of the duct containing x: the last duct starting at or before x (the first duct for x
+     * before it).
+     */
+    int ductIndexAt(double x) {
+        int best = -1;
+        int first = -1;
+        for (int e = 0; e < elements.length; e++) {
+            if (elements[e] instanceof Duct d) {
+                if (first < 0) {
+                    first = e;
+                }
+                if (d.start <= x) {
+                    best = e;
+                }
+            }
+        }
+        return best < 0 ? first : best;
+    }
+
+    /** Upstream ends of the ducts and the bore's end, m (for sampling profiles). */
+    double[] boundaries() {
+        double[] xs = new double[ducts.length + 1];
+        for (int i = 0; i < ducts.length; i++) {
+            xs[i] = ducts[i].start;
+        }
+        xs[ducts.length] = length;
+        return xs;
+    }
+}
