@@ -45,6 +45,32 @@ public final class Outline {
     }
 
     /**
+     * A symmetric outline from one half: the points run from the centre line y = 0 round one side back to
+     * it (first and last point on y = 0); the other side is their mirror image in y = 0.
+     */
+    public static Outline mirroredHalf(double[] xs, double[] ys) {
+        return polygon(mirror(xs, ys)[0], mirror(xs, ys)[1]);
+    }
+
+    /** The full point list of a mirrored half (see {@link #mirroredHalf}); the half's end points are not repeated. */
+    public static double[][] mirror(double[] xs, double[] ys) {
+        int n = xs.length;
+        int inner = Math.max(0, n - 2);
+        double[] fx = new double[n + inner];
+        double[] fy = new double[n + inner];
+        for (int i = 0; i < n; i++) {
+            fx[i] = xs[i];
+            fy[i] = ys[i];
+        }
+        for (int k = 0; k < inner; k++) {
+            int i = n - 2 - k;
+            fx[n + k] = xs[i];
+            fy[n + k] = -ys[i];
+        }
+        return new double[][] {fx, fy};
+    }
+
+    /**
      * Why the points do not make a simple polygon (too few, repeated, zero area, self-crossing),
      * or empty when they do. The one home of this check, shared by the web layer.
      */

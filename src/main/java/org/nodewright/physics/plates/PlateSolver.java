@@ -252,6 +252,42 @@ public final class PlateSolver {
         return new SymmetricEigen.Pairs(lambda, vectors);
     }
 
+    /**
+     * A supported edge is itself a line of w = 0, not a node line: nodes on or beyond it take a tiny value of the
+     * sign of the plate next to them, so that node lines run up to the edge and never along it.
+     */
+    private static double[][] supportedContour(double[][] grid, boolean[][] inside, Outline outline) {
+        int gx = grid.length;
+        int gy = grid[0].length;
+        boolean[][] interior = new boolean[gx][gy];
+        for (int i = 0; i < gx; i++) {
+            for (int j = 0; j < gy; j++) {
+                interior[i][j] = outline.isRectangle() ? i > 0 && j > 0 && i < gx - 1 && j < gy - 1 : inside[i][j];
+            }
+        }
+        double[][] out = new double[gx][gy];
+        for (int i = 0; i < gx; i++) {
+            for (int j = 0; j < gy; j++) {
+                if (interior[i][j]) {
+                    out[i][j] = grid[i][j];
+                    continue;
+                }
+                double sum = 0;
+                for (int di = -1; di <= 1; di++) {
+                    for (int dj = -1; dj <= 1; dj++) {
+                        int a = i + di;
+                        int b = j + dj;
+                        if (a >= 0 && b >= 0 && a < gx && b < gy && interior[a][b]) {
+                            sum += grid[a][b];
+                        }
+                    }
+                }
+                out[i][j] = sum == 0 ? grid[i][j] : 1e-9 * sum;
+            }
+        }
+        return out;
+    }
+
     private static List<PlateMode> modes(Plate plate, RitzBasis basis, SymmetricEigen.Pairs pairs, int rigid,
                                          int modeCount) {
         Outline outline = plate.outline();
@@ -310,7 +346,8 @@ public final class PlateSolver {
                     row[j] *= scale;
                 }
             }
-            List<double[][]> lines = NodalLines.trace(xs, ys, grid, inside, outline);
+            double[][] contour = plate.edges() == EdgeCondition.FREE ? grid : supportedContour(grid, inside, outline);
+            List<double[][]> lines = NodalLines.trace(xs, ys, contour, inside, outline);
             double[][] shown = new double[gx][gy];
             for (int i = 0; i < gx; i++) {
                 for (int j = 0; j < gy; j++) {

@@ -157,13 +157,14 @@ final class RitzSystem {
      * Adds a brace glued on one face: bending ½∫EI (w_ss)² ds about the plate's mid-plane (own second moment
      * b·c³/12 plus the parallel-axis term b·c·(h/2 + c/2)², Steiner), twisting ½∫GJ (w_sn)² ds with
      * J ≈ (1/3)·t³·b·(1 − 0.63 t/b) for a rectangle of sides t ≤ b (Roark's Formulas, table 10.7), and
-     * mass ∫ρ·b·c·w² ds, by Gauss–Legendre along its line. E along the brace follows its angle to the grain.
+     * mass ∫ρ·b·c·w² ds, by Gauss–Legendre along its line. A brace is cut with its grain along its length,
+     * so its E is the material's E along the grain whatever its angle on the plate.
      */
     void addBrace(Brace brace, PlateMaterial material, ThicknessField thickness, int points) {
         double len = brace.length();
         double c = (brace.x2() - brace.x1()) / len;
         double s = (brace.y2() - brace.y1()) / len;
-        double e = material.elasticAlongDirection(c, s);
+        double e = material.elasticAlongPa();
         double bw = brace.widthM();
         double bh = brace.heightM();
         double thin = Math.min(bw, bh);
