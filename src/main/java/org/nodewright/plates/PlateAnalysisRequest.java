@@ -8,8 +8,9 @@ import jakarta.validation.constraints.Min;
 import jakarta.validation.constraints.NotNull;
 import jakarta.validation.constraints.Size;
 import java.util.List;
+import org.nodewright.physics.plates.EdgeCondition;
 import org.nodewright.physics.plates.PlateSolver;
-import org.nodewright.strings.CrossFieldChecked;
+import org.nodewright.web.CrossFieldChecked;
 import org.nodewright.web.FieldProblem;
 import org.nodewright.web.Finite;
 import tools.jackson.databind.JsonNode;
@@ -43,7 +44,7 @@ public record PlateAnalysisRequest(
         @DecimalMax(value = "1e13", message = "must be at most 1e13 Pa") Double shearPa,
         @Finite @DecimalMin(value = "-0.99", message = "must be at least -0.99")
         @DecimalMax(value = "10", message = "must be at most 10") Double poissonAlongAcross,
-        PlateWords.Edges edges,
+        EdgeCondition edges,
         @Valid @Size(max = MAX_BRACES) List<@NotNull @Valid BraceJson> braces,
         @Min(1) @Max(PlateSolver.MAX_MODES) Integer modeCount) implements CrossFieldChecked.Rules {
 
@@ -74,8 +75,8 @@ public record PlateAnalysisRequest(
         return modeCount == null ? DEFAULT_MODE_COUNT : modeCount;
     }
 
-    public PlateWords.Edges edgesOrDefault() {
-        return edges == null ? PlateWords.Edges.FREE : edges;
+    public EdgeCondition edgesOrDefault() {
+        return edges == null ? EdgeCondition.FREE : edges;
     }
 
     public List<BraceJson> bracesOrEmpty() {

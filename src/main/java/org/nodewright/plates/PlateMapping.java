@@ -219,7 +219,7 @@ final class PlateMapping {
                 .map(b -> new Brace(b.fromMm().get(0) * MM, b.fromMm().get(1) * MM, b.toMm().get(0) * MM,
                         b.toMm().get(1) * MM, b.widthMm() * MM, b.heightMm() * MM))
                 .toList();
-        return new Plate(outline, material(r), thickness, r.edgesOrDefault().core, braces);
+        return new Plate(outline, material(r), thickness, r.edgesOrDefault(), braces);
     }
 
     static PlateMaterial material(PlateAnalysisRequest r) {
