@@ -2,29 +2,15 @@ package org.nodewright;
 
 import static org.assertj.core.api.Assertions.assertThat;
 
-import java.nio.file.Files;
 import java.nio.file.Path;
 import org.junit.jupiter.api.Test;
 import org.springframework.beans.factory.annotation.Autowired;
-import org.springframework.boot.test.context.SpringBootTest;
-import org.springframework.boot.webmvc.test.autoconfigure.AutoConfigureMockMvc;
-import org.springframework.test.context.DynamicPropertyRegistry;
-import org.springframework.test.context.DynamicPropertySource;
 import org.springframework.test.web.servlet.MockMvc;
 import org.springframework.test.web.servlet.request.MockMvcRequestBuilders;
 import org.springframework.test.web.servlet.result.MockMvcResultMatchers;
 
-@SpringBootTest
-@AutoConfigureMockMvc
+@NodewrightWebTest
 class ApplicationSmokeTest {
-
-    static Path dataDir;
-
-    @DynamicPropertySource
-    static void dataDir(DynamicPropertyRegistry registry) throws Exception {
-        dataDir = Files.createTempDirectory("nodewright-smoke-");
-        registry.add("app.data-dir", dataDir::toString);
-    }
 
     @Autowired
     MockMvc mvc;
@@ -34,6 +20,8 @@ class ApplicationSmokeTest {
 
     @Test
     void theStoreLivesInTheDataDirectoryTheTestChose() {
+        Path dataDir = Path.of(environment.getProperty("app.data-dir"));
+        assertThat(dataDir.getFileName().toString()).startsWith("nodewright-test-");
         assertThat(environment.getProperty("spring.datasource.url")).contains(dataDir.toAbsolutePath().toString());
         assertThat(dataDir.resolve("nodewright.mv.db")).exists();
     }
@@ -46,7 +34,9 @@ class ApplicationSmokeTest {
         String html = mvc.perform(MockMvcRequestBuilders.get("/"))
                 .andExpect(MockMvcResultMatchers.status().isOk())
                 .andReturn().getResponse().getContentAsString();
-        assertThat(html).contains("Nodewright workshop");
+        // The start page leads to each bench and the library (links, not wording, are what it is for).
+        assertThat(html).contains("href=\"/strings\"", "href=\"/string-sets\"", "href=\"/air-columns\"",
+                "href=\"/library\"").doesNotContain("??");
     }
 
     @Test
@@ -55,6 +45,16 @@ class ApplicationSmokeTest {
                 .andExpect(MockMvcResultMatchers.status().isOk())
                 .andExpect(MockMvcResultMatchers.jsonPath("$.info.title").value("Nodewright API"))
                 .andExpect(MockMvcResultMatchers.jsonPath("$.paths['/api/v1/strings/analyze']").exists());
+    }
+
+    @Test
+    void theOpenApiDescriptionListsTheTemplateAndInverseEndpoints() throws Exception {
+        String docs = mvc.perform(MockMvcRequestBuilders.get("/v3/api-docs"))
+                .andExpect(MockMvcResultMatchers.status().isOk())
+                .andReturn().getResponse().getContentAsString();
+        assertThat(docs).contains("/api/v1/frets.svg", "/api/v1/frets.pdf", "/api/v1/templates/tone-holes.svg",
+                "/api/v1/templates/compensation", "/api/v1/inverse/gauges", "/api/v1/inverse/tone-holes",
+                "/api/v1/inverse/jobs/{id}", "Inverse design");
     }
 
     @Test

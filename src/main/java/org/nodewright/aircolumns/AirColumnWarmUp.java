@@ -10,6 +10,7 @@ import org.nodewright.physics.aircolumn.InputEnd;
 import org.nodewright.physics.aircolumn.OutputEnd;
 import org.nodewright.physics.aircolumn.ToneHole;
 import org.nodewright.physics.tuning.EqualTemperament;
+import org.springframework.boot.autoconfigure.condition.ConditionalOnProperty;
 import org.springframework.boot.context.event.ApplicationReadyEvent;
 import org.springframework.context.event.EventListener;
 import org.springframework.stereotype.Component;
@@ -17,8 +18,10 @@ import org.springframework.stereotype.Component;
 /**
  * Once the server is ready, analyses a small demo bore a few times on a low-priority background
  * thread so that the JIT has compiled the transfer-matrix loops before the first real request.
+ * {@code app.air-column.warm-up=false} turns it off (the tests do: there it only costs CPU).
  */
 @Component
+@ConditionalOnProperty(name = "app.air-column.warm-up", havingValue = "true", matchIfMissing = true)
 class AirColumnWarmUp {
 
     @EventListener(ApplicationReadyEvent.class)

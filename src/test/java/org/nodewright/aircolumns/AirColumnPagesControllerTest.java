@@ -12,26 +12,17 @@ import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 import java.util.stream.Stream;
 import org.junit.jupiter.api.Test;
+import org.nodewright.StoreFreeWebTest;
 import org.springframework.beans.factory.annotation.Autowired;
-import org.springframework.boot.test.context.SpringBootTest;
-import org.springframework.boot.webmvc.test.autoconfigure.AutoConfigureMockMvc;
 import org.springframework.core.io.ClassPathResource;
 import org.springframework.core.io.support.PropertiesLoaderUtils;
-import org.springframework.test.context.DynamicPropertyRegistry;
-import org.springframework.test.context.DynamicPropertySource;
 import org.springframework.test.web.servlet.MockMvc;
 import org.springframework.test.web.servlet.request.MockMvcRequestBuilders;
 import org.springframework.test.web.servlet.result.MockMvcResultMatchers;
 
-@SpringBootTest
-@AutoConfigureMockMvc
+@StoreFreeWebTest
 class AirColumnPagesControllerTest {
 
-    @DynamicPropertySource
-    static void dataDir(DynamicPropertyRegistry registry) throws IOException {
-        Path dir = Files.createTempDirectory("nodewright-airpage-");
-        registry.add("app.data-dir", dir::toString);
-    }
 
     @Autowired
     MockMvc mvc;

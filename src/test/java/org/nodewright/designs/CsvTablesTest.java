@@ -6,22 +6,15 @@ import java.net.URI;
 import java.net.http.HttpClient;
 import java.net.http.HttpRequest;
 import java.net.http.HttpResponse;
-import java.nio.file.Files;
 import java.util.List;
 import org.junit.jupiter.api.Test;
-import org.springframework.boot.test.context.SpringBootTest;
+import org.nodewright.NodewrightWebTest;
 import org.springframework.boot.test.web.server.LocalServerPort;
-import org.springframework.test.context.DynamicPropertyRegistry;
-import org.springframework.test.context.DynamicPropertySource;
 
 /** CSV tables on a real server (the CSV endpoints run the bench endpoints through a servlet include). */
-@SpringBootTest(webEnvironment = SpringBootTest.WebEnvironment.RANDOM_PORT)
+@NodewrightWebTest
 class CsvTablesTest {
 
-    @DynamicPropertySource
-    static void dataDir(DynamicPropertyRegistry registry) throws Exception {
-        registry.add("app.data-dir", Files.createTempDirectory("nodewright-csv-")::toString);
-    }
 
     @LocalServerPort
     int port;

@@ -1,9 +1,7 @@
 package org.nodewright.designs;
 
-import java.nio.file.Files;
 import org.junit.jupiter.api.condition.EnabledIfEnvironmentVariable;
-import org.springframework.boot.test.context.SpringBootTest;
-import org.springframework.boot.webmvc.test.autoconfigure.AutoConfigureMockMvc;
+import org.nodewright.NodewrightWebTest;
 import org.springframework.test.context.ActiveProfiles;
 import org.springframework.test.context.DynamicPropertyRegistry;
 import org.springframework.test.context.DynamicPropertySource;
@@ -13,15 +11,13 @@ import org.springframework.test.context.DynamicPropertySource;
  * migrations. Runs when NODEWRIGHT_PG_URL (and _USER, _PASSWORD) are set, as
  * e2e-tests/run-all-tests.sh does; skipped otherwise.
  */
-@SpringBootTest
-@AutoConfigureMockMvc
+@NodewrightWebTest
 @ActiveProfiles("postgres")
 @EnabledIfEnvironmentVariable(named = "NODEWRIGHT_PG_URL", matches = "jdbc:postgresql:.+")
 class DesignApiPostgresTest extends DesignApiContract {
 
     @DynamicPropertySource
-    static void database(DynamicPropertyRegistry registry) throws Exception {
-        registry.add("app.data-dir", Files.createTempDirectory("nodewright-designs-pg-")::toString);
+    static void database(DynamicPropertyRegistry registry) {
         registry.add("spring.datasource.url", () -> System.getenv("NODEWRIGHT_PG_URL"));
         registry.add("spring.datasource.username", () -> System.getenv("NODEWRIGHT_PG_USER"));
         registry.add("spring.datasource.password", () -> System.getenv().getOrDefault("NODEWRIGHT_PG_PASSWORD", ""));

@@ -15,23 +15,15 @@ import java.util.Properties;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 import org.junit.jupiter.api.Test;
+import org.nodewright.NodewrightWebTest;
 import org.springframework.beans.factory.annotation.Autowired;
-import org.springframework.boot.test.context.SpringBootTest;
-import org.springframework.boot.webmvc.test.autoconfigure.AutoConfigureMockMvc;
 import org.springframework.http.MediaType;
-import org.springframework.test.context.DynamicPropertyRegistry;
-import org.springframework.test.context.DynamicPropertySource;
 import org.springframework.test.web.servlet.MockMvc;
 
 /** The library pages render, escape what users typed, and every text they use is in designs.properties. */
-@SpringBootTest
-@AutoConfigureMockMvc
+@NodewrightWebTest
 class LibraryPagesTest {
 
-    @DynamicPropertySource
-    static void dataDir(DynamicPropertyRegistry registry) throws Exception {
-        registry.add("app.data-dir", Files.createTempDirectory("nodewright-library-pages-")::toString);
-    }
 
     @Autowired
     MockMvc mvc;

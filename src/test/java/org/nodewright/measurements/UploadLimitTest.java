@@ -7,26 +7,18 @@ import java.io.InputStream;
 import java.io.OutputStream;
 import java.net.Socket;
 import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import org.junit.jupiter.api.Test;
-import org.springframework.boot.test.context.SpringBootTest;
+import org.nodewright.NodewrightWebTest;
 import org.springframework.boot.test.web.server.LocalServerPort;
-import org.springframework.test.context.DynamicPropertyRegistry;
-import org.springframework.test.context.DynamicPropertySource;
 
 /**
  * The 50 MB upload limit is enforced by the servlet container from the declared Content-Length,
  * before the body is read: a client that announces 60 MB and sends only 1 MB gets its 400 problem
  * document at once, so the server never buffers the whole request.
  */
-@SpringBootTest(webEnvironment = SpringBootTest.WebEnvironment.RANDOM_PORT)
+@NodewrightWebTest
 class UploadLimitTest {
 
-    @DynamicPropertySource
-    static void dataDir(DynamicPropertyRegistry registry) throws Exception {
-        String dir = Files.createTempDirectory("nodewright-upload-").toString();
-        registry.add("app.data-dir", () -> dir);
-    }
 
     @LocalServerPort
     int port;

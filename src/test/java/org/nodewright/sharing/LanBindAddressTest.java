@@ -16,7 +16,6 @@ class LanBindAddressTest {
         StandardEnvironment environment = new StandardEnvironment();
         environment.getPropertySources().addFirst(new MapPropertySource("commandLineArgs", commandLine));
         ConfigDataEnvironmentPostProcessor.applyTo(environment);
-        environment.getPropertySources().forEach(s -> System.out.println("SOURCE " + s.getName()));
         new LanBindAddress().postProcessEnvironment(environment, new SpringApplication());
         return environment.getProperty("server.address");
     }

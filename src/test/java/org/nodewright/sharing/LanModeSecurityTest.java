@@ -12,10 +12,11 @@ import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.
 import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.redirectedUrl;
 import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.status;
 
-import java.nio.file.Files;
-import java.nio.file.Path;
 import java.util.concurrent.atomic.AtomicInteger;
 import org.junit.jupiter.api.Test;
+import org.nodewright.NodewrightWebTest;
+import org.nodewright.TemporaryDataDirectory;
+import org.nodewright.TestProperties;
 import org.springframework.beans.factory.annotation.Autowired;
 import org.springframework.boot.test.context.SpringBootTest;
 import org.springframework.boot.webmvc.test.autoconfigure.AutoConfigureMockMvc;
@@ -24,28 +25,24 @@ import org.springframework.http.MediaType;
 import org.springframework.jdbc.core.simple.JdbcClient;
 import org.springframework.mock.web.MockHttpSession;
 import org.springframework.security.crypto.bcrypt.BCryptPasswordEncoder;
-import org.springframework.test.context.DynamicPropertyRegistry;
-import org.springframework.test.context.DynamicPropertySource;
+import org.springframework.test.context.ContextConfiguration;
 import org.springframework.test.web.servlet.MockMvc;
 import org.springframework.test.web.servlet.request.MockHttpServletRequestBuilder;
 import org.springframework.test.web.servlet.request.RequestPostProcessor;
 
-/** LAN mode end to end through the security filter chain, with the real schema and BCrypt. */
-@SpringBootTest(properties = {"app.sharing.lan=true", "app.sharing.admin-password=" + LanModeSecurityTest.ADMIN_PW})
+/**
+ * LAN mode end to end through the security filter chain, with the real schema and BCrypt. A mock
+ * environment, not {@link NodewrightWebTest}'s real server: LAN mode would listen on every interface.
+ */
+@SpringBootTest(properties = {"app.sharing.lan=true", "app.sharing.admin-password=" + LanModeSecurityTest.ADMIN_PW,
+    TestProperties.NO_WARM_UP, TestProperties.NO_BANNER})
 @AutoConfigureMockMvc
+@ContextConfiguration(initializers = TemporaryDataDirectory.class)
 class LanModeSecurityTest {
 
     static final String ADMIN_PW = "harrowgate-admin-1";
     private static final AtomicInteger NAMES = new AtomicInteger();
     private static final AtomicInteger ADDRESSES = new AtomicInteger(10);
-
-    @DynamicPropertySource
-    static void dataDir(DynamicPropertyRegistry registry) throws Exception {
-        Path dir = Files.createTempDirectory("nodewright-lan-");
-        registry.add("app.data-dir", dir::toString);
-        // The data-dir post-processor runs before dynamic properties are added: name the URL directly.
-        registry.add("spring.datasource.url", () -> "jdbc:h2:file:" + dir.toString().replace('\\', '/') + "/nodewright");
-    }
 
     @Autowired
     MockMvc mvc;
@@ -175,19 +172,29 @@ class LanModeSecurityTest {
         mvc.perform(put("/api/v1/accounts/" + name + "/password").with(httpBasic("admin", ADMIN_PW))
                         .contentType(MediaType.APPLICATION_JSON).content("{\"password\":\"maple-back-77\"}"))
                 .andExpect(status().isOk()).andExpect(jsonPath("$.password").doesNotExist());
-        mvc.perform(get("/api/v1/accounts/" + name).with(httpBasic(name, "maple-back-77")).with(from(nextAddress())))
+        // The reset password signs in, but until the account chose its own only the password change is open.
+        mvc.perform(get("/api/v1/materials").with(httpBasic(name, "maple-back-77")).with(from(nextAddress())))
+                .andExpect(status().isForbidden())
+                .andExpect(jsonPath("$.title").value("Password change required"));
+        mvc.perform(put("/api/v1/accounts/me/password").with(httpBasic(name, "maple-back-77")).with(from(nextAddress()))
+                        .contentType(MediaType.APPLICATION_JSON)
+                        .content("{\"currentPassword\":\"maple-back-77\",\"newPassword\":\"maple-back-78\"}"))
+                .andExpect(status().isNoContent());
+        mvc.perform(get("/api/v1/accounts/" + name).with(httpBasic(name, "maple-back-78")).with(from(nextAddress())))
                 .andExpect(status().isForbidden()); // signed in (new password works) but not an admin
         mvc.perform(get("/api/v1/materials").with(httpBasic(name, "spruce-top-42")).with(from(nextAddress())))
                 .andExpect(status().isUnauthorized()); // the old password no longer does
+        mvc.perform(get("/api/v1/materials").with(httpBasic(name, "maple-back-77")).with(from(nextAddress())))
+                .andExpect(status().isUnauthorized()); // nor the one the admin set
 
         mvc.perform(put("/api/v1/accounts/" + name + "/enabled").with(httpBasic("admin", ADMIN_PW))
                         .contentType(MediaType.APPLICATION_JSON).content("{\"enabled\":false}"))
                 .andExpect(status().isOk()).andExpect(jsonPath("$.enabled").value(false));
-        mvc.perform(get("/api/v1/materials").with(httpBasic(name, "maple-back-77")).with(from(nextAddress())))
+        mvc.perform(get("/api/v1/materials").with(httpBasic(name, "maple-back-78")).with(from(nextAddress())))
                 .andExpect(status().isUnauthorized());
         mvc.perform(put("/api/v1/accounts/" + name + "/enabled").with(httpBasic("admin", ADMIN_PW))
                 .contentType(MediaType.APPLICATION_JSON).content("{\"enabled\":true}")).andExpect(status().isOk());
-        int back = mvc.perform(get("/api/v1/designs").with(httpBasic(name, "maple-back-77")).with(from(nextAddress())))
+        int back = mvc.perform(get("/api/v1/designs").with(httpBasic(name, "maple-back-78")).with(from(nextAddress())))
                 .andReturn().getResponse().getStatus();
         assertThat(back).isNotIn(401, 403);
     }

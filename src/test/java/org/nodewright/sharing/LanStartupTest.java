@@ -12,11 +12,12 @@ import java.net.http.HttpClient;
 import java.net.http.HttpRequest;
 import java.net.http.HttpResponse;
 import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.Base64;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
 import org.nodewright.NodewrightApplication;
+import org.nodewright.TestProperties;
 import org.springframework.boot.builder.SpringApplicationBuilder;
 import org.springframework.boot.diagnostics.FailureAnalysis;
 import org.springframework.boot.web.server.context.WebServerApplicationContext;
@@ -33,11 +34,12 @@ class LanStartupTest {
     private static final HttpClient HTTP = HttpClient.newHttpClient();
 
     private static ConfigurableApplicationContext start(Path dataDir, String... args) {
-        String[] all = new String[args.length + 3];
+        String[] all = new String[args.length + 4];
         all[0] = "--server.port=0";
         all[1] = "--app.data-dir=" + dataDir;
-        all[2] = "--spring.main.banner-mode=off";
-        System.arraycopy(args, 0, all, 3, args.length);
+        all[2] = "--" + TestProperties.NO_BANNER;
+        all[3] = "--" + TestProperties.NO_WARM_UP;
+        System.arraycopy(args, 0, all, 4, args.length);
         return new SpringApplicationBuilder(NodewrightApplication.class).run(all);
     }
 
@@ -56,17 +58,28 @@ class LanStartupTest {
 
     private static HttpResponse<String> get(String host, int port, String path, String user, String password)
             throws Exception {
-        HttpRequest.Builder request = HttpRequest.newBuilder(URI.create("http://" + host + ":" + port + path));
+        return send(HTTP, "http", host, port, path, user, password);
+    }
+
+    /** LAN mode speaks HTTPS only; this client trusts exactly the certificate kept under the data directory. */
+    private static HttpResponse<String> getTls(Path dataDir, int port, String path, String user, String password)
+            throws Exception {
+        return send(LanTestTls.trustingKept(dataDir), "https", "127.0.0.1", port, path, user, password);
+    }
+
+    private static HttpResponse<String> send(HttpClient client, String scheme, String host, int port, String path,
+            String user, String password) throws Exception {
+        HttpRequest.Builder request = HttpRequest.newBuilder(URI.create(scheme + "://" + host + ":" + port + path));
         if (user != null) {
             String token = Base64.getEncoder().encodeToString((user + ":" + password).getBytes(StandardCharsets.UTF_8));
             request.header("Authorization", "Basic " + token);
         }
-        return HTTP.send(request.build(), HttpResponse.BodyHandlers.ofString());
+        return client.send(request.build(), HttpResponse.BodyHandlers.ofString());
     }
 
     @Test
-    void byDefaultItListensOnLoopbackOnlyAndAsksForNoLogin() throws Exception {
-        try (ConfigurableApplicationContext app = start(Files.createTempDirectory("nodewright-local-"))) {
+    void byDefaultItListensOnLoopbackOnlyAndAsksForNoLogin(@TempDir Path dir) throws Exception {
+        try (ConfigurableApplicationContext app = start(dir)) {
             int port = port(app);
             assertThat(answers("127.0.0.1", port)).isTrue();
             assertThat(answers("127.0.0.2", port)).isFalse();
@@ -81,39 +94,44 @@ class LanStartupTest {
     }
 
     @Test
-    void lanModeListensOnAllInterfacesAndTheFirstStartAloneSetsTheAdminPassword() throws Exception {
-        Path dir = Files.createTempDirectory("nodewright-lan-start-");
+    void lanModeListensOnAllInterfacesAndTheFirstStartAloneSetsTheAdminPassword(@TempDir Path dir) throws Exception {
         try (ConfigurableApplicationContext app = start(dir, "--app.sharing.lan=true",
                 "--app.sharing.admin-password=first-start-pw")) {
             int port = port(app);
             assertThat(answers("127.0.0.2", port)).isTrue();
-            assertThat(get("127.0.0.2", port, "/api/v1/accounts", null, null).statusCode()).isEqualTo(401);
-            HttpResponse<String> list = get("127.0.0.2", port, "/api/v1/accounts", "admin", "first-start-pw");
+            assertThat(getTls(dir, port, "/api/v1/accounts", null, null).statusCode()).isEqualTo(401);
+            HttpResponse<String> list = getTls(dir, port, "/api/v1/accounts", "admin", "first-start-pw");
             assertThat(list.statusCode()).isEqualTo(200);
             assertThat(list.body()).contains("\"username\":\"admin\"").contains("\"role\":\"admin\"");
+            // Plain HTTP on the same port: refused before any credential is looked at (Tomcat's 400).
+            HttpResponse<String> plain = get("127.0.0.1", port, "/api/v1/accounts", "admin", "first-start-pw");
+            assertThat(plain.statusCode()).isEqualTo(400);
+            assertThat(plain.body()).doesNotContain("\"username\"");
         }
         // Second start: the admin exists, so a different password on the command line changes nothing.
         try (ConfigurableApplicationContext app = start(dir, "--app.sharing.lan=true",
                 "--app.sharing.admin-password=other-password")) {
             int port = port(app);
-            assertThat(get("127.0.0.1", port, "/api/v1/accounts", "admin", "first-start-pw").statusCode())
+            assertThat(getTls(dir, port, "/api/v1/accounts", "admin", "first-start-pw").statusCode())
                     .isEqualTo(200);
-            assertThat(get("127.0.0.1", port, "/api/v1/accounts", "admin", "other-password").statusCode())
+            assertThat(getTls(dir, port, "/api/v1/accounts", "admin", "other-password").statusCode())
                     .isEqualTo(401);
         }
         // Third start: no password needed any more; an explicit address is kept.
         try (ConfigurableApplicationContext app = start(dir, "--app.sharing.lan=true", "--server.address=127.0.0.1")) {
             int port = port(app);
             assertThat(answers("127.0.0.2", port)).isFalse();
-            assertThat(get("127.0.0.1", port, "/api/v1/accounts", "admin", "first-start-pw").statusCode())
+            assertThat(getTls(dir, port, "/api/v1/accounts", "admin", "first-start-pw").statusCode())
                     .isEqualTo(200);
         }
     }
 
     @Test
-    void lanModeRefusesToStartWithNoAdminAndNoPassword() throws Exception {
-        Path dir = Files.createTempDirectory("nodewright-lan-refused-");
-        assertThatThrownBy(() -> start(dir, "--app.sharing.lan=true").close())
+    void lanModeRefusesToStartWithNoAdminAndNoPassword(@TempDir Path dir) {
+        // The refusal is expected: keep Boot's failure report and the context's warning out of the log.
+        assertThatThrownBy(() -> start(dir, "--app.sharing.lan=true",
+                "--logging.level.org.springframework.boot.diagnostics=OFF",
+                "--logging.level.org.springframework.boot.web=OFF").close())
                 .satisfies(failure -> {
                     Throwable cause = failure;
                     while (cause != null && !(cause instanceof LanSetupException)) {

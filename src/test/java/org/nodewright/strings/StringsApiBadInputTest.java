@@ -4,17 +4,12 @@ import static org.assertj.core.api.Assertions.assertThat;
 import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.get;
 import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.post;
 
-import java.nio.file.Files;
-import java.nio.file.Path;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
+import org.nodewright.StoreFreeWebTest;
 import org.springframework.beans.factory.annotation.Autowired;
-import org.springframework.boot.test.context.SpringBootTest;
-import org.springframework.boot.webmvc.test.autoconfigure.AutoConfigureMockMvc;
 import org.springframework.http.MediaType;
 import org.springframework.mock.web.MockHttpServletResponse;
-import org.springframework.test.context.DynamicPropertyRegistry;
-import org.springframework.test.context.DynamicPropertySource;
 import org.springframework.test.web.servlet.MockMvc;
 import tools.jackson.databind.JsonNode;
 import tools.jackson.databind.ObjectMapper;
@@ -23,8 +18,7 @@ import tools.jackson.databind.ObjectMapper;
  * Malformed requests to the strings API: every one is a 400 (or 415) problem document naming the
  * offending field, never a 5xx. The rule is the HTTP contract's.
  */
-@SpringBootTest
-@AutoConfigureMockMvc
+@StoreFreeWebTest
 class StringsApiBadInputTest {
 
     /** A valid body; each case replaces one placeholder-free fragment of it. */
@@ -34,11 +28,6 @@ class StringsApiBadInputTest {
              "pluck": {"positionMm": 120.0, "kind": "pluck"},
              "pickups": [{"positionMm": 150.0, "apertureMm": 0.0}]}""";
 
-    @DynamicPropertySource
-    static void dataDir(DynamicPropertyRegistry registry) throws Exception {
-        Path dir = Files.createTempDirectory("nodewright-strings-bad-");
-        registry.add("app.data-dir", dir::toString);
-    }
 
     @Autowired
     MockMvc mvc;

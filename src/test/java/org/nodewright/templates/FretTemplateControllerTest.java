@@ -8,30 +8,19 @@ import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.
 import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.jsonPath;
 import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.status;
 
-import java.nio.file.Files;
-import java.nio.file.Path;
 import org.apache.pdfbox.Loader;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
+import org.nodewright.StoreFreeWebTest;
 import org.nodewright.templates.render.FretTemplateSvgTestAccess;
 import org.springframework.beans.factory.annotation.Autowired;
-import org.springframework.boot.test.context.SpringBootTest;
-import org.springframework.boot.webmvc.test.autoconfigure.AutoConfigureMockMvc;
 import org.springframework.http.MediaType;
-import org.springframework.test.context.DynamicPropertyRegistry;
-import org.springframework.test.context.DynamicPropertySource;
 import org.springframework.test.web.servlet.MockMvc;
 
-@SpringBootTest
-@AutoConfigureMockMvc
+@StoreFreeWebTest
 class FretTemplateControllerTest {
 
-    @DynamicPropertySource
-    static void dataDir(DynamicPropertyRegistry registry) throws Exception {
-        Path dir = Files.createTempDirectory("nodewright-templates-");
-        registry.add("app.data-dir", dir::toString);
-    }
 
     @Autowired
     MockMvc mvc;
@@ -79,15 +68,6 @@ class FretTemplateControllerTest {
                 .andExpect(status().isBadRequest())
                 .andExpect(content().contentTypeCompatibleWith("application/problem+json"))
                 .andExpect(jsonPath("$.errors[0].field").value(field));
-    }
-
-    @Test
-    void theOpenApiDescriptionListsTheTemplateAndInverseEndpoints() throws Exception {
-        String docs = mvc.perform(get("/v3/api-docs")).andExpect(status().isOk())
-                .andReturn().getResponse().getContentAsString();
-        assertThat(docs).contains("/api/v1/frets.svg", "/api/v1/frets.pdf", "/api/v1/templates/tone-holes.svg",
-                "/api/v1/templates/compensation", "/api/v1/inverse/gauges", "/api/v1/inverse/tone-holes",
-                "/api/v1/inverse/jobs/{id}", "Inverse design");
     }
 
     @Test
