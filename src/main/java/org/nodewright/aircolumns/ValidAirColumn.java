@@ -79,6 +79,9 @@ public @interface ValidAirColumn {
                     }
                 }
             }
+            boolean[] mouthOk = {true};
+            MouthRules.check(r, (field, message) -> mouthOk[0] = fail(ctx, field, message));
+            ok &= mouthOk[0];
             List<AirColumnRequest.FingeringSpec> fs = r.fingerings();
             if (fs != null) {
                 int holeCount = holes == null ? 0 : holes.size();

@@ -79,8 +79,8 @@ public final class AirColumnAnalyzer {
             TransferMatrixSolver bare = new TransferMatrixSolver(column.withMouth(null));
             mouth = MouthEffect.of(column, solver, found, detect(bare, fMin, fMax, MAX_RESONANCES), fMin, fMax);
         }
-        return new AirColumnAnalysis(column.referenceAir(), grid(fMin, df, points), mag, phase, results, series, fr,
-                warnings, mouth, airAlongBore(column));
+        return new AirColumnAnalysis(column.air(), grid(fMin, df, points), mag, phase, results, series, fr,
+                warnings, mouth, airAlongBore(column), column.meanSpeedOfSound());
     }
 
     /** Points along the bore at which the breath's air is reported. */

@@ -43,8 +43,7 @@ public record MouthEffect(Mouth mouth, double endCorrection, List<Double> resona
         }
         double dl = Double.NaN;
         if (!withMouth.isEmpty() && !bare.isEmpty()) {
-            dl = equivalentLength(column.withMouth(null), withMouth.get(0).frequencyHz(), bare.get(0).frequencyHz(),
-                    fMin, fMax);
+            dl = equivalentLength(column.withMouth(null), withMouth.get(0).frequencyHz(), bare.get(0).frequencyHz());
         }
         double apex = Double.NaN;
         BoreSegment first = column.segments().get(0);
@@ -62,13 +61,14 @@ public record MouthEffect(Mouth mouth, double endCorrection, List<Double> resona
      * the plane-wave estimate dl = L_e (fBare / target - 1) with L_e = c / (2 fBare) for a bore
      * that plays like an open pipe (c / 4 fBare when like a stopped one).
      */
-    static double equivalentLength(AirColumn bare, double target, double fBare, double fMin, double fMax) {
+    static double equivalentLength(AirColumn bare, double target, double fBare) {
         double c = bare.meanSpeedOfSound();
-        double le = c / (2 * fBare);
+        boolean stopped = (bare.inputEnd() == InputEnd.CLOSED) != (bare.outputEnd() == OutputEnd.CLOSED);
+        double le = c / ((stopped ? 4 : 2) * fBare);
         double x0 = 0;
         double g0 = Math.log(fBare / target);
         double x1 = le * (fBare / target - 1);
-        double f1 = lowest(lengthened(bare, x1), fMin, fMax);
+        double f1 = nearest(lengthened(bare, x1), target);
         double g1 = Math.log(f1 / target);
         for (int i = 0; i < MAX_ITERATIONS && Math.abs(g1) > 1e-9 && g1 != g0; i++) {
             double x2 = x1 - g1 * (x1 - x0) / (g1 - g0);
@@ -77,7 +77,7 @@ public record MouthEffect(Mouth mouth, double endCorrection, List<Double> resona
             x0 = x1;
             g0 = g1;
             x1 = x2;
-            f1 = lowest(lengthened(bare, x1), fMin, fMax);
+            f1 = nearest(lengthened(bare, x1), target);
             g1 = Math.log(f1 / target);
         }
         return Double.isFinite(g1) && Math.abs(g1) < 1e-6 ? x1 : Double.NaN;
@@ -107,12 +107,17 @@ public record MouthEffect(Mouth mouth, double endCorrection, List<Double> resona
     }
 
     /**
-     * The lowest playing resonance of column in fMin..fMax (NaN when there is none): the
-     * analyzer's detection grid and {@link ResonanceFinder}.
+     * The playing resonance of column nearest target (NaN when there is none within a factor 1.6):
+     * the analyzer's detection grid and {@link ResonanceFinder} over target / 1.6 .. 1.6 target.
      */
-    static double lowest(AirColumn column, double fMin, double fMax) {
+    static double nearest(AirColumn column, double target) {
         TransferMatrixSolver s = new TransferMatrixSolver(column);
-        List<Resonance> r = AirColumnAnalyzer.detect(s, fMin, fMax, 1);
-        return r.isEmpty() ? Double.NaN : r.get(0).frequencyHz();
+        double best = Double.NaN;
+        for (Resonance r : AirColumnAnalyzer.detect(s, target / 1.6, target * 1.6, AirColumnAnalyzer.MAX_RESONANCES)) {
+            if (Double.isNaN(best) || Math.abs(Math.log(r.frequencyHz() / target)) < Math.abs(Math.log(best / target))) {
+                best = r.frequencyHz();
+            }
+        }
+        return best;
     }
 }
