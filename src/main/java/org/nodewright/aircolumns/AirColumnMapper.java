@@ -5,6 +5,7 @@ import java.util.HashSet;
 import java.util.List;
 import org.nodewright.physics.aircolumn.AirColumn;
 import org.nodewright.physics.aircolumn.AirColumnAnalysis;
+import org.nodewright.physics.aircolumn.AirColumnAnalyzer;
 import org.nodewright.physics.aircolumn.AirProperties;
 import org.nodewright.physics.aircolumn.BoreSegment;
 import org.nodewright.physics.aircolumn.Breath;
@@ -16,36 +17,46 @@ import org.nodewright.physics.aircolumn.StandingWaveProfile;
 import org.nodewright.physics.aircolumn.ToneHole;
 import org.nodewright.physics.tuning.Note;
 import org.nodewright.physics.tuning.NoteNames;
+import org.nodewright.web.EnumWords;
 
-/** Turns a validated request into core values (millimetres to metres) and the analysis into JSON. */
-final class AirColumnMapper {
+/**
+ * The one mapper between the air-column request and the core: a validated request (millimetres,
+ * defaults for omitted fields) to core values (metres), and the analysis back to JSON. Every
+ * feature that reads an air-column request (the bore bench, the tone-hole solver, the drilling
+ * template) maps it here; a new request field gets its default and its mapping here too.
+ */
+public final class AirColumnMapper {
 
     private static final double MM = 1e-3;
 
     private AirColumnMapper() {
     }
 
-    static AirColumn column(AirColumnRequest r) {
+    /** The bore's segments from the input end, radii in metres. */
+    public static List<BoreSegment> segments(AirColumnRequest r) {
         List<BoreSegment> segs = new ArrayList<>();
         for (AirColumnRequest.Segment s : r.segments()) {
             segs.add(new BoreSegment(s.lengthMm() * MM, s.inputDiameterMm() * MM / 2, s.outputDiameterMm() * MM / 2));
         }
+        return segs;
+    }
+
+    /** The side holes (a hole is open unless {@code open} is false). */
+    public static List<ToneHole> holes(AirColumnRequest r) {
         List<ToneHole> holes = new ArrayList<>();
         for (AirColumnRequest.Hole h : r.holesOrEmpty()) {
             holes.add(new ToneHole(h.positionMm() * MM, h.diameterMm() * MM / 2, h.chimneyMm() * MM,
                     h.open() == null || h.open()));
         }
-        AirProperties air = AirProperties.at(r.temperatureOrDefault(), r.humidityOrDefault());
-        return new AirColumn(segs, holes, r.inputEnd().core(), r.outputEnd().core(), air, r.lossesOrDefault(),
-                mouth(r.mouth()), breath(r.breath()));
+        return holes;
     }
 
     /** The core mouth of a request's (validated) mouth, or null. */
-    static Mouth mouth(AirColumnRequest.MouthSpec m) {
+    public static Mouth mouth(AirColumnRequest.MouthSpec m) {
         if (m == null) {
             return null;
         }
-        return switch (m.kind().core()) {
+        return switch (m.kind()) {
             case EMBOUCHURE -> {
                 double l = m.holeDiameterMm() != null ? m.holeDiameterMm() : m.holeLengthMm();
                 double w = m.holeDiameterMm() != null ? m.holeDiameterMm() : m.holeWidthMm();
@@ -61,12 +72,32 @@ final class AirColumnMapper {
     }
 
     /** The core breath of a request's (validated) breath, or null. */
-    static Breath breath(AirColumnRequest.BreathSpec b) {
+    public static Breath breath(AirColumnRequest.BreathSpec b) {
         return b == null ? null : new Breath(b.co2Pct() / 100, b.relativeHumidityPct(), b.inputTemperatureC(),
                 b.outputTemperatureC());
     }
 
-    static List<Fingering> fingerings(AirColumnRequest r) {
+    /** The air in the bore: 20 °C and 0 % relative humidity unless given. */
+    public static AirProperties air(AirColumnRequest r) {
+        return AirProperties.at(r.temperatureOrDefault(), r.humidityOrDefault());
+    }
+
+    /** The whole bore as the core analyses it. */
+    public static AirColumn column(AirColumnRequest r) {
+        return new AirColumn(segments(r), holes(r), r.inputEnd(), r.outputEnd(), air(r), r.lossesOrDefault(),
+                mouth(r.mouth()), breath(r.breath()));
+    }
+
+    /** The analyzer for this request's note reference and profile sampling. */
+    public static AirColumnAnalyzer analyzer(AirColumnRequest r) {
+        return new AirColumnAnalyzer(r.referenceA4OrDefault(), r.profileSamplesOrDefault());
+    }
+
+    /**
+     * The fingerings with their targets in hertz ({@code targetNote} read at the request's A4) and
+     * their register (1 unless given); names as given.
+     */
+    public static List<Fingering> fingerings(AirColumnRequest r) {
         List<Fingering> out = new ArrayList<>();
         for (AirColumnRequest.FingeringSpec f : r.fingeringsOrEmpty()) {
             double target = f.targetHz() != null ? f.targetHz()
@@ -77,7 +108,8 @@ final class AirColumnMapper {
         return out;
     }
 
-    static AirColumnResponse response(AirColumnRequest req, AirColumnAnalysis a) {
+    /** The analysis as the JSON answer of {@code POST /api/v1/air-columns/analyze}. */
+    public static AirColumnResponse response(AirColumnRequest req, AirColumnAnalysis a) {
         AirProperties air = a.air();
         List<AirColumnResponse.ResonanceItem> items = new ArrayList<>();
         List<AirColumnResponse.Profile> profiles = new ArrayList<>();
@@ -107,7 +139,7 @@ final class AirColumnMapper {
                 new AirColumnResponse.Air(air.temperatureC(), air.relativeHumidityPct(), air.density(),
                         air.viscosity(), air.thermalConductivity(), air.gamma(), air.specificHeatCp(), along(a)),
                 items, new AirColumnResponse.Impedance(a.frequencyHz(), finite(a.magnitude()), finite(a.phaseRad())),
-                a.series().name().toLowerCase(java.util.Locale.ROOT), profiles, fs, a.warnings(), mouth(a));
+                EnumWords.word(a.series()), profiles, fs, a.warnings(), mouth(a));
     }
 
     private static List<AirColumnResponse.AirAlongBore> along(AirColumnAnalysis a) {
@@ -131,7 +163,7 @@ final class AirColumnMapper {
             rs.add(new AirColumnResponse.MouthResonance(r.n(), r.frequencyHz(),
                     finiteOrNull(m.bareFrequencies().get(i)), finiteOrNull(m.resonanceCents().get(i))));
         }
-        return new AirColumnResponse.Mouth(m.mouth().kind().name().toLowerCase(java.util.Locale.ROOT),
+        return new AirColumnResponse.Mouth(EnumWords.word(m.mouth().kind()),
                 finiteOrNull(m.endCorrection() / MM), rs, finiteOrNull(m.helmholtzHz()),
                 finiteOrNull(m.missingApexVolume() / (MM * MM * MM)));
     }

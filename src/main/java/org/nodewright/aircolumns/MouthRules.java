@@ -4,6 +4,9 @@ import java.util.LinkedHashMap;
 import java.util.Locale;
 import java.util.Map;
 import java.util.function.BiConsumer;
+import org.nodewright.physics.aircolumn.InputEnd;
+import org.nodewright.web.EnumWords;
+import org.nodewright.web.FieldProblem;
 
 /**
  * Cross-field rules of a request's {@code mouth}: the kind agrees with {@code inputEnd}, the
@@ -16,17 +19,22 @@ final class MouthRules {
     private MouthRules() {
     }
 
-    static void check(AirColumnRequest r, BiConsumer<String, String> fail) {
+    static java.util.List<FieldProblem> problems(AirColumnRequest r) {
+        java.util.List<FieldProblem> out = new java.util.ArrayList<>();
+        check(r, (field, message) -> out.add(new FieldProblem(field, message)));
+        return out;
+    }
+
+    private static void check(AirColumnRequest r, BiConsumer<String, String> fail) {
         AirColumnRequest.MouthSpec m = r.mouth();
         if (m == null || m.kind() == null) {
             return;
         }
-        String kind = m.kind().name().toLowerCase(Locale.ROOT);
-        if (r.inputEnd() != null && m.kind().core().inputEnd() != r.inputEnd().core()) {
-            String end = m.kind().core().inputEnd().name().toLowerCase(Locale.ROOT);
-            fail.accept("mouth.kind", "a " + kind + " mouth plays at an " + ("open".equals(end) ? "open" : "closed")
-                    + " input end (inputEnd \"" + end + "\"), but inputEnd is \""
-                    + r.inputEnd().name().toLowerCase(Locale.ROOT) + "\"");
+        String kind = EnumWords.word(m.kind());
+        InputEnd wanted = m.kind().inputEnd();
+        if (r.inputEnd() != null && wanted != r.inputEnd()) {
+            fail.accept("mouth.kind", "a " + kind + " mouth plays at inputEnd \"" + EnumWords.word(wanted)
+                    + "\", but inputEnd is \"" + EnumWords.word(r.inputEnd()) + "\"");
         }
         Map<String, Double> given = new LinkedHashMap<>();
         given.put("holeDiameterMm", m.holeDiameterMm());
