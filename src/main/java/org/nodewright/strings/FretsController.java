@@ -1,5 +1,7 @@
 package org.nodewright.strings;
 
+import org.springframework.http.ResponseEntity;
+import org.nodewright.web.CsvTable;
 import jakarta.validation.constraints.DecimalMax;
 import jakarta.validation.constraints.DecimalMin;
 import jakarta.validation.constraints.Max;
@@ -18,6 +20,21 @@ class FretsController {
 
     static final int MAX_COUNT = 200;
     static final int MAX_DIVISIONS = 200;
+
+    /** The columns of {@code GET /api/v1/frets.csv} (README, CSV tables). */
+    static final CsvTable<FretJson> FRET_COLUMNS = CsvTable.of(
+            CsvTable.column("fret", FretJson::fret),
+            CsvTable.column("fromNutMm", FretJson::fromNutMm),
+            CsvTable.column("fromPreviousMm", FretJson::fromPreviousMm));
+
+    @GetMapping(path = "/api/v1/frets.csv")
+    ResponseEntity<String> fretsCsv(
+            @RequestParam @Finite @DecimalMin(value = "1", message = "must be at least 1 mm")
+            @DecimalMax(value = "100000", message = "must be at most 100000 mm") double scaleLengthMm,
+            @RequestParam(defaultValue = "24") @Min(1) @Max(MAX_COUNT) int count,
+            @RequestParam(defaultValue = "12") @Min(1) @Max(MAX_DIVISIONS) int divisionsPerOctave) {
+        return FRET_COLUMNS.download(frets(scaleLengthMm, count, divisionsPerOctave), "frets.csv");
+    }
 
     @GetMapping(path = "/api/v1/frets", produces = MediaType.APPLICATION_JSON_VALUE)
     List<FretJson> frets(

@@ -1,5 +1,7 @@
 package org.nodewright.strings;
 
+import org.springframework.http.ResponseEntity;
+import org.nodewright.web.CsvTable;
 import io.swagger.v3.oas.annotations.Operation;
 import io.swagger.v3.oas.annotations.Parameter;
 import jakarta.validation.Valid;
@@ -55,6 +57,57 @@ class StringsApiController {
             throw new BadRequestException("shapeSamples", "asks for shapes that shapes=none leaves out");
         }
         return false;
+    }
+
+    /** One row per mode (partial), without the chart samples of the shapes (README, CSV tables). */
+    static final CsvTable<StringAnalysisResponse.ModeJson> MODE_COLUMNS = CsvTable.of(
+            CsvTable.column("n", StringAnalysisResponse.ModeJson::n),
+            CsvTable.column("frequencyHz", StringAnalysisResponse.ModeJson::frequencyHz),
+            CsvTable.column("harmonicHz", StringAnalysisResponse.ModeJson::harmonicHz),
+            CsvTable.column("centsFromHarmonic", StringAnalysisResponse.ModeJson::centsFromHarmonic),
+            CsvTable.column("nodesMm", StringAnalysisResponse.ModeJson::nodesMm),
+            CsvTable.column("antinodesMm", StringAnalysisResponse.ModeJson::antinodesMm),
+            CsvTable.column("nodesFromBridgeMm", StringAnalysisResponse.ModeJson::nodesFromBridgeMm),
+            CsvTable.column("antinodesFromBridgeMm", StringAnalysisResponse.ModeJson::antinodesFromBridgeMm),
+            CsvTable.column("excitation", StringAnalysisResponse.ModeJson::excitation),
+            CsvTable.column("pickupResponse", StringAnalysisResponse.ModeJson::pickupResponse),
+            CsvTable.column("pickupOutput", StringAnalysisResponse.ModeJson::pickupOutput),
+            CsvTable.column("combinedResponse", StringAnalysisResponse.ModeJson::combinedResponse),
+            CsvTable.column("combinedOutput", StringAnalysisResponse.ModeJson::combinedOutput));
+
+    /** One row per string of a set (README, CSV tables). */
+    static final CsvTable<StringSetResponse.StringJson> SET_COLUMNS = CsvTable.of(
+            CsvTable.column("index", StringSetResponse.StringJson::index),
+            CsvTable.column("label", StringSetResponse.StringJson::label),
+            CsvTable.column("lengthMm", StringSetResponse.StringJson::lengthMm),
+            CsvTable.column("targetHz", StringSetResponse.StringJson::targetHz),
+            CsvTable.column("tensionN", StringSetResponse.StringJson::tensionN),
+            CsvTable.column("tensionKgf", StringSetResponse.StringJson::tensionKgf),
+            CsvTable.column("linearDensityKgPerM", StringSetResponse.StringJson::linearDensityKgPerM),
+            CsvTable.column("stressPa", StringSetResponse.StringJson::stressPa),
+            CsvTable.column("tensileStrengthPa", StringSetResponse.StringJson::tensileStrengthPa),
+            CsvTable.column("stressFraction", StringSetResponse.StringJson::stressFraction),
+            CsvTable.column("stressLevel", StringSetResponse.StringJson::stressLevel),
+            CsvTable.column("note", s -> s.note().name()),
+            CsvTable.column("noteCentsOff", s -> s.note().centsOff()),
+            CsvTable.column("warnings", StringSetResponse.StringJson::warnings));
+
+    @PostMapping(path = "/api/v1/strings/partials.csv", consumes = MediaType.APPLICATION_JSON_VALUE)
+    ResponseEntity<String> partialsCsv(@Valid @RequestBody StringAnalysisRequest request) {
+        return MODE_COLUMNS.download(modes(request), "partials.csv");
+    }
+
+    @PostMapping(path = "/api/v1/string-sets/strings.csv", consumes = MediaType.APPLICATION_JSON_VALUE)
+    ResponseEntity<String> setCsv(@Valid @RequestBody StringSetRequest request) {
+        return SET_COLUMNS.download(sets.analyze(request).strings(), "string-set.csv");
+    }
+
+    List<StringAnalysisResponse.ModeJson> modes(StringAnalysisRequest request) {
+        return analysis.analyze(request, false).modes();
+    }
+
+    StringSetResponse set(StringSetRequest request) {
+        return sets.analyze(request);
     }
 
     @PostMapping(path = "/api/v1/string-sets/analyze", consumes = MediaType.APPLICATION_JSON_VALUE,
