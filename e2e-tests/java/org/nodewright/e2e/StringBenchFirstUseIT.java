@@ -163,7 +163,12 @@ class StringBenchFirstUseIT extends StringPageTestBase {
         type("pluckPosition", "30");
         driver.findElement(By.id("analyze-button")).click();
         // 25.5 in = 647.7 mm, which the server saw as 647.6999999999999 mm; the page says 25.5 in.
-        String message = errorText("pluck.positionMm");
+        // (Clearing the field sends an empty position first; wait for the answer to the typed one.)
+        String message = wait.until(d -> {
+            String m = (String) js("const e = document.querySelector('[data-error-for=\"pluck.positionMm\"]');"
+                    + "return e ? e.textContent : null;");
+            return m != null && m.contains("bridge") ? m : null;
+        });
         assertThat(message).contains("25.5 in").doesNotContain("mm").doesNotContain("6999");
     }
 }
