@@ -84,7 +84,7 @@ class ShopProcessIT {
         // A second process on the same data directory is refused with one plain message.
         Path log2 = Files.createTempFile("nodewright-shop-locked-", ".log");
         Process second = start(List.of("--server.port=" + freePort(), "--app.data-dir=" + dataDir), log2);
-        assertThat(second.waitFor(180, TimeUnit.SECONDS)).isTrue();
+        assertThat(second.waitFor(480, TimeUnit.SECONDS)).isTrue();
         assertThat(second.exitValue()).isNotZero();
         assertThat(Files.readString(log2)).contains("in use by another process");
 
@@ -161,13 +161,13 @@ class ShopProcessIT {
         Files.write(file, backup.body());
         Path refusedLog = Files.createTempFile("nodewright-restore-refused-", ".log");
         Process refused = start(List.of("--app.restore=" + file, "--app.data-dir=" + dataDir), refusedLog);
-        assertThat(refused.waitFor(120, TimeUnit.SECONDS)).isTrue();
+        assertThat(refused.waitFor(300, TimeUnit.SECONDS)).isTrue();
         assertThat(refused.exitValue()).isEqualTo(2);
         assertThat(Files.readString(refusedLog)).contains("not empty");
         Path restored = Files.createTempDirectory("nodewright-shop-restored-").resolve("data");
         Process restore = start(List.of("--app.restore=" + file, "--app.data-dir=" + restored),
                 Files.createTempFile("nodewright-restore-", ".log"));
-        assertThat(restore.waitFor(120, TimeUnit.SECONDS)).isTrue();
+        assertThat(restore.waitFor(300, TimeUnit.SECONDS)).isTrue();
         assertThat(restore.exitValue()).isZero();
 
         int localPort = freePort();
@@ -206,7 +206,7 @@ class ShopProcessIT {
     }
 
     private static void waitUp(Process p, Probe health) throws Exception {
-        long deadline = System.nanoTime() + Duration.ofSeconds(180).toNanos();
+        long deadline = System.nanoTime() + Duration.ofSeconds(480).toNanos(); // generous: a loaded CI machine starts slowly
         while (System.nanoTime() < deadline) {
             assertThat(p.isAlive()).as("server process").isTrue();
             try {
@@ -219,7 +219,7 @@ class ShopProcessIT {
             }
             Thread.sleep(250);
         }
-        throw new AssertionError("server did not come up within 180 s");
+        throw new AssertionError("server did not come up within 480 s");
     }
 
     /** The SHA-256 of the certificate the server presents in the TLS handshake, as browsers show it. */
