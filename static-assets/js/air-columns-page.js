@@ -14,6 +14,7 @@ import { FingeringTable } from './air/fingerings.js';
 import { alignment, suggestedSeries } from './air/tuning.js';
 import { nearestNote } from './common/notes.js';
 import { preset } from './air/presets.js';
+import { MouthEditor } from './air/mouth.js';
 import { t } from './air/text.js';
 
 const ANALYZE_URL = '/api/v1/air-columns/analyze';
@@ -27,6 +28,12 @@ const editor = new BoreEditor({
   holeBody: $('hole-rows'),
   onChange: () => changed(),
   onStructure: (holeOrder) => fingerings.holesChanged(editor.holes.length, holeOrder),
+});
+const mouthEditor = new MouthEditor({
+  root: $('mouth-editor'),
+  onChange: () => changed(),
+  // A mouth decides which extremum is a playing resonance: follow it (the server refuses a contradiction).
+  onKind: (end) => { $('input-end').value = end; },
 });
 const fingerings = new FingeringTable({
   body: $('fingering-rows'),
@@ -59,6 +66,11 @@ function buildRequest() {
     request[field] = Number.isFinite(v) ? v : null;
   }
   request.losses = $('losses').checked;
+  const { mouth, problems: mouthProblems } = mouthEditor.read();
+  problems.push(...mouthProblems);
+  if (mouth) request.mouth = mouth;
+  const breath = mouthEditor.readBreath();
+  if (breath) request.breath = breath;
   if (!segments.length) problems.push({ field: 'segments', message: t('emptyBore') });
   request.fingerings = fingerings.read();
   return { request, problems };
@@ -133,8 +145,35 @@ function showResults() {
   $('air-warnings').replaceChildren(...(response.warnings ?? []).map((w) => Object.assign(document.createElement('li'), { textContent: w })));
   drawImpedance($('impedance-chart'), response.impedance, res, { showPhase: $('show-phase').checked, inputClosed });
   fillResonanceTable();
+  fillMouthSummary();
   fillProfileChoices();
   showProfile();
+}
+
+/** The mouth's end correction and what it does, next to the resonance table. */
+function fillMouthSummary() {
+  const { response } = state;
+  const m = response?.mouth;
+  const unit = $('units').value;
+  const parts = [];
+  if (m) {
+    const dl = m.endCorrectionMm;
+    const first = m.resonances?.[0]?.cents;
+    parts.push(t('mouthSummary', m.kind, dl == null ? '—' : fmt(fromMm(dl, unit), unit === 'inch' ? 3 : 2),
+      unit === 'inch' ? t('unitInch') : t('unitMm'), first == null ? '—' : signedCents(first)));
+    if (m.helmholtzHz != null) parts.push(t('mouthHelmholtz', fmt(m.helmholtzHz, 0)));
+    if (m.missingApexVolumeMm3 != null) parts.push(t('mouthApex', fmt(m.missingApexVolumeMm3, 0)));
+  } else {
+    parts.push(t('mouthNone'));
+  }
+  const along = response?.air?.alongBore;
+  if (along?.length) {
+    const c = along.map((p) => p.speedOfSoundMps);
+    parts.push(` · ${t('breathSummary', fmt(Math.min(...c), 1), fmt(Math.max(...c), 1))}`);
+  }
+  const el = $('mouth-summary');
+  el.textContent = parts.join('');
+  el.dataset.endCorrectionMm = m?.endCorrectionMm == null ? '' : String(m.endCorrectionMm);
 }
 
 function seriesChoice() {
@@ -149,7 +188,7 @@ function fillResonanceTable() {
   $('series-note').textContent = series === 'odd' ? t('seriesOdd') : t('seriesHarmonic');
   if (!res.length) {
     const tr = document.createElement('tr');
-    const td = Object.assign(document.createElement('td'), { textContent: t('noResonances'), colSpan: 9 });
+    const td = Object.assign(document.createElement('td'), { textContent: t('noResonances'), colSpan: 10 });
     tr.append(td);
     body.replaceChildren(tr);
     return;
@@ -164,6 +203,7 @@ function fillResonanceTable() {
     const cells = [
       r.n, fmt(r.frequencyHz, 2), r.q === null || r.q === undefined ? '—' : fmt(r.q, 1), note.name, signedCents(note.centsOff),
       fmt(align[i].ratio, 3), `${align[i].member}·f1`, signedCents(align[i].centsFromSeries),
+      r.mouthCents === null || r.mouthCents === undefined ? '—' : signedCents(r.mouthCents),
       (r.pressureNodesMm ?? []).map((x) => fmt(fromMm(x, unit), unit === 'inch' ? 2 : 1)).join(', '),
     ];
     const tr = document.createElement('tr');
@@ -172,7 +212,8 @@ function fillResonanceTable() {
       const td = document.createElement('td');
       td.textContent = String(c);
       if (k === 7) td.className = Math.abs(align[i].centsFromSeries) <= tolerance() ? 'aligned' : 'misaligned';
-      if (k === 8) td.className = 'nodes';
+      if (k === 8) td.className = 'mouth-cents';
+      if (k === 9) td.className = 'nodes';
       tr.append(td);
     });
     return tr;
@@ -254,6 +295,7 @@ const tolerance = () => {
 
 function drawCurrentBore() {
   const { segments, holes } = editor.read();
+  const { mouth } = mouthEditor.read();
   const i = Number($('profile-resonance').value || 0);
   const current = state.response && !root.classList.contains('stale');
   drawBore($('bore-drawing'), segments, holes, {
@@ -263,6 +305,7 @@ function drawCurrentBore() {
     outputEnd: $('output-end').value,
     nodesMm: current ? state.response.resonances?.[i]?.pressureNodesMm ?? [] : [],
     onHoleClick: (k) => editor.toggleHole(k),
+    mouth,
   });
 }
 
@@ -280,6 +323,7 @@ function setParameters(p) {
   $('points').value = val(p.points, '2000');
   $('reference-a4').value = val(p.referenceA4Hz, '440');
   $('losses').checked = p.losses !== false;
+  mouthEditor.load(p.mouth ?? null, p.breath ?? null);
   fingerings.load(p.fingerings ?? []);
   fingerings.holesChanged(editor.holes.length, null);
   clearFieldErrors(root);
@@ -306,9 +350,10 @@ $('preset-select').addEventListener('change', loadPreset);
 $('units').addEventListener('change', () => {
   const unit = $('units').value;
   editor.setUnit(unit);
+  mouthEditor.setUnit(unit);
   drawCurrentBore();
   document.querySelectorAll('.unit-label').forEach((el) => { el.textContent = unit === 'inch' ? t('unitInch') : t('unitMm'); });
-  if (state.response) { fillResonanceTable(); showProfile(); }
+  if (state.response) { fillResonanceTable(); fillMouthSummary(); showProfile(); }
 });
 for (const id of ['input-end', 'output-end', 'temperature', 'humidity', 'f-min', 'f-max', 'points', 'losses']) {
   $(id).addEventListener(id === 'losses' || id.endsWith('-end') ? 'change' : 'input', changed);
