@@ -6,7 +6,11 @@ import jakarta.validation.Valid;
 import java.util.List;
 import org.nodewright.physics.bars.BarMaterial;
 import org.nodewright.physics.bars.BarMaterials;
+import org.nodewright.web.CsvTable;
+import org.nodewright.web.DesignTable;
+import org.nodewright.web.EnumWords;
 import org.springframework.http.MediaType;
+import org.springframework.http.ResponseEntity;
 import org.springframework.web.bind.annotation.GetMapping;
 import org.springframework.web.bind.annotation.PostMapping;
 import org.springframework.web.bind.annotation.RequestBody;
@@ -37,6 +41,29 @@ class BarsApiController {
                     + "from x = 0; nodes by root finding on the element interpolation; max |shape| = 1.")
     BarAnalysisResponse analyze(@Valid @RequestBody BarAnalysisRequest request) {
         return analysis.analyze(request);
+    }
+
+    /** One row per mode, without the chart samples of the shapes (README, CSV tables). */
+    static final CsvTable<BarAnalysisResponse.ModeJson> MODE_COLUMNS = CsvTable.of(
+            CsvTable.column("n", BarAnalysisResponse.ModeJson::n),
+            CsvTable.column("kind", m -> EnumWords.word(m.kind())),
+            CsvTable.column("frequencyHz", BarAnalysisResponse.ModeJson::frequencyHz),
+            CsvTable.column("ratioToFirst", BarAnalysisResponse.ModeJson::ratioToFirst),
+            CsvTable.column("note", m -> m.note() == null ? null : m.note().name()),
+            CsvTable.column("noteCentsOff", m -> m.note() == null ? null : m.note().centsOff()),
+            CsvTable.column("nodesMm", BarAnalysisResponse.ModeJson::nodesMm),
+            CsvTable.column("antinodesMm", BarAnalysisResponse.ModeJson::antinodesMm));
+
+    @PostMapping(path = "/api/v1/bars/modes.csv", consumes = MediaType.APPLICATION_JSON_VALUE)
+    ResponseEntity<String> modesCsv(@Valid @RequestBody BarAnalysisRequest request) {
+        return MODE_COLUMNS.download(analysis.analyze(request).modes(), "bar-modes.csv");
+    }
+
+    /** The table of a saved bar design: the rows of {@code modes.csv}. */
+    @org.springframework.context.annotation.Bean
+    static DesignTable barModesTable(BarAnalysisService analysis) {
+        return DesignTable.of(BarAnalysisRequest.class,
+                (r, name) -> MODE_COLUMNS.download(analysis.analyze(r).modes(), name));
     }
 
     @Operation(summary = "Bar materials: density, Young's modulus along the bar, shear modulus and a source each")
