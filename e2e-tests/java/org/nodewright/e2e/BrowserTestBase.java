@@ -53,7 +53,7 @@ public abstract class BrowserTestBase {
 
     @BeforeEach
     void startBrowser() throws IOException {
-        driver = newBrowser();
+        driver = newBrowser(https());
         wait = new WebDriverWait(driver, Duration.ofSeconds(15));
     }
 
@@ -64,8 +64,21 @@ public abstract class BrowserTestBase {
         }
     }
 
+    /**
+     * LAN-mode tests answer true: the app speaks HTTPS with its self-signed certificate, which
+     * the test's browser (only there) is told to accept with {@code --ignore-certificate-errors}.
+     */
+    protected boolean https() {
+        return false;
+    }
+
     /** A fresh headless Chromium with its own profile folder; callers quit it. */
     protected static WebDriver newBrowser() throws IOException {
+        return newBrowser(false);
+    }
+
+    /** As {@link #newBrowser()}; {@code acceptSelfSigned} adds {@code --ignore-certificate-errors}. */
+    protected static WebDriver newBrowser(boolean acceptSelfSigned) throws IOException {
         String chromedriver = System.getProperty("nodewright.chromedriver", "/usr/bin/chromedriver");
         String chromium = System.getProperty("nodewright.chromium", "/usr/bin/chromium");
         ChromeDriverService service = new ChromeDriverService.Builder()
@@ -78,11 +91,15 @@ public abstract class BrowserTestBase {
                 "--disable-quic", "--no-first-run", "--disable-background-networking",
                 "--disable-component-update", "--disable-sync", "--window-size=1280,900",
                 "--user-data-dir=" + Files.createTempDirectory("nodewright-chromium-"));
+        if (acceptSelfSigned) {
+            options.addArguments("--ignore-certificate-errors");
+            options.setAcceptInsecureCerts(true);
+        }
         return new ChromeDriver(service, options);
     }
 
     protected String url(String path) {
-        return "http://127.0.0.1:" + port + path;
+        return (https() ? "https" : "http") + "://127.0.0.1:" + port + path;
     }
 
     protected WebElement waitFor(By by) {

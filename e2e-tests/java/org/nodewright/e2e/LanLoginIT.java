@@ -19,6 +19,11 @@ class LanLoginIT extends BrowserTestBase {
 
     static final String ADMIN_PW = "harrowgate-bench-1";
 
+    @Override
+    protected boolean https() {
+        return true;
+    }
+
     @DynamicPropertySource
     static void ownDatabase(DynamicPropertyRegistry registry) throws Exception {
         Path dir = Files.createTempDirectory("nodewright-lan-e2e-");

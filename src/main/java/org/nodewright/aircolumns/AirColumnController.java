@@ -1,7 +1,6 @@
 package org.nodewright.aircolumns;
 
 import jakarta.validation.Valid;
-import org.nodewright.physics.aircolumn.AirColumnAnalyzer;
 import org.springframework.http.MediaType;
 import org.springframework.web.bind.annotation.PostMapping;
 import org.springframework.web.bind.annotation.RequestBody;
@@ -16,9 +15,7 @@ class AirColumnController {
     @PostMapping(path = "/analyze", consumes = MediaType.APPLICATION_JSON_VALUE,
             produces = MediaType.APPLICATION_JSON_VALUE)
     AirColumnResponse analyze(@Valid @RequestBody AirColumnRequest request) {
-        AirColumnAnalyzer analyzer = new AirColumnAnalyzer(request.referenceA4OrDefault(),
-                request.profileSamplesOrDefault());
-        return AirColumnMapper.response(request, analyzer.analyze(AirColumnMapper.column(request),
+        return AirColumnMapper.response(request, AirColumnMapper.analyzer(request).analyze(AirColumnMapper.column(request),
                 request.fMinHz(), request.fMaxHz(), request.pointsOrDefault(), AirColumnMapper.fingerings(request)));
     }
 }

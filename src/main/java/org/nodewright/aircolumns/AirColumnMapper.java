@@ -5,6 +5,7 @@ import java.util.HashSet;
 import java.util.List;
 import org.nodewright.physics.aircolumn.AirColumn;
 import org.nodewright.physics.aircolumn.AirColumnAnalysis;
+import org.nodewright.physics.aircolumn.AirColumnAnalyzer;
 import org.nodewright.physics.aircolumn.AirProperties;
 import org.nodewright.physics.aircolumn.BoreSegment;
 import org.nodewright.physics.aircolumn.Fingering;
@@ -12,30 +13,60 @@ import org.nodewright.physics.aircolumn.StandingWaveProfile;
 import org.nodewright.physics.aircolumn.ToneHole;
 import org.nodewright.physics.tuning.Note;
 import org.nodewright.physics.tuning.NoteNames;
+import org.nodewright.web.EnumWords;
 
-/** Turns a validated request into core values (millimetres to metres) and the analysis into JSON. */
-final class AirColumnMapper {
+/**
+ * The one mapper between the air-column request and the core: a validated request (millimetres,
+ * defaults for omitted fields) to core values (metres), and the analysis back to JSON. Every
+ * feature that reads an air-column request (the bore bench, the tone-hole solver, the drilling
+ * template) maps it here; a new request field gets its default and its mapping here too.
+ */
+public final class AirColumnMapper {
 
     private static final double MM = 1e-3;
 
     private AirColumnMapper() {
     }
 
-    static AirColumn column(AirColumnRequest r) {
+    /** The bore's segments from the input end, radii in metres. */
+    public static List<BoreSegment> segments(AirColumnRequest r) {
         List<BoreSegment> segs = new ArrayList<>();
         for (AirColumnRequest.Segment s : r.segments()) {
             segs.add(new BoreSegment(s.lengthMm() * MM, s.inputDiameterMm() * MM / 2, s.outputDiameterMm() * MM / 2));
         }
+        return segs;
+    }
+
+    /** The side holes (a hole is open unless {@code open} is false). */
+    public static List<ToneHole> holes(AirColumnRequest r) {
         List<ToneHole> holes = new ArrayList<>();
         for (AirColumnRequest.Hole h : r.holesOrEmpty()) {
             holes.add(new ToneHole(h.positionMm() * MM, h.diameterMm() * MM / 2, h.chimneyMm() * MM,
                     h.open() == null || h.open()));
         }
-        AirProperties air = AirProperties.at(r.temperatureOrDefault(), r.humidityOrDefault());
-        return new AirColumn(segs, holes, r.inputEnd().core(), r.outputEnd().core(), air, r.lossesOrDefault());
+        return holes;
     }
 
-    static List<Fingering> fingerings(AirColumnRequest r) {
+    /** The air in the bore: 20 °C and 0 % relative humidity unless given. */
+    public static AirProperties air(AirColumnRequest r) {
+        return AirProperties.at(r.temperatureOrDefault(), r.humidityOrDefault());
+    }
+
+    /** The whole bore as the core analyses it. */
+    public static AirColumn column(AirColumnRequest r) {
+        return new AirColumn(segments(r), holes(r), r.inputEnd(), r.outputEnd(), air(r), r.lossesOrDefault());
+    }
+
+    /** The analyzer for this request's note reference and profile sampling. */
+    public static AirColumnAnalyzer analyzer(AirColumnRequest r) {
+        return new AirColumnAnalyzer(r.referenceA4OrDefault(), r.profileSamplesOrDefault());
+    }
+
+    /**
+     * The fingerings with their targets in hertz ({@code targetNote} read at the request's A4) and
+     * their register (1 unless given); names as given.
+     */
+    public static List<Fingering> fingerings(AirColumnRequest r) {
         List<Fingering> out = new ArrayList<>();
         for (AirColumnRequest.FingeringSpec f : r.fingeringsOrEmpty()) {
             double target = f.targetHz() != null ? f.targetHz()
@@ -46,7 +77,8 @@ final class AirColumnMapper {
         return out;
     }
 
-    static AirColumnResponse response(AirColumnRequest req, AirColumnAnalysis a) {
+    /** The analysis as the JSON answer of {@code POST /api/v1/air-columns/analyze}. */
+    public static AirColumnResponse response(AirColumnRequest req, AirColumnAnalysis a) {
         AirProperties air = a.air();
         List<AirColumnResponse.ResonanceItem> items = new ArrayList<>();
         List<AirColumnResponse.Profile> profiles = new ArrayList<>();
@@ -75,7 +107,7 @@ final class AirColumnMapper {
                 new AirColumnResponse.Air(air.temperatureC(), air.relativeHumidityPct(), air.density(),
                         air.viscosity(), air.thermalConductivity(), air.gamma(), air.specificHeatCp()),
                 items, new AirColumnResponse.Impedance(a.frequencyHz(), finite(a.magnitude()), finite(a.phaseRad())),
-                a.series().name().toLowerCase(java.util.Locale.ROOT), profiles, fs, a.warnings());
+                EnumWords.word(a.series()), profiles, fs, a.warnings());
     }
 
     private static AirColumnResponse.Note note(Note n) {

@@ -10,24 +10,28 @@ import jakarta.validation.constraints.Positive;
 import jakarta.validation.constraints.PositiveOrZero;
 import jakarta.validation.constraints.Size;
 import java.util.List;
+import org.nodewright.physics.aircolumn.InputEnd;
+import org.nodewright.physics.aircolumn.OutputEnd;
 import org.nodewright.physics.tuning.EqualTemperament;
+import org.nodewright.web.CrossFieldChecked;
+import org.nodewright.web.FieldProblem;
 import org.nodewright.web.Finite;
 
 /**
  * The body of {@code POST /api/v1/air-columns/analyze}, also the parameters of a saved air-column
  * design. Lengths in millimetres, frequencies in hertz. Validating this record alone (Bean
- * Validation) finds every problem, cross-field rules included ({@link ValidAirColumn}), each
+ * Validation) finds every problem, cross-field rules included ({@link AirColumnRules}), each
  * reported with its dotted path such as {@code segments[2].lengthMm}.
  *
  * <p>Optional fields and their defaults: {@code holes} none, {@code temperatureC} 20,
  * {@code relativeHumidityPct} 0, {@code losses} true, {@code points} 2000, {@code referenceA4Hz}
  * 440, {@code profileSamples} 201, {@code fingerings} none.
  */
-@ValidAirColumn
+@CrossFieldChecked
 public record AirColumnRequest(
         @NotNull @Size(min = 1, max = MAX_SEGMENTS) List<@NotNull @Valid Segment> segments,
-        @NotNull InputEndWord inputEnd,
-        @NotNull OutputEndWord outputEnd,
+        @NotNull InputEnd inputEnd,
+        @NotNull OutputEnd outputEnd,
         @Size(max = MAX_HOLES) List<@NotNull @Valid Hole> holes,
         @Finite @DecimalMin("-50") @DecimalMax("60") Double temperatureC,
         @Finite @DecimalMin("0") @DecimalMax("100") Double relativeHumidityPct,
@@ -37,7 +41,12 @@ public record AirColumnRequest(
         @Min(2) @Max(MAX_POINTS) Integer points,
         @Finite @DecimalMin("200") @DecimalMax("1000") Double referenceA4Hz,
         @Min(2) @Max(2001) Integer profileSamples,
-        @Size(max = MAX_FINGERINGS) List<@NotNull @Valid FingeringSpec> fingerings) {
+        @Size(max = MAX_FINGERINGS) List<@NotNull @Valid FingeringSpec> fingerings) implements CrossFieldChecked.Rules {
+
+    @Override
+    public List<FieldProblem> crossFieldProblems() {
+        return AirColumnRules.problems(this);
+    }
 
     public static final int MAX_SEGMENTS = 1000;
     public static final int MAX_HOLES = 64;
@@ -76,35 +85,35 @@ public record AirColumnRequest(
             @Min(1) @Max(16) Integer register) {
     }
 
-    double temperatureOrDefault() {
+    public double temperatureOrDefault() {
         return temperatureC == null ? 20.0 : temperatureC;
     }
 
-    double humidityOrDefault() {
+    public double humidityOrDefault() {
         return relativeHumidityPct == null ? 0.0 : relativeHumidityPct;
     }
 
-    boolean lossesOrDefault() {
+    public boolean lossesOrDefault() {
         return losses == null || losses;
     }
 
-    int pointsOrDefault() {
+    public int pointsOrDefault() {
         return points == null ? 2000 : points;
     }
 
-    double referenceA4OrDefault() {
+    public double referenceA4OrDefault() {
         return referenceA4Hz == null ? EqualTemperament.ISO_16_A4_HZ : referenceA4Hz;
     }
 
-    int profileSamplesOrDefault() {
+    public int profileSamplesOrDefault() {
         return profileSamples == null ? 201 : profileSamples;
     }
 
-    List<Hole> holesOrEmpty() {
+    public List<Hole> holesOrEmpty() {
         return holes == null ? List.of() : holes;
     }
 
-    List<FingeringSpec> fingeringsOrEmpty() {
+    public List<FingeringSpec> fingeringsOrEmpty() {
         return fingerings == null ? List.of() : fingerings;
     }
 }

@@ -4,6 +4,8 @@ import java.net.URI;
 import java.time.Instant;
 import java.util.ArrayList;
 import java.util.List;
+import org.nodewright.audit.AuditAction;
+import org.nodewright.audit.AuditTrail;
 import org.nodewright.web.BadRequestException;
 import org.nodewright.web.FieldProblem;
 import org.springframework.dao.PessimisticLockingFailureException;
@@ -22,22 +24,30 @@ class DesignLibrary {
     private final DesignStore store;
     private final DesignParameters parameters;
     private final DesignEvents events;
+    private final AuditTrail audit;
 
-    DesignLibrary(DesignStore store, DesignParameters parameters, DesignEvents events) {
+    DesignLibrary(DesignStore store, DesignParameters parameters, DesignEvents events, AuditTrail audit) {
         this.store = store;
         this.parameters = parameters;
         this.events = events;
+        this.audit = audit;
     }
 
     Design create(DesignContent content, String by, String comment) {
         requireValid(content, "");
         Design created = store.create(content, by, DesignStore.now(), comment);
         events.saved(created);
+        audit.record(by, AuditAction.DESIGN_CREATED, target(created));
         return created;
     }
 
     /** Saves over {@code version}; a stale version is a 409 naming who changed it, and nothing is written. */
     Design update(long id, long version, DesignContent content, String by, String comment) {
+        return update(id, version, content, by, comment, AuditAction.DESIGN_SAVED);
+    }
+
+    /** As {@link #update(long, long, DesignContent, String, String)}, recorded in the audit trail as {@code action}. */
+    Design update(long id, long version, DesignContent content, String by, String comment, AuditAction action) {
         Design current = get(id);
         if (content.kind() != current.kind()) {
             throw new BadRequestException("kind", "a design keeps its kind (" + current.kind().word()
@@ -56,6 +66,7 @@ class DesignLibrary {
             throw conflict(get(id), version);
         }
         events.saved(saved);
+        audit.record(by, action, target(saved));
         return saved;
     }
 
@@ -66,13 +77,19 @@ class DesignLibrary {
                 "Design " + id + " has no revision " + revisionVersion + "."));
         long over = expectedVersion == null ? current.version() : expectedVersion;
         DesignContent content = new DesignContent(old.name(), current.kind(), old.parameters(), old.notes(), old.tags());
-        return update(id, over, content, by, "restored from version " + revisionVersion);
+        return update(id, over, content, by, "restored from version " + revisionVersion, AuditAction.DESIGN_RESTORED);
     }
 
     void delete(long id, String by) {
         Design current = get(id);
         store.delete(id);
         events.deleted(current, by, DesignStore.now());
+        audit.record(by, AuditAction.DESIGN_DELETED, target(current));
+    }
+
+    /** How a design is named in the audit trail: id, kind, name and the version written. */
+    static String target(Design d) {
+        return "design " + d.id() + " (" + d.kind().word() + ") \"" + d.name() + "\" version " + d.version();
     }
 
     Design get(long id) {

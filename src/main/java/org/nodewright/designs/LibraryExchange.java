@@ -5,6 +5,8 @@ import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
 import java.util.Objects;
+import org.nodewright.audit.AuditAction;
+import org.nodewright.audit.AuditTrail;
 import org.nodewright.web.BadRequestException;
 import org.nodewright.web.FieldProblem;
 import org.springframework.stereotype.Service;
@@ -22,11 +24,13 @@ class LibraryExchange {
     private final DesignStore store;
     private final DesignLibrary library;
     private final DesignEvents events;
+    private final AuditTrail audit;
 
-    LibraryExchange(DesignStore store, DesignLibrary library, DesignEvents events) {
+    LibraryExchange(DesignStore store, DesignLibrary library, DesignEvents events, AuditTrail audit) {
         this.store = store;
         this.library = library;
         this.events = events;
+        this.audit = audit;
     }
 
     LibraryDocument export(List<Design> designs) {
@@ -51,6 +55,7 @@ class LibraryExchange {
             created.add(store.createWithHistory(history));
         }
         created.forEach(events::saved);
+        created.forEach(d -> audit.record(by, AuditAction.DESIGN_IMPORTED, DesignLibrary.target(d)));
         return created;
     }
 
@@ -67,7 +72,7 @@ class LibraryExchange {
             throw new BadRequestException("document.designs[0].kind", "is " + content.kind().word()
                     + " but design " + id + " is " + target.kind().word());
         }
-        return library.update(id, version, content, by, "imported from a file");
+        return library.update(id, version, content, by, "imported from a file", AuditAction.DESIGN_IMPORTED);
     }
 
     /** Validates the whole document and turns each design into its history, oldest first. */

@@ -2,19 +2,14 @@ package org.nodewright.inverse;
 
 import java.util.ArrayList;
 import java.util.List;
+import org.nodewright.aircolumns.AirColumnMapper;
 import org.nodewright.aircolumns.AirColumnRequest;
-import org.nodewright.physics.aircolumn.AirProperties;
-import org.nodewright.physics.aircolumn.BoreSegment;
-import org.nodewright.physics.aircolumn.InputEnd;
-import org.nodewright.physics.aircolumn.OutputEnd;
 import org.nodewright.physics.inverse.AirCoreFrequencyModel;
 import org.nodewright.physics.inverse.HoleLayout;
 import org.nodewright.physics.templates.ToneHoleTemplate;
 
 /** The bore bench's request (millimetres) to the template and solver cores, and back. */
 public final class BoreMapping {
-
-    private static final double MM = 1e-3;
 
     private BoreMapping() {
     }
@@ -27,7 +22,7 @@ public final class BoreMapping {
     }
 
     static List<AirColumnRequest.Hole> holes(AirColumnRequest r) {
-        return r.holes() == null ? List.of() : r.holes();
+        return r.holesOrEmpty();
     }
 
     static double lengthMm(AirColumnRequest r) {
@@ -45,16 +40,11 @@ public final class BoreMapping {
         return new HoleLayout(pos, dia, r.segments().get(r.segments().size() - 1).lengthMm());
     }
 
+    /** The solver's frequency model of the bore, mapped (with its defaults) by {@link AirColumnMapper}. */
     static AirCoreFrequencyModel model(AirColumnRequest r) {
-        List<BoreSegment> segs = new ArrayList<>();
-        for (AirColumnRequest.Segment s : r.segments()) {
-            segs.add(new BoreSegment(s.lengthMm() * MM, s.inputDiameterMm() * MM / 2, s.outputDiameterMm() * MM / 2));
-        }
         double[] chimneys = holes(r).stream().mapToDouble(h -> h.chimneyMm()).toArray();
-        AirProperties air = AirProperties.at(r.temperatureC() == null ? 20.0 : r.temperatureC(),
-                r.relativeHumidityPct() == null ? 0.0 : r.relativeHumidityPct());
-        return new AirCoreFrequencyModel(segs, chimneys, InputEnd.valueOf(r.inputEnd().name()),
-                OutputEnd.valueOf(r.outputEnd().name()), air, r.losses() == null || r.losses());
+        return new AirCoreFrequencyModel(AirColumnMapper.segments(r), chimneys, r.inputEnd(), r.outputEnd(),
+                AirColumnMapper.air(r), r.lossesOrDefault());
     }
 
     /** The request with the solved holes and foot: what "apply" hands back to the bore bench. */

@@ -3,9 +3,9 @@ package org.nodewright.inverse;
 import java.util.ArrayList;
 import java.util.List;
 import org.nodewright.aircolumns.AirColumnRequest;
-import org.nodewright.aircolumns.InputEndWord;
-import org.nodewright.aircolumns.OutputEndWord;
 import org.nodewright.physics.aircolumn.Fingering;
+import org.nodewright.physics.aircolumn.InputEnd;
+import org.nodewright.physics.aircolumn.OutputEnd;
 import org.nodewright.physics.inverse.DemoWhistle;
 import org.nodewright.physics.inverse.SolverLimits;
 import org.nodewright.physics.tuning.EqualTemperament;
@@ -29,7 +29,7 @@ final class DemoRequests {
         }
         AirColumnRequest bore = new AirColumnRequest(
                 List.of(new AirColumnRequest.Segment(DemoWhistle.LENGTH_MM, DemoWhistle.BORE_MM, DemoWhistle.BORE_MM)),
-                InputEndWord.OPEN, OutputEndWord.OPEN_UNFLANGED, holes, DemoWhistle.TEMPERATURE_C,
+                InputEnd.OPEN, OutputEnd.OPEN_UNFLANGED, holes, DemoWhistle.TEMPERATURE_C,
                 DemoWhistle.HUMIDITY_PCT, true, 300.0, 3000.0, 3000, EqualTemperament.ISO_16_A4_HZ, null, fingerings);
         SolverLimits l = DemoWhistle.limits(false);
         return new ToneHoleSolveRequest(bore, new ToneHoleSolveRequest.Limits(l.minPositionMm(), l.maxPositionMargin(),

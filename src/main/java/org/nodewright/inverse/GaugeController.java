@@ -10,10 +10,7 @@ import org.nodewright.physics.inverse.GaugeStock;
 import org.nodewright.physics.strings.Material;
 import org.nodewright.physics.strings.Materials;
 import org.nodewright.physics.strings.StressCheck;
-import org.nodewright.physics.tuning.EqualTemperament;
-import org.nodewright.physics.tuning.NoteNames;
-import org.nodewright.web.BadRequestException;
-import org.nodewright.web.FieldProblem;
+import org.nodewright.strings.StringRules;
 import org.springframework.web.bind.annotation.PostMapping;
 import org.springframework.web.bind.annotation.RequestBody;
 import org.springframework.web.bind.annotation.RestController;
@@ -32,50 +29,22 @@ class GaugeController {
                     + "(core/outer diameter, default 0.40). Gauges come from availableGaugesMm when given (outer "
                     + "diameters), else the workshop stock list. Tension by Mersenne's law T = mu (2 L f)^2.")
     GaugeResponse pick(@Valid @RequestBody GaugeRequest request) {
-        List<FieldProblem> problems = new ArrayList<>();
-        double a4 = request.referenceA4Hz() == null ? EqualTemperament.ISO_16_A4_HZ : request.referenceA4Hz();
+        double a4 = request.referenceA4OrDefault();
         List<GaugePicker.Target> targets = new ArrayList<>();
         int n = request.strings().size();
         for (int i = 0; i < n; i++) {
             GaugeRequest.StringTarget s = request.strings().get(i);
-            String at = "strings[" + i + "].";
-            Double hz = s.targetHz();
-            if ((hz == null) == (s.note() == null)) {
-                problems.add(new FieldProblem(at + "targetHz", "give either note or targetHz"));
-            } else if (hz == null) {
-                try {
-                    hz = NoteNames.frequencyHz(s.note(), a4);
-                } catch (IllegalArgumentException e) {
-                    problems.add(new FieldProblem(at + "note", "is not a note name like E4, F#3 or Bb2"));
-                }
-            }
+            double hz = StringRules.pitchHz(s.note(), s.targetHz(), a4);
             Double tension = s.targetTensionN();
-            if (tension == null && request.tensionProfile() != null) {
+            if (tension == null) {
                 double w = n == 1 ? 0 : (double) i / (n - 1);
                 tension = request.tensionProfile().firstN() * (1 - w) + request.tensionProfile().lastN() * w;
             }
-            if (tension == null) {
-                problems.add(new FieldProblem(at + "targetTensionN", "is required without a tensionProfile"));
-            }
-            Material core = Materials.find(s.material()).orElse(null);
-            if (core == null) {
-                problems.add(new FieldProblem(at + "material", "is not a material id of GET /api/v1/materials"));
-            }
-            Material wrap = null;
-            if (s.wrapMaterial() != null) {
-                wrap = Materials.find(s.wrapMaterial()).orElse(null);
-                if (wrap == null) {
-                    problems.add(new FieldProblem(at + "wrapMaterial", "is not a material id of GET /api/v1/materials"));
-                }
-            }
-            if (problems.isEmpty()) {
-                double length = (s.lengthMm() == null ? request.lengthMm() : s.lengthMm()) * 1e-3;
-                targets.add(new GaugePicker.Target(length, hz, tension, core, wrap,
-                        s.coreRatio() == null ? GaugePicker.DEFAULT_CORE_RATIO : s.coreRatio()));
-            }
-        }
-        if (!problems.isEmpty()) {
-            throw new BadRequestException(problems);
+            Material core = Materials.get(s.material());
+            Material wrap = s.wrapMaterial() == null ? null : Materials.get(s.wrapMaterial());
+            double length = (s.lengthMm() == null ? request.lengthMm() : s.lengthMm()) * 1e-3;
+            targets.add(new GaugePicker.Target(length, hz, tension, core, wrap,
+                    s.coreRatio() == null ? GaugePicker.DEFAULT_CORE_RATIO : s.coreRatio()));
         }
         List<GaugeResponse.StringPick> picks = new ArrayList<>();
         double total = 0;

@@ -8,18 +8,32 @@ import jakarta.validation.constraints.Min;
 import jakarta.validation.constraints.NotNull;
 import jakarta.validation.constraints.Positive;
 import jakarta.validation.constraints.PositiveOrZero;
+import java.util.ArrayList;
+import java.util.List;
 import org.nodewright.aircolumns.AirColumnRequest;
+import org.nodewright.web.CrossFieldChecked;
+import org.nodewright.web.FieldProblem;
 import org.nodewright.web.Finite;
 
 /**
  * A tone-hole solve: the bore as the bore bench sends it, whose {@code holes} are the starting
  * layout and whose {@code fingerings} are the targets; the maker's limits; when to stop.
  */
+@CrossFieldChecked
 record ToneHoleSolveRequest(
         @NotNull @Valid AirColumnRequest bore,
         @Valid Limits limits,
         @Finite @DecimalMin("0.001") @DecimalMax("50") Double toleranceCents,
-        @Min(1) @Max(5000) Integer maxEvaluations) {
+        @Min(1) @Max(5000) Integer maxEvaluations) implements CrossFieldChecked.Rules {
+
+    @Override
+    public List<FieldProblem> crossFieldProblems() {
+        List<FieldProblem> out = new ArrayList<>();
+        if (bore != null) {
+            ToneHoleSolveSetup.problems(out, bore, limitsOrNone());
+        }
+        return out;
+    }
 
     static final double DEFAULT_TOLERANCE_CENTS = 0.1;
     static final int DEFAULT_MAX_EVALUATIONS = 600;

@@ -1,83 +1,121 @@
 package org.nodewright.inverse;
 
 import java.util.ArrayList;
-import java.util.HashSet;
 import java.util.List;
+import org.nodewright.aircolumns.AirColumnMapper;
 import org.nodewright.aircolumns.AirColumnRequest;
 import org.nodewright.physics.aircolumn.Fingering;
 import org.nodewright.physics.inverse.AirCoreFrequencyModel;
 import org.nodewright.physics.inverse.HoleLayout;
 import org.nodewright.physics.inverse.SolverLimits;
-import org.nodewright.physics.tuning.EqualTemperament;
-import org.nodewright.physics.tuning.NoteNames;
-import org.nodewright.web.BadRequestException;
 import org.nodewright.web.FieldProblem;
 
-/** Checks a solve request's cross-field rules and turns it into the solver's inputs. */
+/**
+ * A validated solve request turned into the solver's inputs; its cross-field rules
+ * ({@link #problems}) run with the request's validation ({@link ToneHoleSolveRequest#crossFieldProblems()}).
+ */
 record ToneHoleSolveSetup(AirColumnRequest bore, AirCoreFrequencyModel model, HoleLayout start,
         List<Fingering> fingerings, SolverLimits limits) {
 
-    static ToneHoleSolveSetup of(ToneHoleSolveRequest request) {
-        AirColumnRequest bore = request.bore();
-        ToneHoleSolveRequest.Limits l = request.limitsOrNone();
-        List<FieldProblem> problems = new ArrayList<>();
-        List<AirColumnRequest.Hole> holes = BoreMapping.holes(bore);
-        if (holes.isEmpty()) {
-            problems.add(new FieldProblem("bore.holes", "the solver needs at least one hole to move"));
+    /** The maker's limits with their defaults taken from the bore (see {@link ToneHoleSolveRequest.Limits}). */
+    record Bounds(double minPositionMm, double endMarginMm, double minWallMm, double minDiameterMm,
+            double maxDiameterMm, boolean varyDiameters, boolean varyFoot, double minFootMm, double maxFootMm,
+            double footMm) {
+
+        static Bounds of(AirColumnRequest bore, ToneHoleSolveRequest.Limits l) {
+            double length = BoreMapping.lengthMm(bore);
+            double foot = bore.segments().get(bore.segments().size() - 1).lengthMm();
+            double minBore = bore.segments().stream()
+                    .mapToDouble(s -> Math.min(s.inputDiameterMm(), s.outputDiameterMm())).min().orElse(1);
+            double minDia = l.minDiameterMm() == null ? Math.min(2.0, minBore) : l.minDiameterMm();
+            return new Bounds(l.minPositionMm() == null ? 0.1 * length : l.minPositionMm(),
+                    l.endMarginMm() == null ? 5.0 : l.endMarginMm(),
+                    l.minWallMm() == null ? 2.0 : l.minWallMm(),
+                    minDia, l.maxDiameterMm() == null ? minBore : l.maxDiameterMm(),
+                    Boolean.TRUE.equals(l.varyDiameters()), Boolean.TRUE.equals(l.varyFoot()),
+                    l.minFootMm() == null ? 0.5 * foot : l.minFootMm(),
+                    l.maxFootMm() == null ? 1.5 * foot : l.maxFootMm(), foot);
+        }
+
+        SolverLimits toCore() {
+            return new SolverLimits(minPositionMm, endMarginMm, minWallMm, minDiameterMm, maxDiameterMm,
+                    varyDiameters, varyFoot, minFootMm, maxFootMm);
+        }
+    }
+
+    /** The solve's rules across the bore and the limits; the bore's own fields are checked by its record. */
+    static void problems(List<FieldProblem> out, AirColumnRequest bore, ToneHoleSolveRequest.Limits l) {
+        if (BoreMapping.holes(bore).isEmpty()) {
+            out.add(new FieldProblem("bore.holes", "the solver needs at least one hole to move"));
         }
         if (bore.fingerings() == null || bore.fingerings().isEmpty()) {
-            problems.add(new FieldProblem("bore.fingerings", "give at least one fingering with its target note"));
+            out.add(new FieldProblem("bore.fingerings", "give at least one fingering with its target note"));
         }
-        double length = BoreMapping.lengthMm(bore);
-        double foot = bore.segments().get(bore.segments().size() - 1).lengthMm();
-        boolean varyDiameters = Boolean.TRUE.equals(l.varyDiameters());
-        boolean varyFoot = Boolean.TRUE.equals(l.varyFoot());
-        double minPos = l.minPositionMm() == null ? 0.1 * length : l.minPositionMm();
-        double margin = l.endMarginMm() == null ? 5.0 : l.endMarginMm();
-        double wall = l.minWallMm() == null ? 2.0 : l.minWallMm();
-        double minBore = bore.segments().stream()
-                .mapToDouble(s -> Math.min(s.inputDiameterMm(), s.outputDiameterMm())).min().orElse(1);
-        double minDia = l.minDiameterMm() == null ? Math.min(2.0, minBore) : l.minDiameterMm();
-        double maxDia = l.maxDiameterMm() == null ? minBore : l.maxDiameterMm();
-        double minFoot = l.minFootMm() == null ? 0.5 * foot : l.minFootMm();
-        double maxFoot = l.maxFootMm() == null ? 1.5 * foot : l.maxFootMm();
-        if (maxDia < minDia) {
-            problems.add(new FieldProblem("limits.maxDiameterMm", "must not be below minDiameterMm (" + minDia + ")"));
+        if (!usable(bore)) {
+            return;
         }
-        if (maxFoot < minFoot) {
-            problems.add(new FieldProblem("limits.maxFootMm", "must not be below minFootMm (" + minFoot + ")"));
+        Bounds b = Bounds.of(bore, l);
+        if (b.maxDiameterMm() < b.minDiameterMm()) {
+            out.add(new FieldProblem("limits.maxDiameterMm", "must not be below minDiameterMm ("
+                    + b.minDiameterMm() + ")"));
         }
-        if (varyFoot && (foot < minFoot || foot > maxFoot)) {
-            problems.add(new FieldProblem("limits.minFootMm", "the last section (" + foot
+        if (b.maxFootMm() < b.minFootMm()) {
+            out.add(new FieldProblem("limits.maxFootMm", "must not be below minFootMm (" + b.minFootMm() + ")"));
+        }
+        if (b.varyFoot() && (b.footMm() < b.minFootMm() || b.footMm() > b.maxFootMm())) {
+            out.add(new FieldProblem("limits.minFootMm", "the last section (" + b.footMm()
                     + " mm) must lie within minFootMm..maxFootMm"));
         }
+        List<AirColumnRequest.Hole> holes = BoreMapping.holes(bore);
         for (int i = 0; i < holes.size(); i++) {
             AirColumnRequest.Hole h = holes.get(i);
             String at = "bore.holes[" + i + "]";
             if (i > 0 && h.positionMm() <= holes.get(i - 1).positionMm()) {
-                problems.add(new FieldProblem(at + ".positionMm", "holes must be listed from the input end"));
+                out.add(new FieldProblem(at + ".positionMm", "holes must be listed from the input end"));
             }
-            if (h.positionMm() < minPos) {
-                problems.add(new FieldProblem(at + ".positionMm", "lies before limits.minPositionMm (" + minPos + ")"));
+            if (h.positionMm() < b.minPositionMm()) {
+                out.add(new FieldProblem(at + ".positionMm", "lies before limits.minPositionMm ("
+                        + b.minPositionMm() + ")"));
             }
-            if (varyDiameters && (h.diameterMm() < minDia || h.diameterMm() > maxDia)) {
-                problems.add(new FieldProblem(at + ".diameterMm", "must lie within the diameter limits (" + minDia
-                        + ".." + maxDia + " mm)"));
+            if (b.varyDiameters() && (h.diameterMm() < b.minDiameterMm() || h.diameterMm() > b.maxDiameterMm())) {
+                out.add(new FieldProblem(at + ".diameterMm", "must lie within the diameter limits ("
+                        + b.minDiameterMm() + ".." + b.maxDiameterMm() + " mm)"));
             }
         }
-        if (!problems.isEmpty()) {
-            throw new BadRequestException(problems);
+    }
+
+    /** Every bore figure the rules read is present and finite (else the bore's own constraints speak). */
+    private static boolean usable(AirColumnRequest bore) {
+        if (bore.segments() == null || bore.segments().isEmpty()) {
+            return false;
         }
-        double a4 = bore.referenceA4Hz() == null ? EqualTemperament.ISO_16_A4_HZ : bore.referenceA4Hz();
+        for (AirColumnRequest.Segment s : bore.segments()) {
+            if (s == null || !finite(s.lengthMm()) || !finite(s.inputDiameterMm()) || !finite(s.outputDiameterMm())) {
+                return false;
+            }
+        }
+        for (AirColumnRequest.Hole h : BoreMapping.holes(bore)) {
+            if (h == null || !finite(h.positionMm()) || !finite(h.diameterMm())) {
+                return false;
+            }
+        }
+        return true;
+    }
+
+    private static boolean finite(Double v) {
+        return v != null && Double.isFinite(v);
+    }
+
+    /** The solver's inputs for a request that passed validation. */
+    static ToneHoleSolveSetup of(ToneHoleSolveRequest request) {
+        AirColumnRequest bore = request.bore();
+        Bounds b = Bounds.of(bore, request.limitsOrNone());
         List<Fingering> fingerings = new ArrayList<>();
-        for (int i = 0; i < bore.fingerings().size(); i++) {
-            AirColumnRequest.FingeringSpec f = bore.fingerings().get(i);
-            double hz = f.targetHz() != null ? f.targetHz() : NoteNames.frequencyHz(f.targetNote(), a4);
-            String name = f.name() == null || f.name().isBlank() ? "fingering " + (i + 1) : f.name();
-            fingerings.add(new Fingering(name, new HashSet<>(f.closedHoles()), hz, f.register() == null ? 1 : f.register()));
+        for (Fingering f : AirColumnMapper.fingerings(bore)) {
+            String name = f.name() == null || f.name().isBlank() ? "fingering " + (fingerings.size() + 1) : f.name();
+            fingerings.add(new Fingering(name, f.closedHoles(), f.targetHz(), f.register()));
         }
-        SolverLimits limits = new SolverLimits(minPos, margin, wall, minDia, maxDia, varyDiameters, varyFoot, minFoot,
-                maxFoot);
-        return new ToneHoleSolveSetup(bore, BoreMapping.model(bore), BoreMapping.layout(bore), fingerings, limits);
+        return new ToneHoleSolveSetup(bore, BoreMapping.model(bore), BoreMapping.layout(bore), fingerings,
+                b.toCore());
     }
 }

@@ -3,6 +3,7 @@ package org.nodewright.sharing;
 import jakarta.validation.Valid;
 import jakarta.validation.constraints.NotNull;
 import java.net.URI;
+import java.security.Principal;
 import java.util.List;
 import org.springframework.boot.autoconfigure.condition.ConditionalOnProperty;
 import org.springframework.http.ResponseEntity;
@@ -49,23 +50,30 @@ class AccountController {
     }
 
     @PostMapping
-    ResponseEntity<Account> create(@RequestBody NewAccount body) {
-        Account created = accounts.create(body.username(), body.password(), body.role());
+    ResponseEntity<Account> create(@RequestBody NewAccount body, Principal by) {
+        Account created = accounts.create(body.username(), body.password(), body.role(), by.getName());
         return ResponseEntity.created(URI.create("/api/v1/accounts/" + created.username())).body(created);
     }
 
     @PutMapping("/{username}/role")
-    Account changeRole(@PathVariable String username, @Valid @RequestBody RoleChange body) {
-        return accounts.changeRole(username, body.role());
+    Account changeRole(@PathVariable String username, @Valid @RequestBody RoleChange body, Principal by) {
+        return accounts.changeRole(username, body.role(), by.getName());
     }
 
     @PutMapping("/{username}/enabled")
-    Account setEnabled(@PathVariable String username, @Valid @RequestBody EnabledChange body) {
-        return accounts.setEnabled(username, body.enabled());
+    Account setEnabled(@PathVariable String username, @Valid @RequestBody EnabledChange body, Principal by) {
+        return accounts.setEnabled(username, body.enabled(), by.getName());
     }
 
     @PutMapping("/{username}/password")
-    Account resetPassword(@PathVariable String username, @RequestBody PasswordReset body) {
-        return accounts.resetPassword(username, body.password());
+    Account resetPassword(@PathVariable String username, @RequestBody PasswordReset body, Principal by) {
+        return accounts.resetPassword(username, body.password(), by.getName());
+    }
+
+    /** Ends every open browser session of the account ("sign out everywhere"). */
+    @PostMapping("/{username}/sign-out")
+    ResponseEntity<Void> signOutEverywhere(@PathVariable String username, Principal by) {
+        accounts.signOutEverywhere(username, by.getName());
+        return ResponseEntity.noContent().build();
     }
 }

@@ -3,6 +3,7 @@ package org.nodewright.sharing;
 import java.sql.ResultSet;
 import java.sql.SQLException;
 import java.time.Clock;
+import java.time.Instant;
 import java.time.OffsetDateTime;
 import java.time.ZoneOffset;
 import java.util.List;
@@ -16,7 +17,8 @@ import org.springframework.stereotype.Repository;
 class AccountStore {
 
     /** What sign-in needs: the hash stays inside this package. */
-    record Credentials(String username, String passwordHash, Role role, boolean enabled) {
+    record Credentials(String username, String passwordHash, Role role, boolean enabled,
+            boolean mustChangePassword, Instant sessionsValidAfter) {
     }
 
     private static final String COLUMNS = "id, username, role, enabled, created_at, updated_at";
@@ -39,10 +41,15 @@ class AccountStore {
     }
 
     Optional<Credentials> credentials(String username) {
-        return jdbc.sql("SELECT username, password_hash, role, enabled FROM accounts WHERE username = ?")
+        return jdbc.sql("SELECT username, password_hash, role, enabled, must_change_password, sessions_valid_after "
+                        + "FROM accounts WHERE username = ?")
                 .param(username)
-                .query((rs, n) -> new Credentials(rs.getString("username"), rs.getString("password_hash"),
-                        role(rs), rs.getBoolean("enabled")))
+                .query((rs, n) -> {
+                    OffsetDateTime after = rs.getObject("sessions_valid_after", OffsetDateTime.class);
+                    return new Credentials(rs.getString("username"), rs.getString("password_hash"),
+                            role(rs), rs.getBoolean("enabled"), rs.getBoolean("must_change_password"),
+                            after == null ? null : after.toInstant());
+                })
                 .optional();
     }
 
@@ -69,9 +76,16 @@ class AccountStore {
                 .params(enabled, now(), username).update() == 1;
     }
 
-    boolean setPasswordHash(String username, String passwordHash) {
-        return jdbc.sql("UPDATE accounts SET password_hash = ?, updated_at = ? WHERE username = ?")
-                .params(passwordHash, now(), username).update() == 1;
+    /** A new password hash; {@code mustChange} makes the account choose its own at the next sign-in. */
+    boolean setPasswordHash(String username, String passwordHash, boolean mustChange) {
+        return jdbc.sql("UPDATE accounts SET password_hash = ?, must_change_password = ?, updated_at = ? WHERE username = ?")
+                .params(passwordHash, mustChange, now(), username).update() == 1;
+    }
+
+    /** Ends every browser session of the account signed in before {@code at} (on its next request). */
+    boolean signOutSessionsBefore(String username, Instant at) {
+        return jdbc.sql("UPDATE accounts SET sessions_valid_after = ? WHERE username = ?")
+                .params(OffsetDateTime.ofInstant(at, ZoneOffset.UTC), username).update() == 1;
     }
 
     long countEnabledAdmins() {

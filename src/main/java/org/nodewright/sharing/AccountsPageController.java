@@ -1,5 +1,6 @@
 package org.nodewright.sharing;
 
+import java.security.Principal;
 import java.util.Optional;
 import org.nodewright.web.BadRequestException;
 import org.nodewright.web.FieldProblem;
@@ -25,13 +26,17 @@ class AccountsPageController {
     private static final String BACK = "redirect:" + PAGE;
 
     private final AccountService accounts;
+    private final LanCertificate certificate;
 
-    AccountsPageController(AccountService accounts) {
+    AccountsPageController(AccountService accounts, LanCertificate certificate) {
         this.accounts = accounts;
+        this.certificate = certificate;
     }
 
     @GetMapping(PAGE)
     String show(Model model) {
+        model.addAttribute("fingerprint", certificate.fingerprint());
+        model.addAttribute("selfSigned", certificate.selfSigned());
         model.addAttribute("accounts", accounts.list());
         model.addAttribute("roles", Role.values());
         model.addAttribute("minPasswordLength", AccountService.MIN_PASSWORD_LENGTH);
@@ -40,29 +45,36 @@ class AccountsPageController {
 
     @PostMapping(PAGE)
     String add(@RequestParam(defaultValue = "") String username, @RequestParam(defaultValue = "") String password,
-            @RequestParam(defaultValue = "") String role, RedirectAttributes redirect) {
-        return act(redirect, "sharing.notice.added", username, () -> accounts.create(username, password, role(role)),
-                true);
+            @RequestParam(defaultValue = "") String role, Principal by, RedirectAttributes redirect) {
+        return act(redirect, "sharing.notice.added", username,
+                () -> accounts.create(username, password, role(role), by.getName()), true);
     }
 
     @PostMapping(PAGE + "/{username}/role")
     String changeRole(@PathVariable String username, @RequestParam(defaultValue = "") String role,
-            RedirectAttributes redirect) {
+            Principal by, RedirectAttributes redirect) {
         return act(redirect, "sharing.notice.roleChanged", username,
-                () -> accounts.changeRole(username, role(role)), false);
+                () -> accounts.changeRole(username, role(role), by.getName()), false);
     }
 
     @PostMapping(PAGE + "/{username}/enabled")
-    String setEnabled(@PathVariable String username, @RequestParam boolean enabled, RedirectAttributes redirect) {
+    String setEnabled(@PathVariable String username, @RequestParam boolean enabled, Principal by,
+            RedirectAttributes redirect) {
         return act(redirect, enabled ? "sharing.notice.enabled" : "sharing.notice.disabled", username,
-                () -> accounts.setEnabled(username, enabled), false);
+                () -> accounts.setEnabled(username, enabled, by.getName()), false);
     }
 
     @PostMapping(PAGE + "/{username}/password")
     String resetPassword(@PathVariable String username, @RequestParam(defaultValue = "") String password,
-            RedirectAttributes redirect) {
+            Principal by, RedirectAttributes redirect) {
         return act(redirect, "sharing.notice.passwordReset", username,
-                () -> accounts.resetPassword(username, password), false);
+                () -> accounts.resetPassword(username, password, by.getName()), false);
+    }
+
+    @PostMapping(PAGE + "/{username}/sign-out")
+    String signOutEverywhere(@PathVariable String username, Principal by, RedirectAttributes redirect) {
+        return act(redirect, "sharing.notice.signedOutEverywhere", username,
+                () -> accounts.signOutEverywhere(username, by.getName()), false);
     }
 
     private String act(RedirectAttributes redirect, String notice, String username, Runnable action,

@@ -45,13 +45,13 @@ final class AdminBootstrap implements InitializingBean {
             throw new LanSetupException("The admin password is longer than " + AccountService.MAX_PASSWORD_BYTES
                     + " bytes (UTF-8), which BCrypt cannot use in full.", "Choose a shorter app.sharing.admin-password.");
         }
-        if (password.codePointCount(0, password.length()) < AccountService.MIN_PASSWORD_LENGTH) {
-            log.warn("LAN mode: the admin password is shorter than {} characters; sign in and set a longer one "
-                    + "on the Accounts page.", AccountService.MIN_PASSWORD_LENGTH);
+        String weak = PasswordRule.problem(password, ADMIN);
+        if (weak != null) {
+            log.warn("LAN mode: the admin password {}; sign in and choose a better one on the password page.", weak);
         }
         if (store.find(ADMIN).isPresent()) {
             // An 'admin' account exists but is no longer an enabled admin: restore it from the given password.
-            store.setPasswordHash(ADMIN, accounts.encode(password));
+            store.setPasswordHash(ADMIN, accounts.encode(password), false);
             store.setRole(ADMIN, Role.ADMIN);
             store.setEnabled(ADMIN, true);
             log.warn("LAN mode: no enabled admin was left; the account 'admin' was re-enabled as admin "

@@ -3,6 +3,12 @@ package org.nodewright.sharing;
 import jakarta.servlet.DispatcherType;
 import jakarta.servlet.http.HttpServletRequest;
 import java.time.Clock;
+import org.nodewright.audit.AuditTrail;
+import org.springframework.jdbc.core.simple.JdbcClient;
+import org.springframework.security.web.authentication.AuthenticationSuccessHandler;
+import org.springframework.security.web.authentication.SavedRequestAwareAuthenticationSuccessHandler;
+import org.springframework.transaction.PlatformTransactionManager;
+import org.springframework.transaction.support.TransactionTemplate;
 import org.springframework.boot.autoconfigure.condition.ConditionalOnProperty;
 import org.springframework.context.annotation.Bean;
 import org.springframework.context.annotation.Configuration;
@@ -40,18 +46,28 @@ class LanSecurityConfig {
     /** Paths where a non-GET request changes saved designs (the shop library). */
     static final String[] DESIGN_WRITES = {"/api/v1/designs", "/api/v1/designs/**", "/api/v1/library/**",
             "/library/**", "/designs/**"};
-    static final String[] ADMIN_ONLY = {"/api/v1/accounts", "/api/v1/accounts/**", "/admin", "/admin/**"};
+    static final String[] ADMIN_ONLY = {"/api/v1/accounts", "/api/v1/accounts/**", "/admin", "/admin/**",
+            "/api/v1/audit", "/api/v1/audit/**", "/api/v1/backup", "/api/v1/backup/**"};
+    /** Every signed-in account manages its own password (before the admin-only rule on /api/v1/accounts/**). */
+    static final String[] OWN_ACCOUNT = {"/api/v1/accounts/me", "/api/v1/accounts/me/**", "/account", "/account/**"};
+    /** Strict-Transport-Security max-age: half a year (common practice; browsers ignore it for bare IP addresses). */
+    static final long HSTS_SECONDS = 183L * 24 * 3600;
     static final String[] PUBLIC = {"/login", "/css/**", "/js/**", "/webjars/**", "/favicon.ico", "/error",
             "/actuator/health", "/actuator/health/**"};
 
+    /** Lock-out counts in the store, so that every instance on one database shares them. */
     @Bean
-    LoginThrottle loginThrottle(SharingProperties properties) {
-        return new LoginThrottle(properties.maxFailures(), properties.lockout(), Clock.systemUTC());
+    LoginThrottle loginThrottle(SharingProperties properties, JdbcClient jdbc, PlatformTransactionManager tx) {
+        LoginThrottle throttle = new LoginThrottle(properties.maxFailures(), properties.lockout(), Clock.systemUTC(),
+                new DatabaseSignInCounters(jdbc, new TransactionTemplate(tx)));
+        throttle.purge();
+        return throttle;
     }
 
     @Bean
-    AuthenticationProvider lanAccounts(AccountStore store, PasswordEncoder encoder, LoginThrottle throttle) {
-        return new ThrottledAuthenticationProvider(store, encoder, throttle);
+    AuthenticationProvider lanAccounts(AccountStore store, PasswordEncoder encoder, LoginThrottle throttle,
+            AuditTrail audit) {
+        return new ThrottledAuthenticationProvider(store, encoder, throttle, audit);
     }
 
     @Bean
@@ -82,6 +98,7 @@ class LanSecurityConfig {
                         .dispatcherTypeMatchers(DispatcherType.ERROR, DispatcherType.FORWARD).permitAll()
                         .requestMatchers(PUBLIC).permitAll()
                         .requestMatchers("/h2-console", "/h2-console/**").denyAll()
+                        .requestMatchers(OWN_ACCOUNT).authenticated()
                         .requestMatchers(ADMIN_ONLY).hasRole("ADMIN")
                         .requestMatchers(HttpMethod.GET, "/**").authenticated()
                         .requestMatchers(HttpMethod.HEAD, "/**").authenticated()
@@ -89,7 +106,7 @@ class LanSecurityConfig {
                         // Analyses, measurements and template downloads are reads, whatever the method.
                         .anyRequest().authenticated())
                 .formLogin(form -> form.loginPage("/login").permitAll()
-                        .defaultSuccessUrl("/", false)
+                        .successHandler(signedIn(store))
                         .failureHandler((request, response, ex) -> response.sendRedirect(request.getContextPath()
                                 + (ex instanceof SignInLockedException ? "/login?locked" : "/login?error"))))
                 .httpBasic(basic -> basic.realmName(SecurityProblems.REALM)
@@ -100,7 +117,28 @@ class LanSecurityConfig {
                 .csrf(csrf -> csrf.ignoringRequestMatchers(LanSecurityConfig::clientWithoutSession))
                 .addFilterAfter(new AccountRefreshFilter(store), BasicAuthenticationFilter.class);
         SecurityConfig.headers(http);
+        http.headers(h -> h.httpStrictTransportSecurity(hsts -> hsts.maxAgeInSeconds(HSTS_SECONDS)
+                .includeSubDomains(false)));
         return http.build();
+    }
+
+    /**
+     * After a form sign-in: note when this session signed in (for "sign out everywhere"), then go
+     * to the password page when an admin's reset is pending, else where the browser was going.
+     */
+    private static AuthenticationSuccessHandler signedIn(AccountStore store) {
+        SavedRequestAwareAuthenticationSuccessHandler onward = new SavedRequestAwareAuthenticationSuccessHandler();
+        onward.setDefaultTargetUrl("/");
+        return (request, response, authentication) -> {
+            request.getSession().setAttribute(AccountRefreshFilter.SIGNED_IN_AT, AccountService.now());
+            boolean mustChange = store.credentials(authentication.getName())
+                    .map(AccountStore.Credentials::mustChangePassword).orElse(false);
+            if (mustChange) {
+                response.sendRedirect(request.getContextPath() + OwnPasswordPageController.PAGE + "?required");
+                return;
+            }
+            onward.onAuthenticationSuccess(request, response, authentication);
+        };
     }
 
     /** Always back to the sign-in page (the Basic defaults would answer some clients with a bare 204). */

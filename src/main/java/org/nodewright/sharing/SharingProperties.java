@@ -5,16 +5,19 @@ import org.springframework.boot.context.properties.ConfigurationProperties;
 import org.springframework.boot.context.properties.bind.DefaultValue;
 
 /**
- * {@code app.sharing.*}: LAN mode on or off, the first admin's password, and the sign-in lockout
+ * {@code app.sharing.*}: LAN mode on or off, the first admin's password, the sign-in lockout
  * ({@code max-failures} failed sign-ins within {@code lockout} lock that username, and separately
- * that remote address, for {@code lockout}).
+ * that remote address, for {@code lockout}), and the shop's own TLS keystore (PKCS#12; without one
+ * LAN mode makes and keeps a self-signed certificate under the data directory).
  */
 @ConfigurationProperties("app.sharing")
 record SharingProperties(
         @DefaultValue("false") boolean lan,
         String adminPassword,
         @DefaultValue("5") int maxFailures,
-        @DefaultValue("5m") Duration lockout) {
+        @DefaultValue("5m") Duration lockout,
+        String keystore,
+        String keystorePassword) {
 
     SharingProperties {
         if (maxFailures < 1) {
@@ -27,5 +30,9 @@ record SharingProperties(
 
     boolean hasAdminPassword() {
         return adminPassword != null && !adminPassword.isEmpty();
+    }
+
+    boolean hasKeystore() {
+        return keystore != null && !keystore.isBlank();
     }
 }

@@ -1,5 +1,7 @@
 package org.nodewright.strings;
 
+import static org.nodewright.web.CrossFieldChecked.Rules.usable;
+
 import jakarta.validation.Valid;
 import jakarta.validation.constraints.DecimalMax;
 import jakarta.validation.constraints.DecimalMin;
@@ -10,9 +12,12 @@ import jakarta.validation.constraints.PositiveOrZero;
 import jakarta.validation.constraints.Size;
 import java.util.ArrayList;
 import java.util.List;
-import org.nodewright.physics.strings.Materials;
+import org.nodewright.physics.strings.EndCondition;
+import org.nodewright.physics.strings.ExcitationKind;
 import org.nodewright.physics.strings.ModeSolver;
+import org.nodewright.physics.strings.PickupCombination;
 import org.nodewright.physics.tuning.EqualTemperament;
+import org.nodewright.web.CrossFieldChecked;
 import org.nodewright.web.FieldProblem;
 import org.nodewright.web.Finite;
 
@@ -33,20 +38,20 @@ public record StringAnalysisRequest(
         @DecimalMax(value = "100000", message = "must be at most 100000 Hz") Double targetHz,
         @Finite @DecimalMin(value = "1e-9", message = "must be at least 1e-9 kg/m")
         @DecimalMax(value = "100", message = "must be at most 100 kg/m") Double linearDensityKgPerM,
-        @Size(max = 64) String material,
+        @Size(max = StringRules.MATERIAL_ID_MAX) String material,
         @Finite @DecimalMin(value = "0.001", message = "must be at least 0.001 mm")
         @DecimalMax(value = "100", message = "must be at most 100 mm") Double diameterMm,
-        @Size(max = 64) String wrapMaterial,
+        @Size(max = StringRules.MATERIAL_ID_MAX) String wrapMaterial,
         @Finite @DecimalMin(value = "0.001", message = "must be at least 0.001 mm")
         @DecimalMax(value = "100", message = "must be at most 100 mm") Double wrapDiameterMm,
         @Finite @DecimalMin(value = "1e3", message = "must be at least 1e3 Pa")
         @DecimalMax(value = "1e13", message = "must be at most 1e13 Pa") Double youngsModulusPa,
-        Words.End endCondition,
+        EndCondition endCondition,
         Boolean stiffness,
         @Min(1) @Max(ModeSolver.MAX_MODES) Integer modeCount,
         @Valid Pluck pluck,
         @Valid @Size(max = 16) List<@NotNull @Valid Pickup> pickups,
-        Words.Combination pickupCombination,
+        PickupCombination pickupCombination,
         @Finite @DecimalMin(value = "100", message = "must be at least 100 Hz")
         @DecimalMax(value = "1000", message = "must be at most 1000 Hz") Double referenceA4Hz,
         @Min(2) @Max(2001) Integer shapeSamples) implements CrossFieldChecked.Rules {
@@ -57,9 +62,9 @@ public record StringAnalysisRequest(
     public static final double DEFAULT_A4_HZ = EqualTemperament.ISO_16_A4_HZ;
 
     /** Where and how the string is set in motion. */
-    public record Pluck(@NotNull @Finite Double positionMm, Words.Kind kind) {
-        public Words.Kind kindOrDefault() {
-            return kind == null ? Words.Kind.PLUCK : kind;
+    public record Pluck(@NotNull @Finite Double positionMm, ExcitationKind kind) {
+        public ExcitationKind kindOrDefault() {
+            return kind == null ? ExcitationKind.PLUCK : kind;
         }
     }
 
@@ -75,8 +80,8 @@ public record StringAnalysisRequest(
         return Boolean.TRUE.equals(stiffness);
     }
 
-    public Words.End endOrDefault() {
-        return endCondition == null ? Words.End.PINNED : endCondition;
+    public EndCondition endOrDefault() {
+        return endCondition == null ? EndCondition.PINNED : endCondition;
     }
 
     public int modeCountOrDefault() {
@@ -116,8 +121,7 @@ public record StringAnalysisRequest(
         } else if (r.tensionN != null && r.targetHz != null) {
             out.add(new FieldProblem("targetHz", "give either tensionN or targetHz, not both"));
         }
-        StringChecks.material(out, "material", r.material);
-        StringChecks.material(out, "wrapMaterial", r.wrapMaterial);
+        StringRules.material(out, "material", r.material);
         if (r.linearDensityKgPerM == null) {
             if (r.material == null) {
                 out.add(new FieldProblem("material", "is required unless linearDensityKgPerM is given"));
@@ -126,7 +130,7 @@ public record StringAnalysisRequest(
                 out.add(new FieldProblem("diameterMm", "is required unless linearDensityKgPerM is given"));
             }
         }
-        StringChecks.wrapPair(out, "", r.wrapMaterial, r.wrapDiameterMm);
+        StringRules.wrap(out, "", r.wrapMaterial, r.wrapDiameterMm);
         if (r.stiffnessOn()) {
             if (r.diameterMm == null) {
                 out.add(new FieldProblem("diameterMm", "is required when stiffness is true"));
@@ -136,7 +140,7 @@ public record StringAnalysisRequest(
                         "is required when stiffness is true and no material is given"));
             }
         }
-        Double length = StringChecks.usable(r.lengthMm);
+        Double length = usable(r.lengthMm);
         if (length != null) {
             lengthDependent(out, r, length);
         }
@@ -147,7 +151,7 @@ public record StringAnalysisRequest(
     }
 
     private static void lengthDependent(List<FieldProblem> out, StringAnalysisRequest r, double length) {
-        if (r.pluck != null && StringChecks.usable(r.pluck.positionMm) != null) {
+        if (r.pluck != null && usable(r.pluck.positionMm) != null) {
             double x = r.pluck.positionMm;
             if (!(x > 0 && x < length)) {
                 out.add(new FieldProblem("pluck.positionMm",
@@ -159,7 +163,7 @@ public record StringAnalysisRequest(
         }
         for (int i = 0; i < r.pickups.size(); i++) {
             Pickup p = r.pickups.get(i);
-            if (p == null || StringChecks.usable(p.positionMm) == null) {
+            if (p == null || usable(p.positionMm) == null) {
                 continue;
             }
             double x = p.positionMm;
@@ -172,11 +176,5 @@ public record StringAnalysisRequest(
                         "reaches past the end of the string"));
             }
         }
-    }
-
-    /** Unknown-material message shared by requests. */
-    static String unknownMaterial(String id) {
-        return "is not a known material: '" + id + "' (see GET /api/v1/materials; known: "
-                + String.join(", ", Materials.all().stream().map(m -> m.id()).toList()) + ")";
     }
 }

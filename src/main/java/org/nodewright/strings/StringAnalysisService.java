@@ -16,6 +16,7 @@ import org.nodewright.physics.strings.StringConstruction;
 import org.nodewright.physics.strings.StringDesign;
 import org.nodewright.physics.tuning.Note;
 import org.nodewright.web.BadRequestException;
+import org.nodewright.web.EnumWords;
 import org.springframework.stereotype.Service;
 
 /** Maps a validated request (mm) to the core (SI) and the result back (mm). */
@@ -64,11 +65,11 @@ class StringAnalysisService {
         if (r.pickups() != null) {
             r.pickups().forEach(p -> pickups.add(new Pickup(p.positionMm() * MM, p.apertureOrZero() * MM)));
         }
-        return new StringDesign(lengthM, r.tensionN(), r.targetHz(), mu, ei, r.endOrDefault().toCore(),
+        return new StringDesign(lengthM, r.tensionN(), r.targetHz(), mu, ei, r.endOrDefault(),
                 coreDiameterM, strength, r.modeCountOrDefault(),
-                r.pluck() == null ? null : r.pluck().kindOrDefault().toCore(),
+                r.pluck() == null ? null : r.pluck().kindOrDefault(),
                 r.pluck() == null ? 0 : r.pluck().positionMm() * MM, pickups,
-                r.pickupCombination() == null ? null : r.pickupCombination().toCore(), r.referenceA4OrDefault());
+                r.pickupCombination() == null ? null : r.pickupCombination(), r.referenceA4OrDefault());
     }
 
     static StringConstruction construction(Material core, double diameterMm, String wrapMaterial, Double wrapDiameterMm) {
@@ -87,16 +88,16 @@ class StringAnalysisService {
         StressCheck stress = a.stress();
         Double strength = stress == null || Double.isNaN(stress.tensileStrengthPa()) ? null : stress.tensileStrengthPa();
         Note note = a.note();
-        boolean clampedShapes = r.stiffnessOn() && r.endOrDefault().toCore() == EndCondition.CLAMPED;
+        boolean clampedShapes = r.stiffnessOn() && r.endOrDefault() == EndCondition.CLAMPED;
         return new StringAnalysisResponse(a.model().tensionN(), a.model().linearDensityKgPerM(),
                 a.model().waveSpeedMps(), a.fundamentalHz(), a.model().idealFundamentalHz(), a.model().inharmonicityB(),
                 stress == null ? null : stress.stressPa(), strength,
                 strength == null ? null : stress.fractionOfStrength(),
                 stress == null ? List.of() : stress.warnings(), StressCheck.CAUTION,
                 new StringAnalysisResponse.NoteJson(note.name(), note.midi(), note.frequencyHz(), note.centsOff()),
-                r.referenceA4OrDefault(), r.endOrDefault().name().toLowerCase(java.util.Locale.ROOT), r.stiffnessOn(),
+                r.referenceA4OrDefault(), EnumWords.word(r.endOrDefault()), r.stiffnessOn(),
                 clampedShapes ? "clamped-beam-under-tension" : "sine",
-                r.pickupCombination() == null ? null : r.pickupCombination().name().toLowerCase(java.util.Locale.ROOT),
+                r.pickupCombination() == null ? null : EnumWords.word(r.pickupCombination()),
                 modes);
     }
 

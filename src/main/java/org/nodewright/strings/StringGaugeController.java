@@ -36,7 +36,7 @@ class StringGaugeController {
         try {
             d = new GaugeSolver().diameterM(x -> wound ? StringConstruction.wound(core, coreD, wrap, x)
                     : StringConstruction.plain(core, x), guess, l, r.targetHz(), r.tensionN(), r.stiffnessOn(),
-                    r.endOrDefault().toCore());
+                    r.endOrDefault());
         } catch (PitchUnreachableException e) {
             throw new BadRequestException("tensionN", e.getMessage());
         }

@@ -6,6 +6,8 @@ import jakarta.validation.constraints.NotNull;
 import jakarta.validation.constraints.Size;
 import java.util.ArrayList;
 import java.util.List;
+import org.nodewright.physics.strings.EndCondition;
+import org.nodewright.web.CrossFieldChecked;
 import org.nodewright.web.FieldProblem;
 import org.nodewright.web.Finite;
 
@@ -22,12 +24,12 @@ public record StringGaugeRequest(
         @DecimalMax(value = "100000", message = "must be at most 100000 Hz") Double targetHz,
         @NotNull @Finite @DecimalMin(value = "0.001", message = "must be at least 0.001 N")
         @DecimalMax(value = "100000", message = "must be at most 100000 N") Double tensionN,
-        @NotNull @Size(max = 64) String material,
-        @Size(max = 64) String wrapMaterial,
+        @NotNull @Size(max = StringRules.MATERIAL_ID_MAX) String material,
+        @Size(max = StringRules.MATERIAL_ID_MAX) String wrapMaterial,
         @Finite @DecimalMin(value = "0.001", message = "must be at least 0.001 mm")
         @DecimalMax(value = "100", message = "must be at most 100 mm") Double coreDiameterMm,
         Boolean stiffness,
-        Words.End endCondition,
+        EndCondition endCondition,
         @Finite @DecimalMin(value = "100", message = "must be at least 100 Hz")
         @DecimalMax(value = "1000", message = "must be at most 1000 Hz") Double referenceA4Hz)
         implements CrossFieldChecked.Rules {
@@ -36,8 +38,8 @@ public record StringGaugeRequest(
         return Boolean.TRUE.equals(stiffness);
     }
 
-    public Words.End endOrDefault() {
-        return endCondition == null ? Words.End.PINNED : endCondition;
+    public EndCondition endOrDefault() {
+        return endCondition == null ? EndCondition.PINNED : endCondition;
     }
 
     public double referenceA4OrDefault() {
@@ -52,8 +54,8 @@ public record StringGaugeRequest(
     /** Every cross-field problem of the request. */
     public static List<FieldProblem> problems(StringGaugeRequest r) {
         List<FieldProblem> out = new ArrayList<>();
-        StringChecks.material(out, "material", r.material);
-        StringChecks.material(out, "wrapMaterial", r.wrapMaterial);
+        StringRules.material(out, "material", r.material);
+        StringRules.material(out, "wrapMaterial", r.wrapMaterial);
         if (r.wrapMaterial != null && r.coreDiameterMm == null) {
             out.add(new FieldProblem("coreDiameterMm", "is required for a wound string (wrapMaterial given)"));
         }

@@ -8,6 +8,8 @@ import jakarta.validation.constraints.NotNull;
 import jakarta.validation.constraints.Size;
 import java.util.ArrayList;
 import java.util.List;
+import org.nodewright.physics.strings.EndCondition;
+import org.nodewright.web.CrossFieldChecked;
 import org.nodewright.web.FieldProblem;
 import org.nodewright.web.Finite;
 
@@ -23,7 +25,7 @@ public record StringSetRequest(
         @Finite @DecimalMin(value = "100", message = "must be at least 100 Hz")
         @DecimalMax(value = "1000", message = "must be at most 1000 Hz") Double referenceA4Hz,
         Boolean stiffness,
-        Words.End endCondition,
+        EndCondition endCondition,
         @NotNull @NotEmpty @Size(max = 64) List<@NotNull @Valid Member> strings) implements CrossFieldChecked.Rules {
 
     /** One string of the set. */
@@ -31,10 +33,10 @@ public record StringSetRequest(
             @Size(max = 100) String label,
             @NotNull @Finite @DecimalMin(value = "0.01", message = "must be at least 0.01 Hz")
             @DecimalMax(value = "100000", message = "must be at most 100000 Hz") Double targetHz,
-            @NotNull @Size(max = 64) String material,
+            @NotNull @Size(max = StringRules.MATERIAL_ID_MAX) String material,
             @NotNull @Finite @DecimalMin(value = "0.001", message = "must be at least 0.001 mm")
             @DecimalMax(value = "100", message = "must be at most 100 mm") Double diameterMm,
-            @Size(max = 64) String wrapMaterial,
+            @Size(max = StringRules.MATERIAL_ID_MAX) String wrapMaterial,
             @Finite @DecimalMin(value = "0.001", message = "must be at least 0.001 mm")
             @DecimalMax(value = "100", message = "must be at most 100 mm") Double wrapDiameterMm,
             @Finite @DecimalMin(value = "1", message = "must be at least 1 mm")
@@ -49,8 +51,8 @@ public record StringSetRequest(
         return Boolean.TRUE.equals(stiffness);
     }
 
-    public Words.End endOrDefault() {
-        return endCondition == null ? Words.End.PINNED : endCondition;
+    public EndCondition endOrDefault() {
+        return endCondition == null ? EndCondition.PINNED : endCondition;
     }
 
     @Override
@@ -70,9 +72,8 @@ public record StringSetRequest(
                 continue;
             }
             String prefix = "strings[" + i + "].";
-            StringChecks.material(out, prefix + "material", m.material);
-            StringChecks.material(out, prefix + "wrapMaterial", m.wrapMaterial);
-            StringChecks.wrapPair(out, prefix, m.wrapMaterial, m.wrapDiameterMm);
+            StringRules.material(out, prefix + "material", m.material);
+            StringRules.wrap(out, prefix, m.wrapMaterial, m.wrapDiameterMm);
             if (m.lengthMm == null && r.lengthMm == null) {
                 out.add(new FieldProblem(prefix + "lengthMm", "is required when the set has no lengthMm"));
             }

@@ -26,7 +26,7 @@ class StringSetService {
         }
         StringSets.Result result;
         try {
-            result = StringSets.analyze(strings, r.stiffnessOn(), r.endOrDefault().toCore(), r.referenceA4OrDefault());
+            result = StringSets.analyze(strings, r.stiffnessOn(), r.endOrDefault(), r.referenceA4OrDefault());
         } catch (PitchUnreachableException e) {
             throw new BadRequestException("strings", e.getMessage());
         }

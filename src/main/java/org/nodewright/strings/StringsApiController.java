@@ -1,5 +1,7 @@
 package org.nodewright.strings;
 
+import io.swagger.v3.oas.annotations.Operation;
+import io.swagger.v3.oas.annotations.Parameter;
 import jakarta.validation.Valid;
 import java.util.List;
 import org.nodewright.physics.strings.Materials;
@@ -25,7 +27,14 @@ class StringsApiController {
 
     @PostMapping(path = "/api/v1/strings/analyze", consumes = MediaType.APPLICATION_JSON_VALUE,
             produces = MediaType.APPLICATION_JSON_VALUE)
+    @Operation(summary = "Modes of one string: frequencies, nodes, pluck and pickup spectra, chart-sampled shapes",
+            description = "Mode shapes are sampled for a chart (mode n at max(24, min(200, 6n)) equal intervals, "
+                    + "or shapeSamples points when given) and written to six significant digits; frequencies, "
+                    + "nodes and gains at full precision. The answer is gzip-compressed when the client sends "
+                    + "Accept-Encoding: gzip.")
     StringAnalysisResponse analyze(@Valid @RequestBody StringAnalysisRequest request,
+            @Parameter(description = "chart (default): each mode's shapeX and shape; none: leave them out (null), "
+                    + "the lighter answer for a pluck or pickup move, which changes no shape")
             @RequestParam(name = "shapes", required = false) String shapes) {
         return analysis.analyze(request, shapesWanted(shapes, request));
     }

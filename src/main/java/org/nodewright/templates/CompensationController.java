@@ -20,8 +20,8 @@ import org.nodewright.physics.strings.Materials;
 import org.nodewright.physics.strings.StringConstruction;
 import org.nodewright.physics.templates.IntonationCompensation;
 import org.nodewright.physics.tuning.EqualTemperament;
-import org.nodewright.physics.tuning.NoteNames;
-import org.nodewright.web.BadRequestException;
+import org.nodewright.strings.StringRules;
+import org.nodewright.web.CrossFieldChecked;
 import org.nodewright.web.FieldProblem;
 import org.nodewright.web.Finite;
 import org.springframework.web.bind.annotation.PostMapping;
@@ -46,6 +46,7 @@ class CompensationController {
             "The player tunes the open string; each fret's error is measured from the open string's own pitch.",
             "Catalogue moduli are typical values: the string maker's data and a tuner on the real instrument decide.");
 
+    @CrossFieldChecked
     record Request(
             @NotNull @Finite @Positive @DecimalMax("3000") Double lengthMm,
             @Min(1) @Max(36) Integer frets,
@@ -53,11 +54,44 @@ class CompensationController {
             @NotNull @Finite @PositiveOrZero @DecimalMax("20") Double actionAt12thMm,
             Boolean compensateNut,
             @Finite @DecimalMin("300") @DecimalMax("600") Double referenceA4Hz,
-            @NotEmpty @Size(max = 24) List<@Valid @NotNull StringSpec> strings) {
+            @NotEmpty @Size(max = 24) List<@Valid @NotNull StringSpec> strings) implements CrossFieldChecked.Rules {
+
+        /** Nut height above the fret plane, 0.5 mm unless given (common practice). */
+        double nutOrDefault() {
+            return nutHeightMm == null ? 0.5 : nutHeightMm;
+        }
+
+        /** Saddle height for a straight string: 2 x action at the 12th fret - nut height. */
+        double saddleHeightMm() {
+            return 2 * actionAt12thMm - nutOrDefault();
+        }
+
+        @Override
+        public List<FieldProblem> crossFieldProblems() {
+            List<FieldProblem> out = new ArrayList<>();
+            if (actionAt12thMm != null && Double.isFinite(actionAt12thMm) && Double.isFinite(nutOrDefault())
+                    && saddleHeightMm() < 0) {
+                out.add(new FieldProblem("actionAt12thMm", "must be at least half of nutHeightMm"));
+            }
+            if (strings == null) {
+                return out;
+            }
+            for (int i = 0; i < strings.size(); i++) {
+                StringSpec s = strings.get(i);
+                if (s == null) {
+                    continue;
+                }
+                String at = "strings[" + i + "].";
+                StringRules.pitch(out, at, s.note(), s.targetHz());
+                StringRules.material(out, at + "material", s.material());
+                StringRules.wrap(out, at, s.wrapMaterial(), s.wrapDiameterMm());
+            }
+            return out;
+        }
     }
 
     record StringSpec(
-            @Size(max = 8) String note,
+            @Size(max = StringRules.NOTE_MAX) String note,
             @Finite @Positive @DecimalMax("20000") Double targetHz,
             @NotNull @Size(max = 40) String material,
             @NotNull @Finite @Positive @DecimalMax("20") Double diameterMm,
@@ -79,45 +113,15 @@ class CompensationController {
             description = "Model and assumptions are returned with the figures. Each string: note or targetHz, "
                     + "material and diameterMm (core), optional wrapMaterial + wrapDiameterMm, optional youngsModulusPa.")
     Response compensate(@Valid @RequestBody Request r) {
-        double nut = r.nutHeightMm() == null ? 0.5 : r.nutHeightMm();
-        double saddle = 2 * r.actionAt12thMm() - nut;
-        List<FieldProblem> problems = new ArrayList<>();
-        if (saddle < 0) {
-            problems.add(new FieldProblem("actionAt12thMm", "must be at least half of nutHeightMm"));
-        }
+        double nut = r.nutOrDefault();
+        double saddle = r.saddleHeightMm();
         double a4 = r.referenceA4Hz() == null ? EqualTemperament.ISO_16_A4_HZ : r.referenceA4Hz();
         List<IntonationCompensation.Setup> setups = new ArrayList<>();
         List<Double> pitches = new ArrayList<>();
-        for (int i = 0; i < r.strings().size(); i++) {
-            StringSpec s = r.strings().get(i);
-            String at = "strings[" + i + "].";
-            Double hz = s.targetHz();
-            if ((hz == null) == (s.note() == null)) {
-                problems.add(new FieldProblem(at + "targetHz", "give either note or targetHz"));
-                continue;
-            }
-            if (hz == null) {
-                try {
-                    hz = NoteNames.frequencyHz(s.note(), a4);
-                } catch (IllegalArgumentException e) {
-                    problems.add(new FieldProblem(at + "note", "is not a note name like E4, F#3 or Bb2"));
-                    continue;
-                }
-            }
-            Material core = Materials.find(s.material()).orElse(null);
-            Material wrap = s.wrapMaterial() == null ? null : Materials.find(s.wrapMaterial()).orElse(null);
-            if (core == null) {
-                problems.add(new FieldProblem(at + "material", "is not a material id of GET /api/v1/materials"));
-            }
-            if (s.wrapMaterial() != null && wrap == null) {
-                problems.add(new FieldProblem(at + "wrapMaterial", "is not a material id of GET /api/v1/materials"));
-            }
-            if ((s.wrapMaterial() == null) != (s.wrapDiameterMm() == null)) {
-                problems.add(new FieldProblem(at + "wrapDiameterMm", "give wrapMaterial and wrapDiameterMm together"));
-            }
-            if (!problems.isEmpty() || saddle < 0) {
-                continue;
-            }
+        for (StringSpec s : r.strings()) {
+            double hz = StringRules.pitchHz(s.note(), s.targetHz(), a4);
+            Material core = Materials.get(s.material());
+            Material wrap = s.wrapMaterial() == null ? null : Materials.get(s.wrapMaterial());
             StringConstruction c = wrap == null ? StringConstruction.plain(core, s.diameterMm() * 1e-3)
                     : StringConstruction.wound(core, s.diameterMm() * 1e-3, wrap, s.wrapDiameterMm() * 1e-3);
             double e = s.youngsModulusPa() == null ? core.youngsModulusPa() : s.youngsModulusPa();
@@ -128,9 +132,6 @@ class CompensationController {
             setups.add(new IntonationCompensation.Setup(r.lengthMm(), tension, mu, e, area, ei, nut, saddle,
                     r.frets() == null ? 12 : r.frets()));
             pitches.add(hz);
-        }
-        if (!problems.isEmpty()) {
-            throw new BadRequestException(problems);
         }
         boolean bothEnds = Boolean.TRUE.equals(r.compensateNut());
         List<StringResult> out = new ArrayList<>();

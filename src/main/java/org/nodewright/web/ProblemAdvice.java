@@ -232,8 +232,14 @@ public class ProblemAdvice extends ResponseEntityExceptionHandler {
         return m.length() > 200 ? m.substring(0, 200) : m;
     }
 
-    /** The words an enum accepts in JSON: each constant's {@code @JsonProperty} value, else its name. */
+    /**
+     * The words an enum accepts in JSON: a core enum's {@link EnumWords}; otherwise each constant's
+     * {@code @JsonProperty} value, else its name.
+     */
     static java.util.List<String> enumWords(Class<?> type) {
+        if (EnumWords.isCoreEnum(type)) {
+            return EnumWords.words(type);
+        }
         List<String> words = new ArrayList<>();
         for (java.lang.reflect.Field f : type.getFields()) {
             if (!f.isEnumConstant()) {

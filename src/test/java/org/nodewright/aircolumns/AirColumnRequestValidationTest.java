@@ -9,6 +9,8 @@ import java.util.List;
 import java.util.Set;
 import java.util.stream.Collectors;
 import org.junit.jupiter.api.Test;
+import org.nodewright.physics.aircolumn.InputEnd;
+import org.nodewright.physics.aircolumn.OutputEnd;
 
 /** The request record validates itself: every problem is found without the web layer. */
 class AirColumnRequestValidationTest {
@@ -26,8 +28,8 @@ class AirColumnRequestValidationTest {
 
     @Test
     void aSoundDesignHasNoViolations() {
-        AirColumnRequest r = new AirColumnRequest(List.of(seg(300.0, 15.0, 15.0)), InputEndWord.CLOSED,
-                OutputEndWord.OPEN_UNFLANGED, List.of(new AirColumnRequest.Hole(200.0, 6.0, 3.0, true)), 20.0, 0.0,
+        AirColumnRequest r = new AirColumnRequest(List.of(seg(300.0, 15.0, 15.0)), InputEnd.CLOSED,
+                OutputEnd.OPEN_UNFLANGED, List.of(new AirColumnRequest.Hole(200.0, 6.0, 3.0, true)), 20.0, 0.0,
                 true, 20.0, 3000.0, 4000, 440.0, null, List.of(new AirColumnRequest.FingeringSpec("low", List.of(0),
                         "D4", null, 1)));
         assertThat(paths(r)).isEmpty();
@@ -37,7 +39,7 @@ class AirColumnRequestValidationTest {
     void everyProblemIsReportedWithItsDottedPath() {
         AirColumnRequest r = new AirColumnRequest(
                 List.of(seg(100.0, 15.0, 15.0), seg(100.0, 15.0, 12.0), seg(-5.0, 12.0, Double.NaN)),
-                null, OutputEndWord.CLOSED,
+                null, OutputEnd.CLOSED,
                 List.of(new AirColumnRequest.Hole(50.0, 20.0, 3.0, true), new AirColumnRequest.Hole(150.0, 6.0, -1.0,
                         false)),
                 900.0, -3.0, null, 3000.0, 20.0, 1_000_000_000, Double.POSITIVE_INFINITY, 1, List.of(
@@ -50,7 +52,7 @@ class AirColumnRequestValidationTest {
     @Test
     void crossFieldRulesNameTheirFields() {
         AirColumnRequest r = new AirColumnRequest(List.of(seg(100.0, 15.0, 15.0), seg(100.0, 15.0, 10.0)),
-                InputEndWord.OPEN, OutputEndWord.IDEAL_OPEN,
+                InputEnd.OPEN, OutputEnd.IDEAL_OPEN,
                 List.of(new AirColumnRequest.Hole(50.0, 16.0, 3.0, true), new AirColumnRequest.Hole(250.0, 4.0, 3.0,
                         true)),
                 null, null, null, 100.0, 100.0, null, null, null,
@@ -64,7 +66,7 @@ class AirColumnRequestValidationTest {
         List<AirColumnRequest.Segment> many = java.util.Collections.nCopies(1000, seg(20.0, 15.0, 15.0));
         List<AirColumnRequest.FingeringSpec> fs = java.util.Collections.nCopies(32,
                 new AirColumnRequest.FingeringSpec(null, List.of(), null, 440.0, 1));
-        AirColumnRequest r = new AirColumnRequest(many, InputEndWord.CLOSED, OutputEndWord.CLOSED, null, null, null,
+        AirColumnRequest r = new AirColumnRequest(many, InputEnd.CLOSED, OutputEnd.CLOSED, null, null, null,
                 null, 20.0, 20000.0, 20000, null, null, fs);
         assertThat(paths(r)).contains("points");
     }

@@ -172,19 +172,29 @@ class LanModeSecurityTest {
         mvc.perform(put("/api/v1/accounts/" + name + "/password").with(httpBasic("admin", ADMIN_PW))
                         .contentType(MediaType.APPLICATION_JSON).content("{\"password\":\"maple-back-77\"}"))
                 .andExpect(status().isOk()).andExpect(jsonPath("$.password").doesNotExist());
-        mvc.perform(get("/api/v1/accounts/" + name).with(httpBasic(name, "maple-back-77")).with(from(nextAddress())))
+        // The reset password signs in, but until the account chose its own only the password change is open.
+        mvc.perform(get("/api/v1/materials").with(httpBasic(name, "maple-back-77")).with(from(nextAddress())))
+                .andExpect(status().isForbidden())
+                .andExpect(jsonPath("$.title").value("Password change required"));
+        mvc.perform(put("/api/v1/accounts/me/password").with(httpBasic(name, "maple-back-77")).with(from(nextAddress()))
+                        .contentType(MediaType.APPLICATION_JSON)
+                        .content("{\"currentPassword\":\"maple-back-77\",\"newPassword\":\"maple-back-78\"}"))
+                .andExpect(status().isNoContent());
+        mvc.perform(get("/api/v1/accounts/" + name).with(httpBasic(name, "maple-back-78")).with(from(nextAddress())))
                 .andExpect(status().isForbidden()); // signed in (new password works) but not an admin
         mvc.perform(get("/api/v1/materials").with(httpBasic(name, "spruce-top-42")).with(from(nextAddress())))
                 .andExpect(status().isUnauthorized()); // the old password no longer does
+        mvc.perform(get("/api/v1/materials").with(httpBasic(name, "maple-back-77")).with(from(nextAddress())))
+                .andExpect(status().isUnauthorized()); // nor the one the admin set
 
         mvc.perform(put("/api/v1/accounts/" + name + "/enabled").with(httpBasic("admin", ADMIN_PW))
                         .contentType(MediaType.APPLICATION_JSON).content("{\"enabled\":false}"))
                 .andExpect(status().isOk()).andExpect(jsonPath("$.enabled").value(false));
-        mvc.perform(get("/api/v1/materials").with(httpBasic(name, "maple-back-77")).with(from(nextAddress())))
+        mvc.perform(get("/api/v1/materials").with(httpBasic(name, "maple-back-78")).with(from(nextAddress())))
                 .andExpect(status().isUnauthorized());
         mvc.perform(put("/api/v1/accounts/" + name + "/enabled").with(httpBasic("admin", ADMIN_PW))
                 .contentType(MediaType.APPLICATION_JSON).content("{\"enabled\":true}")).andExpect(status().isOk());
-        int back = mvc.perform(get("/api/v1/designs").with(httpBasic(name, "maple-back-77")).with(from(nextAddress())))
+        int back = mvc.perform(get("/api/v1/designs").with(httpBasic(name, "maple-back-78")).with(from(nextAddress())))
                 .andReturn().getResponse().getStatus();
         // Re-enabled, the account lists designs again: exactly 200 (the contract's answer to
         // GET /api/v1/designs), not merely "not refused", which would let a 500 through.

@@ -58,12 +58,23 @@ class LanStartupTest {
 
     private static HttpResponse<String> get(String host, int port, String path, String user, String password)
             throws Exception {
-        HttpRequest.Builder request = HttpRequest.newBuilder(URI.create("http://" + host + ":" + port + path));
+        return send(HTTP, "http", host, port, path, user, password);
+    }
+
+    /** LAN mode speaks HTTPS only; this client trusts exactly the certificate kept under the data directory. */
+    private static HttpResponse<String> getTls(Path dataDir, int port, String path, String user, String password)
+            throws Exception {
+        return send(LanTestTls.trustingKept(dataDir), "https", "127.0.0.1", port, path, user, password);
+    }
+
+    private static HttpResponse<String> send(HttpClient client, String scheme, String host, int port, String path,
+            String user, String password) throws Exception {
+        HttpRequest.Builder request = HttpRequest.newBuilder(URI.create(scheme + "://" + host + ":" + port + path));
         if (user != null) {
             String token = Base64.getEncoder().encodeToString((user + ":" + password).getBytes(StandardCharsets.UTF_8));
             request.header("Authorization", "Basic " + token);
         }
-        return HTTP.send(request.build(), HttpResponse.BodyHandlers.ofString());
+        return client.send(request.build(), HttpResponse.BodyHandlers.ofString());
     }
 
     @Test
@@ -88,25 +99,29 @@ class LanStartupTest {
                 "--app.sharing.admin-password=first-start-pw")) {
             int port = port(app);
             assertThat(answers("127.0.0.2", port)).isTrue();
-            assertThat(get("127.0.0.2", port, "/api/v1/accounts", null, null).statusCode()).isEqualTo(401);
-            HttpResponse<String> list = get("127.0.0.2", port, "/api/v1/accounts", "admin", "first-start-pw");
+            assertThat(getTls(dir, port, "/api/v1/accounts", null, null).statusCode()).isEqualTo(401);
+            HttpResponse<String> list = getTls(dir, port, "/api/v1/accounts", "admin", "first-start-pw");
             assertThat(list.statusCode()).isEqualTo(200);
             assertThat(list.body()).contains("\"username\":\"admin\"").contains("\"role\":\"admin\"");
+            // Plain HTTP on the same port: refused before any credential is looked at (Tomcat's 400).
+            HttpResponse<String> plain = get("127.0.0.1", port, "/api/v1/accounts", "admin", "first-start-pw");
+            assertThat(plain.statusCode()).isEqualTo(400);
+            assertThat(plain.body()).doesNotContain("\"username\"");
         }
         // Second start: the admin exists, so a different password on the command line changes nothing.
         try (ConfigurableApplicationContext app = start(dir, "--app.sharing.lan=true",
                 "--app.sharing.admin-password=other-password")) {
             int port = port(app);
-            assertThat(get("127.0.0.1", port, "/api/v1/accounts", "admin", "first-start-pw").statusCode())
+            assertThat(getTls(dir, port, "/api/v1/accounts", "admin", "first-start-pw").statusCode())
                     .isEqualTo(200);
-            assertThat(get("127.0.0.1", port, "/api/v1/accounts", "admin", "other-password").statusCode())
+            assertThat(getTls(dir, port, "/api/v1/accounts", "admin", "other-password").statusCode())
                     .isEqualTo(401);
         }
         // Third start: no password needed any more; an explicit address is kept.
         try (ConfigurableApplicationContext app = start(dir, "--app.sharing.lan=true", "--server.address=127.0.0.1")) {
             int port = port(app);
             assertThat(answers("127.0.0.2", port)).isFalse();
-            assertThat(get("127.0.0.1", port, "/api/v1/accounts", "admin", "first-start-pw").statusCode())
+            assertThat(getTls(dir, port, "/api/v1/accounts", "admin", "first-start-pw").statusCode())
                     .isEqualTo(200);
         }
     }

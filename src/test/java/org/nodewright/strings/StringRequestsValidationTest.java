@@ -8,6 +8,8 @@ import jakarta.validation.Validator;
 import java.util.List;
 import java.util.Set;
 import org.junit.jupiter.api.Test;
+import org.nodewright.physics.strings.EndCondition;
+import org.nodewright.physics.strings.PickupCombination;
 
 /**
  * The request records validate themselves with Bean Validation alone (no Spring), cross-field rules
@@ -18,9 +20,9 @@ class StringRequestsValidationTest {
     private static final Validator VALIDATOR = Validation.buildDefaultValidatorFactory().getValidator();
 
     private static StringAnalysisRequest request(Double tension, Double target, String material,
-            List<StringAnalysisRequest.Pickup> pickups, Words.Combination combination, Double pluckMm) {
+            List<StringAnalysisRequest.Pickup> pickups, PickupCombination combination, Double pluckMm) {
         return new StringAnalysisRequest(650.0, tension, target, null, material, 0.30, null, null, null,
-                Words.End.CLAMPED, true, 24, pluckMm == null ? null : new StringAnalysisRequest.Pluck(pluckMm, null),
+                EndCondition.CLAMPED, true, 24, pluckMm == null ? null : new StringAnalysisRequest.Pluck(pluckMm, null),
                 pickups, combination, null, null);
     }
 
@@ -32,14 +34,14 @@ class StringRequestsValidationTest {
     void aConsistentRequestHasNoViolations() {
         StringAnalysisRequest r = request(70.0, null, "plain-steel",
                 List.of(new StringAnalysisRequest.Pickup(150.0, 10.0), new StringAnalysisRequest.Pickup(600.0, null)),
-                Words.Combination.SUM, 120.0);
+                PickupCombination.SUM, 120.0);
         assertThat(VALIDATOR.validate(r)).isEmpty();
     }
 
     @Test
     void crossFieldProblemsAreViolationsOnTheirDottedPaths() {
         StringAnalysisRequest r = request(70.0, 330.0, "unobtainium",
-                List.of(new StringAnalysisRequest.Pickup(5.0, 40.0)), Words.Combination.OPPOSITE, 650.0);
+                List.of(new StringAnalysisRequest.Pickup(5.0, 40.0)), PickupCombination.OPPOSITE, 650.0);
         assertThat(paths(VALIDATOR.validate(r))).containsExactly("material", "pickupCombination",
                 "pickups[0].apertureMm", "pluck.positionMm", "targetHz");
     }

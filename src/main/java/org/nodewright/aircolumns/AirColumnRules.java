@@ -1,0 +1,143 @@
+package org.nodewright.aircolumns;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import org.nodewright.physics.tuning.NoteNames;
+import org.nodewright.web.FieldProblem;
+
+/**
+ * Cross-field rules of {@link AirColumnRequest} (through {@link org.nodewright.web.CrossFieldChecked}),
+ * each reported on its own dotted path: fMaxHz above fMinHz, the bore no longer than 20 m, the work
+ * bounded, every hole inside the bore and no wider than the bore where it sits, fingering hole
+ * indices within the hole list, exactly one target per fingering and a readable note name. Fields
+ * that are missing are left to their own constraints.
+ */
+final class AirColumnRules {
+
+    /** Upper bound of the work one request may ask for (element-frequency evaluations). */
+    static final double MAX_WORK = 1e8;
+
+    private AirColumnRules() {
+    }
+
+    static List<FieldProblem> problems(AirColumnRequest r) {
+        List<FieldProblem> out = new ArrayList<>();
+        if (r.fMinHz() != null && r.fMaxHz() != null && Double.isFinite(r.fMinHz())
+                && Double.isFinite(r.fMaxHz()) && !(r.fMaxHz() > r.fMinHz())) {
+            out.add(new FieldProblem("fMaxHz", "must be greater than fMinHz (" + r.fMinHz() + ")"));
+        }
+        double total = totalLength(r.segments());
+        if (total > AirColumnRequest.MAX_TOTAL_LENGTH_MM) {
+            out.add(new FieldProblem("segments", "the bore may be at most " + AirColumnRequest.MAX_TOTAL_LENGTH_MM
+                    + " mm long in total, was " + total));
+        }
+        if (Double.isFinite(total) && total > 0 && r.fMinHz() != null && r.fMaxHz() != null
+                && r.fMaxHz() > r.fMinHz()) {
+            double work = work(r, total);
+            if (work > MAX_WORK) {
+                out.add(new FieldProblem("points", String.format(Locale.ROOT, "this bore, frequency range, number of "
+                        + "points and fingerings ask for about %.2g element-frequency evaluations (limit %.0g): "
+                        + "narrow the range or use fewer points, segments or fingerings", work, MAX_WORK)));
+            }
+        }
+        List<AirColumnRequest.Hole> holes = r.holes();
+        if (holes != null && Double.isFinite(total)) {
+            for (int i = 0; i < holes.size(); i++) {
+                AirColumnRequest.Hole h = holes.get(i);
+                if (h == null || h.positionMm() == null || !Double.isFinite(h.positionMm())) {
+                    continue;
+                }
+                if (!(h.positionMm() < total)) {
+                    out.add(new FieldProblem("holes[" + i + "].positionMm", "must lie inside the bore (before its end at "
+                            + fmt(total) + " mm)"));
+                    continue;
+                }
+                double bore = diameterAt(r.segments(), h.positionMm());
+                if (h.diameterMm() != null && Double.isFinite(h.diameterMm()) && bore > 0 && h.diameterMm() > bore) {
+                    out.add(new FieldProblem("holes[" + i + "].diameterMm", "must not exceed the bore diameter there ("
+                            + fmt(bore) + " mm)"));
+                }
+            }
+        }
+        List<AirColumnRequest.FingeringSpec> fs = r.fingerings();
+        if (fs != null) {
+            int holeCount = holes == null ? 0 : holes.size();
+            for (int i = 0; i < fs.size(); i++) {
+                fingering(out, fs.get(i), i, holeCount);
+            }
+        }
+        return out;
+    }
+
+    private static void fingering(List<FieldProblem> out, AirColumnRequest.FingeringSpec f, int i, int holeCount) {
+        if (f == null) {
+            return;
+        }
+        String base = "fingerings[" + i + "]";
+        if (f.closedHoles() != null) {
+            for (int j = 0; j < f.closedHoles().size(); j++) {
+                Integer idx = f.closedHoles().get(j);
+                if (idx != null && idx >= holeCount) {
+                    out.add(new FieldProblem(base + ".closedHoles[" + j + "]", "must be the index of a hole (0.."
+                            + (holeCount - 1) + ")"));
+                }
+            }
+        }
+        boolean hasNote = f.targetNote() != null;
+        boolean hasHz = f.targetHz() != null;
+        if (hasNote == hasHz) {
+            out.add(new FieldProblem(base + ".targetHz", hasNote ? "give targetHz or targetNote, not both"
+                    : "give targetHz or targetNote"));
+        } else if (hasNote && !NoteNames.isNoteName(f.targetNote())) {
+            out.add(new FieldProblem(base + ".targetNote", "must be a note name such as " + NoteNames.EXAMPLES));
+        }
+    }
+
+    /**
+     * Estimated element-frequency evaluations: the sweep plus, per fingering, a detection grid
+     * fine enough to separate resonances (24 cells per c/2L, c taken as 343 m/s).
+     */
+    static double work(AirColumnRequest r, double totalMm) {
+        int elements = (r.segments() == null ? 0 : r.segments().size()) + (r.holes() == null ? 0 : r.holes().size());
+        int points = r.pointsOrDefault();
+        double detection = Math.min(60_000, Math.max(64, (r.fMaxHz() - r.fMinHz())
+                / (343.0 / (2 * totalMm * 1e-3) / 24)));
+        int fingerings = r.fingerings() == null ? 0 : r.fingerings().size();
+        return (double) elements * (Math.max(points, detection) + fingerings * detection);
+    }
+
+    private static double totalLength(List<AirColumnRequest.Segment> segments) {
+        if (segments == null) {
+            return 0;
+        }
+        double sum = 0;
+        for (AirColumnRequest.Segment s : segments) {
+            if (s == null || s.lengthMm() == null || !Double.isFinite(s.lengthMm()) || s.lengthMm() <= 0) {
+                return Double.NaN;
+            }
+            sum += s.lengthMm();
+        }
+        return sum;
+    }
+
+    /** Bore diameter at x (mm) from the input end, or -1 if a segment is incomplete. */
+    static double diameterAt(List<AirColumnRequest.Segment> segments, double x) {
+        double startMm = 0;
+        for (AirColumnRequest.Segment s : segments) {
+            if (s == null || s.lengthMm() == null || s.inputDiameterMm() == null || s.outputDiameterMm() == null) {
+                return -1;
+            }
+            if (x <= startMm + s.lengthMm()) {
+                double t = (x - startMm) / s.lengthMm();
+                return s.inputDiameterMm() + (s.outputDiameterMm() - s.inputDiameterMm()) * t;
+            }
+            startMm += s.lengthMm();
+        }
+        return -1;
+    }
+
+    private static String fmt(double v) {
+        return String.format(Locale.ROOT, "%.3f", v);
+    }
+}
