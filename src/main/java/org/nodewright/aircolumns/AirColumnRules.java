@@ -10,7 +10,8 @@ import org.nodewright.web.FieldProblem;
  * Cross-field rules of {@link AirColumnRequest} (through {@link org.nodewright.web.CrossFieldChecked}),
  * each reported on its own dotted path: fMaxHz above fMinHz, the bore no longer than 20 m, the work
  * bounded, every hole inside the bore and no wider than the bore where it sits, fingering hole
- * indices within the hole list, exactly one target per fingering and a readable note name. Fields
+ * indices within the hole list, exactly one target per fingering and a readable note name, and the
+ * mouth's rules ({@link MouthRules}). Fields
  * that are missing are left to their own constraints.
  */
 final class AirColumnRules {
@@ -60,6 +61,7 @@ final class AirColumnRules {
                 }
             }
         }
+        out.addAll(MouthRules.problems(r));
         List<AirColumnRequest.FingeringSpec> fs = r.fingerings();
         if (fs != null) {
             int holeCount = holes == null ? 0 : holes.size();

@@ -14,6 +14,7 @@ import org.springframework.http.ProblemDetail;
 import org.springframework.http.ResponseEntity;
 import org.springframework.http.converter.HttpMessageNotReadableException;
 import org.springframework.validation.FieldError;
+import org.springframework.web.ErrorResponseException;
 import org.springframework.web.bind.MethodArgumentNotValidException;
 import org.springframework.web.bind.MissingServletRequestParameterException;
 import org.springframework.web.bind.annotation.ExceptionHandler;
@@ -152,6 +153,12 @@ public class ProblemAdvice extends ResponseEntityExceptionHandler {
         if (ex instanceof org.springframework.security.access.AccessDeniedException
                 || ex instanceof org.springframework.security.core.AuthenticationException) {
             throw ex; // the security filter chain answers these with 401/403
+        }
+        if (org.nodewright.store.DiskSpace.isDiskFull(ex)) {
+            log.error("A write failed for lack of disk space: {}", ex.getMessage());
+            ErrorResponseException full = org.nodewright.store.DiskSpace.full("The disk of the data directory is "
+                    + "full: this change was not saved. Everything saved before is kept; free some space and save again.");
+            return problem(full.getBody(), new HttpHeaders());
         }
         log.error("Unexpected failure", ex);
         ProblemDetail pd = ProblemDetail.forStatusAndDetail(HttpStatus.INTERNAL_SERVER_ERROR,
