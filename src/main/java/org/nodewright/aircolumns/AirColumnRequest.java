@@ -96,6 +96,15 @@ public record AirColumnRequest(
             @Min(1) @Max(16) Integer register) {
     }
 
+    static final double DEFAULT_TEMPERATURE_C = 20.0;
+    static final double DEFAULT_HUMIDITY_PCT = 0.0;
+    static final int DEFAULT_POINTS = 2000;
+    static final int DEFAULT_PROFILE_SAMPLES = 201;
+
+    /** What an omitted top-level field means (JSON names), for comparing saved designs by their effective values. */
+    public static final java.util.Map<String, Object> DEFAULTS = java.util.Map.of("temperatureC", DEFAULT_TEMPERATURE_C,
+            "relativeHumidityPct", DEFAULT_HUMIDITY_PCT, "losses", true, "points", DEFAULT_POINTS,
+            "referenceA4Hz", EqualTemperament.ISO_16_A4_HZ, "profileSamples", DEFAULT_PROFILE_SAMPLES);
     /**
      * The player's end (see the contract's "Mouth ends and breath"): {@code kind} and the fields
      * of that kind, millimetres; fields of other kinds must be absent. Embouchure: the hole as
@@ -133,11 +142,11 @@ public record AirColumnRequest(
     }
 
     public double temperatureOrDefault() {
-        return temperatureC == null ? 20.0 : temperatureC;
+        return temperatureC == null ? DEFAULT_TEMPERATURE_C : temperatureC;
     }
 
     public double humidityOrDefault() {
-        return relativeHumidityPct == null ? 0.0 : relativeHumidityPct;
+        return relativeHumidityPct == null ? DEFAULT_HUMIDITY_PCT : relativeHumidityPct;
     }
 
     public boolean lossesOrDefault() {
@@ -145,7 +154,7 @@ public record AirColumnRequest(
     }
 
     public int pointsOrDefault() {
-        return points == null ? 2000 : points;
+        return points == null ? DEFAULT_POINTS : points;
     }
 
     public double referenceA4OrDefault() {
@@ -153,7 +162,7 @@ public record AirColumnRequest(
     }
 
     public int profileSamplesOrDefault() {
-        return profileSamples == null ? 201 : profileSamples;
+        return profileSamples == null ? DEFAULT_PROFILE_SAMPLES : profileSamples;
     }
 
     public List<Hole> holesOrEmpty() {

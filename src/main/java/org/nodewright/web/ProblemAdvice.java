@@ -225,6 +225,10 @@ public class ProblemAdvice extends ResponseEntityExceptionHandler {
                 && ife.getTargetType().isEnum()) {
             return "is not one of " + enumWords(ife.getTargetType());
         }
+        if (je instanceof tools.jackson.databind.exc.MismatchedInputException mie && isNumber(mie.getTargetType())) {
+            // Text, a boolean or a list where a number belongs: say what to enter, not how Jackson coerces.
+            return "enter a number (in JSON, without quotes)";
+        }
         String m = je.getOriginalMessage();
         if (m == null) {
             return "is not readable";
@@ -237,6 +241,11 @@ public class ProblemAdvice extends ResponseEntityExceptionHandler {
         // Keep it short and free of class names.
         m = m.replaceAll("\\(class [^)]*\\)", "").replaceAll("`[a-z]+(\\.[A-Za-z0-9_$]+)+`", "value");
         return m.length() > 200 ? m.substring(0, 200) : m;
+    }
+
+    private static boolean isNumber(Class<?> type) {
+        return type != null && (Number.class.isAssignableFrom(type) || type == double.class || type == float.class
+                || type == int.class || type == long.class || type == short.class);
     }
 
     /**
