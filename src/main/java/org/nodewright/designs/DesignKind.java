@@ -4,6 +4,7 @@ import com.fasterxml.jackson.annotation.JsonProperty;
 import java.util.Arrays;
 import java.util.Optional;
 import org.nodewright.aircolumns.AirColumnRequest;
+import org.nodewright.bars.BarAnalysisRequest;
 import org.nodewright.strings.StringAnalysisRequest;
 import org.nodewright.strings.StringSetRequest;
 
@@ -23,7 +24,10 @@ public enum DesignKind {
 
     @JsonProperty("air-column")
     AIR_COLUMN("air-column", AirColumnRequest.class, "/api/v1/air-columns/analyze",
-            "/air-columns");
+            "/air-columns"),
+
+    @JsonProperty("bar")
+    BAR("bar", BarAnalysisRequest.class, "/api/v1/bars/analyze", "/bars");
 
     private final String word;
     private final Class<?> requestClass;
