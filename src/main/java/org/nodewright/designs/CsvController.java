@@ -77,6 +77,7 @@ class CsvController {
             case STRING -> "modes";
             case AIR_COLUMN -> "resonances";
             case STRING_SET -> "strings";
+            case PLATE -> "modes";
         };
         runAndWrite(request, new BodyRequest(request, "POST", body), response, kind.analyzePath(), rows, filename);
     }
