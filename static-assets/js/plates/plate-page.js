@@ -32,7 +32,7 @@ function parsePoints(text) {
   return lines.map((l) => l.split(/[\s,]+/).filter((s) => s.length > 0).map(numberOrText));
 }
 
-function addBraceRow(b = { fromMm: [100, 50], toMm: [300, 50], widthMm: 6, heightMm: 8 }) {
+function addBraceRow(b = { fromMm: [50, 150], toMm: [350, 150], widthMm: 8, heightMm: 12 }) {
   const tr = document.createElement('tr');
   const index = braceRows.children.length;
   const cell = (field, value) => {
