@@ -1,7 +1,7 @@
 #!/usr/bin/env bash
 # Runs every test: unit tests (Surefire), browser and process tests (Failsafe), and the store's
 # tests against a real PostgreSQL as well as H2. Brings what those need on Debian when missing:
-# Chromium with its driver, and a PostgreSQL server started in a temporary folder.
+# Chromium with its driver, Node.js for the page modules' tests, and a PostgreSQL server started in a temporary folder.
 set -euo pipefail
 cd "$(dirname "$0")/.."
 
@@ -10,6 +10,7 @@ as_root() { if [ "$(id -u)" = 0 ]; then "$@"; elif command -v sudo >/dev/null; t
 need_apt=()
 [ -x /usr/bin/chromium ] || need_apt+=(chromium)
 [ -x /usr/bin/chromedriver ] || need_apt+=(chromium-driver)
+command -v node >/dev/null || need_apt+=(nodejs)   # the page modules' tests (node --test)
 pg_bin=$(ls -d /usr/lib/postgresql/*/bin 2>/dev/null | sort -V | tail -n 1 || true)
 [ -n "$pg_bin" ] || need_apt+=(postgresql)
 if [ ${#need_apt[@]} -gt 0 ]; then

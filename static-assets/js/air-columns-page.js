@@ -3,26 +3,37 @@
 // fingering tables. Every figure comes from the server; the page only converts units and
 // compares frequencies (notes, cents, series).
 import { clearFieldErrors, postJson, showFieldErrors } from './common/api.js';
+import { createRequestLoop } from './common/request-loop.js';
+import { loadPanels, showPanelFailure } from './common/panels.js';
+import { OPEN_AIR_COLUMN, BORE_FOR_TEMPLATES, handOver, handedOver } from './common/handover.js';
 import { fmt, fromMm } from './common/units.js';
 import { BoreEditor, parseNumber } from './air/editor.js';
 import { drawBore } from './air/drawing.js';
 import { drawImpedance, drawProfile } from './air/charts.js';
 import { FingeringTable } from './air/fingerings.js';
-import { alignment, nearestNote, suggestedSeries } from './air/tuning.js';
+import { alignment, suggestedSeries } from './air/tuning.js';
+import { nearestNote } from './common/notes.js';
 import { preset } from './air/presets.js';
+import { MouthEditor } from './air/mouth.js';
 import { t } from './air/text.js';
 
 const ANALYZE_URL = '/api/v1/air-columns/analyze';
 const $ = (id) => document.getElementById(id);
 const root = document.querySelector('main.air-bench');
 
-const state = { request: null, response: null, seq: 0, timer: null, predictions: [] };
+const state = { request: null, response: null, predictions: [], tolerance: 10 };
 
 const editor = new BoreEditor({
   segmentBody: $('segment-rows'),
   holeBody: $('hole-rows'),
   onChange: () => changed(),
   onStructure: (holeOrder) => fingerings.holesChanged(editor.holes.length, holeOrder),
+});
+const mouthEditor = new MouthEditor({
+  root: $('mouth-editor'),
+  onChange: () => changed(),
+  // A mouth decides which extremum is a playing resonance: follow it (the server refuses a contradiction).
+  onKind: (end) => { $('input-end').value = end; },
 });
 const fingerings = new FingeringTable({
   body: $('fingering-rows'),
@@ -55,6 +66,11 @@ function buildRequest() {
     request[field] = Number.isFinite(v) ? v : null;
   }
   request.losses = $('losses').checked;
+  const { mouth, problems: mouthProblems } = mouthEditor.read();
+  problems.push(...mouthProblems);
+  if (mouth) request.mouth = mouth;
+  const breath = mouthEditor.readBreath();
+  if (breath) request.breath = breath;
   if (!segments.length) problems.push({ field: 'segments', message: t('emptyBore') });
   request.fingerings = fingerings.read();
   return { request, problems };
@@ -65,46 +81,44 @@ function buildRequest() {
 function changed() {
   drawCurrentBore();
   if (!$('auto-analyze').checked) return;
-  clearTimeout(state.timer);
-  state.timer = setTimeout(analyze, 350);
+  analyze();
 }
 
-async function analyze() {
-  clearTimeout(state.timer);
-  const { request, problems } = buildRequest();
-  drawCurrentBore();
-  const errorsList = $('form-errors');
-  if (problems.length) {
-    markProblems({ errors: problems, detail: t('fixFields') });
-    root.dataset.rejected = String(++state.seq);
-    return;
-  }
-  const seq = ++state.seq;
-  root.classList.add('busy');
-  $('analysis-summary').textContent = t('analyzing');
-  let res;
-  try {
-    res = await postJson(ANALYZE_URL, request);
-  } catch (e) {
-    res = { ok: false, problem: { detail: String(e) } };
-  }
-  if (seq !== state.seq) return; // a newer analysis is under way
-  root.classList.remove('busy');
-  if (!res.ok) {
-    markProblems(res.problem);
-    root.dataset.rejected = String(seq);
-    return;
-  }
-  clearFieldErrors(root);
-  errorsList.replaceChildren();
-  root.classList.remove('stale');
-  state.request = request;
-  state.response = res.data;
-  showResults();
-  root.dataset.analyzed = String(seq);
-  document.dispatchEvent(new CustomEvent('nodewright:air-analyzed', { detail: { request, response: res.data } }));
-  showFingerings(request, res.data);
-}
+/** The page kernel's request loop: one request in flight, the latest change next, none older shown. */
+const loop = createRequestLoop({
+  build: () => {
+    const built = buildRequest();
+    drawCurrentBore();
+    return built;
+  },
+  send: (request) => postJson(ANALYZE_URL, request),
+  event: 'nodewright:air-analyzed',
+  view: {
+    busy(on) {
+      root.classList.toggle('busy', on);
+      if (on) $('analysis-summary').textContent = t('analyzing');
+    },
+    answered(request, response, seq) {
+      clearFieldErrors(root);
+      $('form-errors').replaceChildren();
+      root.classList.remove('stale');
+      state.request = request;
+      state.response = response;
+      showResults();
+      root.dataset.analyzed = String(seq);
+      showFingerings(request, response);
+    },
+    refused(problem, request, seq, local) {
+      markProblems(local ? { ...problem, detail: t('fixFields') } : problem);
+      root.dataset.rejected = String(seq);
+    },
+    failed(error, seq) {
+      markProblems({ detail: t('failed', error?.message ?? String(error)) });
+      root.dataset.rejected = String(seq);
+    },
+  },
+});
+const analyze = () => loop.run();
 
 /** Inline errors on the offending rows and fields; the rows stay as the user entered them. */
 function markProblems(problem) {
@@ -117,8 +131,6 @@ function markProblems(problem) {
 }
 
 // ---- results ----------------------------------------------------------------------------
-
-const pick = (obj, ...names) => names.map((n) => obj?.[n]).find((v) => v !== undefined && v !== null);
 
 function showResults() {
   const { request, response } = state;
@@ -133,8 +145,35 @@ function showResults() {
   $('air-warnings').replaceChildren(...(response.warnings ?? []).map((w) => Object.assign(document.createElement('li'), { textContent: w })));
   drawImpedance($('impedance-chart'), response.impedance, res, { showPhase: $('show-phase').checked, inputClosed });
   fillResonanceTable();
+  fillMouthSummary();
   fillProfileChoices();
   showProfile();
+}
+
+/** The mouth's end correction and what it does, next to the resonance table. */
+function fillMouthSummary() {
+  const { response } = state;
+  const m = response?.mouth;
+  const unit = $('units').value;
+  const parts = [];
+  if (m) {
+    const dl = m.endCorrectionMm;
+    const first = m.resonances?.[0]?.cents;
+    parts.push(t('mouthSummary', m.kind, dl == null ? '—' : fmt(fromMm(dl, unit), unit === 'inch' ? 3 : 2),
+      unit === 'inch' ? t('unitInch') : t('unitMm'), first == null ? '—' : signedCents(first)));
+    if (m.helmholtzHz != null) parts.push(t('mouthHelmholtz', fmt(m.helmholtzHz, 0)));
+    if (m.missingApexVolumeMm3 != null) parts.push(t('mouthApex', fmt(m.missingApexVolumeMm3, 0)));
+  } else {
+    parts.push(t('mouthNone'));
+  }
+  const along = response?.air?.alongBore;
+  if (along?.length) {
+    const c = along.map((p) => p.speedOfSoundMps);
+    parts.push(` · ${t('breathSummary', fmt(Math.min(...c), 1), fmt(Math.max(...c), 1))}`);
+  }
+  const el = $('mouth-summary');
+  el.textContent = parts.join('');
+  el.dataset.endCorrectionMm = m?.endCorrectionMm == null ? '' : String(m.endCorrectionMm);
 }
 
 function seriesChoice() {
@@ -149,7 +188,7 @@ function fillResonanceTable() {
   $('series-note').textContent = series === 'odd' ? t('seriesOdd') : t('seriesHarmonic');
   if (!res.length) {
     const tr = document.createElement('tr');
-    const td = Object.assign(document.createElement('td'), { textContent: t('noResonances'), colSpan: 9 });
+    const td = Object.assign(document.createElement('td'), { textContent: t('noResonances'), colSpan: 10 });
     tr.append(td);
     body.replaceChildren(tr);
     return;
@@ -160,10 +199,11 @@ function fillResonanceTable() {
     : alignment(res.map((r) => r.frequencyHz), series);
   const unit = $('units').value;
   body.replaceChildren(...res.map((r, i) => {
-    const note = r.note ?? nearestNote(r.frequencyHz, a4());
+    const note = r.note;
     const cells = [
       r.n, fmt(r.frequencyHz, 2), r.q === null || r.q === undefined ? '—' : fmt(r.q, 1), note.name, signedCents(note.centsOff),
       fmt(align[i].ratio, 3), `${align[i].member}·f1`, signedCents(align[i].centsFromSeries),
+      r.mouthCents === null || r.mouthCents === undefined ? '—' : signedCents(r.mouthCents),
       (r.pressureNodesMm ?? []).map((x) => fmt(fromMm(x, unit), unit === 'inch' ? 2 : 1)).join(', '),
     ];
     const tr = document.createElement('tr');
@@ -172,7 +212,8 @@ function fillResonanceTable() {
       const td = document.createElement('td');
       td.textContent = String(c);
       if (k === 7) td.className = Math.abs(align[i].centsFromSeries) <= tolerance() ? 'aligned' : 'misaligned';
-      if (k === 8) td.className = 'nodes';
+      if (k === 8) td.className = 'mouth-cents';
+      if (k === 9) td.className = 'nodes';
       tr.append(td);
     });
     return tr;
@@ -189,17 +230,11 @@ function fillProfileChoices() {
   if (before && Number(before) < res.length) select.value = before;
 }
 
-/** The standing wave of a resonance, from whichever shape the server sends it in. */
+/** The standing wave of a resonance: the server's profile with the same n ({n, xMm, pressure, flow}). */
 function profileOf(i) {
   const r = state.response?.resonances?.[i];
-  if (!r) return null;
-  const p = pick(r, 'profile', 'standingWave') ?? (state.response?.profiles ?? []).find((q) => q.n === r.n);
-  if (!p) return null;
-  return {
-    positionMm: pick(p, 'positionMm', 'positionsMm', 'xMm') ?? [],
-    pressure: pick(p, 'pressure', 'pressureMagnitude', 'pressureAmplitude') ?? [],
-    flow: pick(p, 'flow', 'volumeFlow', 'flowMagnitude', 'flowAmplitude') ?? [],
-  };
+  const p = r && (state.response.profiles ?? []).find((q) => q.n === r.n);
+  return p ? { positionMm: p.xMm, pressure: p.pressure, flow: p.flow } : null;
 }
 
 function showProfile() {
@@ -235,15 +270,32 @@ function showFingerings(request, response) {
   root.dataset.fingeringsReady = root.dataset.analyzed;
 }
 
+/**
+ * The cents tolerance fingerings are judged by. A negative or unreadable one is refused on its
+ * field (never silently replaced): the last good tolerance stays in use until it is fixed.
+ */
 const tolerance = () => {
-  const v = parseNumber($('cents-tolerance').value);
-  return v >= 0 ? v : 10;
+  const input = $('cents-tolerance');
+  const v = parseNumber(input.value);
+  const ok = Number.isFinite(v) && v >= 0;
+  input.classList.toggle('invalid', !ok);
+  input.setAttribute('aria-invalid', String(!ok));
+  let slot = document.querySelector('[data-error-for="cents-tolerance"]');
+  if (!ok && !slot) {
+    slot = Object.assign(document.createElement('span'), { className: 'field-error' });
+    slot.dataset.errorFor = 'cents-tolerance';
+    input.insertAdjacentElement('afterend', slot);
+  }
+  if (slot) slot.textContent = ok ? '' : t('badTolerance', fmt(state.tolerance, 1));
+  if (ok) state.tolerance = v;
+  return state.tolerance;
 };
 
 // ---- drawing, presets, parameters -------------------------------------------------------
 
 function drawCurrentBore() {
   const { segments, holes } = editor.read();
+  const { mouth } = mouthEditor.read();
   const i = Number($('profile-resonance').value || 0);
   const current = state.response && !root.classList.contains('stale');
   drawBore($('bore-drawing'), segments, holes, {
@@ -253,6 +305,7 @@ function drawCurrentBore() {
     outputEnd: $('output-end').value,
     nodesMm: current ? state.response.resonances?.[i]?.pressureNodesMm ?? [] : [],
     onHoleClick: (k) => editor.toggleHole(k),
+    mouth,
   });
 }
 
@@ -270,6 +323,7 @@ function setParameters(p) {
   $('points').value = val(p.points, '2000');
   $('reference-a4').value = val(p.referenceA4Hz, '440');
   $('losses').checked = p.losses !== false;
+  mouthEditor.load(p.mouth ?? null, p.breath ?? null);
   fingerings.load(p.fingerings ?? []);
   fingerings.holesChanged(editor.holes.length, null);
   clearFieldErrors(root);
@@ -296,9 +350,10 @@ $('preset-select').addEventListener('change', loadPreset);
 $('units').addEventListener('change', () => {
   const unit = $('units').value;
   editor.setUnit(unit);
+  mouthEditor.setUnit(unit);
   drawCurrentBore();
   document.querySelectorAll('.unit-label').forEach((el) => { el.textContent = unit === 'inch' ? t('unitInch') : t('unitMm'); });
-  if (state.response) { fillResonanceTable(); showProfile(); }
+  if (state.response) { fillResonanceTable(); fillMouthSummary(); showProfile(); }
 });
 for (const id of ['input-end', 'output-end', 'temperature', 'humidity', 'f-min', 'f-max', 'points', 'losses']) {
   $(id).addEventListener(id === 'losses' || id.endsWith('-end') ? 'change' : 'input', changed);
@@ -314,17 +369,35 @@ $('cents-tolerance').addEventListener('input', () => {
 $('reference-a4').addEventListener('input', changed);
 window.addEventListener('resize', () => drawCurrentBore());
 
-setParameters(preset('six-hole-whistle'));
+/** A bore handed over by the bench templates' solver (unsaved), else the workshop whistle. */
+function openFirstBore() {
+  try {
+    const handed = handedOver(OPEN_AIR_COLUMN, { take: true });
+    if (handed?.request) {
+      setParameters(handed.request);
+      $('handover-note').textContent = t('fromTemplates');
+      return;
+    }
+  } catch (error) {
+    $('handover-note').textContent = t('handOverFailed', error.message);
+  }
+  setParameters(preset('six-hole-whistle'));
+}
 
-// Integration hooks: the design bar (save/load), and the listening and measuring panels.
+/** This bore to the bench templates (drilling template, hole solver), unsaved. */
+$('send-to-templates').addEventListener('click', () => {
+  handOver(BORE_FOR_TEMPLATES, { source: 'air-columns', request: getParameters() });
+  window.location.assign('/templates#from-bore-bench');
+});
+
+openFirstBore();
+
+// Integration hooks: the design bar (save/load), and the listening and measuring panels, each
+// handed the last analysis when it loads; a panel that fails to load says so in its place.
 import('/js/common/design-bar.js')
   .then((m) => m.mountDesignBar(document.getElementById('design-bar'), { kind: 'air-column', getParameters, setParameters }))
-  .catch(() => {});
-// A panel that loads after the first analysis is handed that analysis again.
-const replayLast = () => {
-  if (state.response) {
-    document.dispatchEvent(new CustomEvent('nodewright:air-analyzed', { detail: { request: state.request, response: state.response } }));
-  }
-};
-import('/js/listen-air.js').then(replayLast).catch(() => {});
-import('/js/measure-air.js').then(replayLast).catch(() => {});
+  .catch((error) => showPanelFailure('design-bar', 'design bar', error));
+loadPanels([
+  { url: '/js/listen-air.js', place: 'listen-panel', name: 'listen-air' },
+  { url: '/js/measure-air.js', place: 'measure-panel', name: 'measure-air' },
+], loop);

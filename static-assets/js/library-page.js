@@ -56,7 +56,19 @@ async function listView() {
     document.getElementById('library-empty').hidden = r.data.length > 0;
     for (const d of r.data) tbody.append(row(d));
     main.dataset.loaded = String(r.data.length);
+    showDemoRemoval();
   }
+
+  // The first start's demo designs (tag "demo") go in one click.
+  const removeDemo = document.getElementById('remove-demo');
+  async function showDemoRemoval() {
+    const demo = await getJson('/api/v1/designs?tag=demo&limit=1');
+    removeDemo.hidden = !(demo.ok && demo.data.length > 0);
+  }
+  removeDemo.addEventListener('click', async () => {
+    const r = await sendJson('DELETE', '/api/v1/designs/demo');
+    if (r.ok) { status(format(t['library.demoRemoved'], r.data.deleted)); refresh(); } else status(problemText(r), 'error');
+  });
 
   function row(d) {
     const tr = el('tr', { 'data-design-id': String(d.id), 'data-kind': d.kind });

@@ -3,7 +3,8 @@
 // τ = Q/(π f) (a resonator of quality factor Q loses amplitude as e^{−πft/Q}). "blown": the
 // harmonics of the lowest resonance, each ∝ |Z(h·f1)|/h, held for 1.5 s — resonances that line up
 // with harmonics strengthen them, as in a reed or lip-driven tone. Not a played note.
-import { loadPanel, texts, role, onPageEvent } from './measure/panel.js';
+import { showPanelFailure } from './common/panels.js';
+import { loadPanel, texts, role, showPlaying, onPageEvent } from './measure/panel.js';
 import { play, setVolume, stopAll, state as audioState } from './measure/voices.js';
 
 const state = { panel: null, t: null, analysis: null };
@@ -51,8 +52,9 @@ async function onPlay() {
   setVolume(Number(role(p, 'volume').value));
   const blown = role(p, 'mode').value === 'blown';
   const partials = blown ? blownPartials(state.analysis.response) : tappedPartials(state.analysis.response);
-  const count = await play(partials, blown ? 1.5 : 2.5, { sustain: blown });
-  role(p, 'status').textContent = '';
+  const seconds = blown ? 1.5 : 2.5;
+  const count = await play(partials, seconds, { sustain: blown });
+  showPlaying(state, role(p, 'status'), count, seconds);
   p.dataset.playing = String(count);
   p.dataset.audioState = audioState().contextState;
 }
@@ -72,4 +74,4 @@ onPageEvent('nodewright:air-analyzed', (e) => {
   if (e.detail?.response) state.analysis = e.detail;
 });
 
-init().catch((e) => console.warn('listening panel not loaded', e));
+init().catch((e) => showPanelFailure('listen-panel', 'listen-air', e));

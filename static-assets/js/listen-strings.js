@@ -1,7 +1,8 @@
 // Listening panel of the string bench: plays the designed string from its last analysis —
 // predicted partials (stiffness included) weighted by the pluck and the chosen pickups, each
 // decaying at its own rate — and compares two remembered versions ("A" and "B").
-import { loadPanel, texts, role, sig, onPageEvent } from './measure/panel.js';
+import { showPanelFailure } from './common/panels.js';
+import { loadPanel, texts, role, showPlaying, sig, onPageEvent } from './measure/panel.js';
 import { play, schedule, audio, setVolume, stopAll, state as audioState } from './measure/voices.js';
 
 const LN_1000 = Math.log(1000); // T60: the time to fall 60 dB, e^{−σ·T60} = 1/1000
@@ -72,7 +73,7 @@ async function onPlay() {
   setVolume(Number(role(state.panel, 'volume').value));
   const { partials, durationS } = currentPartials();
   const count = await play(partials, durationS);
-  status.textContent = '';
+  showPlaying(state, status, count, durationS);
   state.panel.dataset.playing = String(count);
   report();
 }
@@ -129,4 +130,4 @@ onPageEvent('nodewright:string-analyzed', (e) => {
   if (state.panel) fillSources();
 });
 
-init().catch((e) => console.warn('listening panel not loaded', e));
+init().catch((e) => showPanelFailure('listen-panel', 'listen-strings', e));

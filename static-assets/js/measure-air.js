@@ -1,7 +1,10 @@
 // Measurement panel of the bore bench: import a measured input-impedance curve (CSV of frequency,
 // magnitude, phase), draw it over the predicted curve in the impedance chart and list its peaks
 // beside the nearest predicted resonance.
-import { loadPanel, texts, role, sig, centsBetween, onPageEvent, sendUpload } from './measure/panel.js';
+import { loadPanel, texts, role, sig, onPageEvent, sendUpload } from './measure/panel.js';
+import { cents as centsBetween } from './common/notes.js';
+import { drawChart, setOverlay, clearOverlay } from './common/charts.js';
+import { showPanelFailure } from './common/panels.js';
 
 const MEASURED_COLOUR = '#b5651d';
 const state = { panel: null, t: null, analysis: null, measured: null };
@@ -26,9 +29,18 @@ async function onSubmit(e) {
   if (form.elements.phaseUnit.value) data.append('phaseUnit', form.elements.phaseUnit.value);
   data.append('inputEnd', state.analysis?.request?.inputEnd === 'open' ? 'open' : 'closed');
   const measured = await sendUpload(state, form, '/api/v1/measurements/impedance', data);
-  if (!measured) return;
+  if (!measured) { clearMeasured(); return; }
   state.measured = measured;
   showMeasured();
+}
+
+/** A refused upload leaves no earlier curve or table under its error. */
+function clearMeasured() {
+  state.measured = null;
+  role(state.panel, 'result').hidden = true;
+  role(state.panel, 'peaks').tBodies[0].replaceChildren();
+  role(state.panel, 'own-chart').hidden = true;
+  clearOverlay('impedance-chart', 'measured');
 }
 
 function showMeasured() {
@@ -51,6 +63,8 @@ function showMeasured() {
     return tr;
   });
   role(p, 'peaks').tBodies[0].replaceChildren(...rows);
+  // Nothing to compare with until a design is analysed on this page (none on the Measure page).
+  role(p, 'peaks').classList.toggle('without-design', !state.analysis);
   p.dataset.measured = String(m.resonances.length);
   drawMeasured();
 }
@@ -59,29 +73,24 @@ function drawMeasured() {
   const m = state.measured;
   if (!m) return;
   const scaleOn = role(state.panel, 'scale').checked;
-  const pageCanvas = document.getElementById('impedance-chart');
-  const pageChart = pageCanvas && typeof Chart !== 'undefined' ? Chart.getChart(pageCanvas) : null;
-  const k = scaleOn && pageChart ? scaleToPrediction(m.impedance.magnitude, state.analysis?.response?.impedance?.magnitude) : 1;
+  const onBench = document.getElementById('impedance-chart') !== null;
+  const k = scaleOn && onBench ? scaleToPrediction(m.impedance.magnitude, state.analysis?.response?.impedance?.magnitude) : 1;
   const points = m.impedance.frequencyHz.map((x, i) => ({ x, y: m.impedance.magnitude[i] * k }));
   const dataset = { kind: 'measured', label: state.t('chartLabel'), data: points, yAxisID: 'y', borderColor: MEASURED_COLOUR,
     borderWidth: 1.2, borderDash: [5, 3], pointRadius: 0, tension: 0 };
-  if (pageChart) {
-    pageChart.data.datasets = pageChart.data.datasets.filter((ds) => ds.kind !== 'measured');
-    pageChart.data.datasets.push(dataset);
-    pageChart.update('none');
+  if (onBench) {
+    // The bench owns the impedance chart; the measured curve is an overlay it puts back after each redraw.
+    setOverlay('impedance-chart', 'measured', () => [dataset]);
     return;
   }
   const box = role(state.panel, 'own-chart');
   box.hidden = false;
-  const canvas = box.querySelector('canvas');
-  const old = Chart.getChart(canvas);
-  if (old) old.destroy();
-  new Chart(canvas, {
+  drawChart(box.querySelector('canvas'), {
     type: 'line',
     data: { datasets: [dataset] },
     options: { animation: false, parsing: false, maintainAspectRatio: false,
       scales: { x: { type: 'linear', title: { display: true, text: 'Hz' } }, y: { type: 'logarithmic' } } },
-  });
+  }, { replace: true });
 }
 
 async function init() {
@@ -98,8 +107,8 @@ async function init() {
 onPageEvent('nodewright:air-analyzed', (e) => {
   if (!e.detail?.response) return;
   state.analysis = e.detail;
-  // The page replaces its chart after each analysis (and may redraw it for a fingering): overlay after it.
-  if (state.measured) setTimeout(showMeasured, 0);
+  // The table compares with the new prediction; the chart overlay follows the bench's redraws by itself.
+  if (state.measured) showMeasured();
 });
 
-init().catch((e) => console.warn('impedance panel not loaded', e));
+init().catch((e) => showPanelFailure(document.getElementById('measure-air-panel') ? 'measure-air-panel' : 'measure-panel', 'measure-air', e));

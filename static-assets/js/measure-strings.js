@@ -1,7 +1,11 @@
 // Measurement panel of the string bench: upload a recording (WAV) or a table of partials (CSV),
 // show the measured partials against the predicted ones in the partials chart and a table of
 // residuals, and apply the fit back to the design as an effective linear density and modulus.
-import { loadPanel, texts, role, sig, centsBetween, onPageEvent, sendUpload } from './measure/panel.js';
+import { loadPanel, texts, role, sig, onPageEvent, sendUpload } from './measure/panel.js';
+import { cents as centsBetween } from './common/notes.js';
+import { drawChart, setOverlay, clearOverlay } from './common/charts.js';
+import { showPanelFailure } from './common/panels.js';
+import { APPLY_STRING_PARAMETERS, handOver } from './common/handover.js';
 
 const MEASURED_COLOUR = '#b5651d';
 const state = { panel: null, t: null, analysis: null, measured: null };
@@ -32,9 +36,18 @@ async function onSubmit(e) {
   if (form.elements.expectedF1Hz.value !== '') data.append('expectedF1Hz', form.elements.expectedF1Hz.value);
   if (form.elements.maxPartials.value !== '') data.append('maxPartials', form.elements.maxPartials.value);
   const measured = await sendUpload(state, form, isCsv(file) ? '/api/v1/measurements/partials-csv' : '/api/v1/measurements/partials', data);
-  if (!measured) return;
+  if (!measured) { clearMeasured(); return; }
   state.measured = measured;
   showMeasured();
+}
+
+/** A refused upload leaves no earlier fit, table or points under its error. */
+function clearMeasured() {
+  state.measured = null;
+  role(state.panel, 'result').hidden = true;
+  role(state.panel, 'peaks').tBodies[0].replaceChildren();
+  role(state.panel, 'own-chart').hidden = true;
+  clearOverlay('partials-chart', 'measured');
 }
 
 function showMeasured() {
@@ -56,6 +69,8 @@ function showMeasured() {
     return tr;
   });
   role(p, 'peaks').tBodies[0].replaceChildren(...rows);
+  // Nothing to compare with until a design is analysed on this page (none on the Measure page).
+  role(p, 'peaks').classList.toggle('without-design', !state.analysis);
   p.dataset.measured = String(m.peaks.length);
   fillApplyInputs(false);
   drawMeasured();
@@ -68,37 +83,32 @@ function drawMeasured() {
   const m = state.measured;
   if (!m) return;
   const points = measuredCents(m);
-  const pageCanvas = document.getElementById('partials-chart');
-  const pageChart = pageCanvas && typeof Chart !== 'undefined' ? Chart.getChart(pageCanvas) : null;
-  if (pageChart) {
-    const data = pageChart.data;
-    const maxN = Math.max(...points.map((x) => x.n), ...(data.labels ?? []).map(Number));
-    if (!data.labels || data.labels.length < maxN) {
-      data.labels = Array.from({ length: maxN }, (_, i) => String(i + 1));
-    }
-    const byN = new Map(points.map((x) => [x.n, x.cents]));
-    data.datasets = data.datasets.filter((ds) => ds.kind !== 'measured');
-    data.datasets.push({
-      type: 'line', kind: 'measured', label: state.t('chartLabel'), showLine: false, pointRadius: 5,
-      pointStyle: 'rectRot', borderColor: MEASURED_COLOUR, backgroundColor: MEASURED_COLOUR,
-      data: data.labels.map((l) => (byN.has(Number(l)) ? byN.get(Number(l)) : null)),
+  if (document.getElementById('partials-chart')) {
+    // The bench owns its partials chart; the measured points ride on it as an overlay, put back
+    // after each of its redraws.
+    setOverlay('partials-chart', 'measured', (chart) => {
+      const data = chart.data;
+      const maxN = Math.max(...points.map((x) => x.n), ...(data.labels ?? []).map(Number));
+      if (!data.labels || data.labels.length < maxN) data.labels = Array.from({ length: maxN }, (_, i) => String(i + 1));
+      const byN = new Map(points.map((x) => [x.n, x.cents]));
+      return [{
+        type: 'line', kind: 'measured', label: state.t('chartLabel'), showLine: false, pointRadius: 5,
+        pointStyle: 'rectRot', borderColor: MEASURED_COLOUR, backgroundColor: MEASURED_COLOUR,
+        data: data.labels.map((l) => (byN.has(Number(l)) ? byN.get(Number(l)) : null)),
+      }];
     });
-    pageChart.update('none');
     return;
   }
   // No design chart on this page (the Measure page): draw our own.
   const box = role(state.panel, 'own-chart');
   box.hidden = false;
-  const canvas = box.querySelector('canvas');
-  const old = Chart.getChart(canvas);
-  if (old) old.destroy();
-  new Chart(canvas, {
+  drawChart(box.querySelector('canvas'), {
     type: 'scatter',
     data: { datasets: [{ kind: 'measured', label: state.t('chartLabel'), data: points.map((x) => ({ x: x.n, y: x.cents })),
       pointRadius: 5, pointStyle: 'rectRot', borderColor: MEASURED_COLOUR, backgroundColor: MEASURED_COLOUR }] },
     options: { animation: false, maintainAspectRatio: false,
       scales: { x: { title: { display: true, text: 'n' }, ticks: { stepSize: 1 } }, y: { title: { display: true, text: state.t('chartAxis') } } } },
-  });
+  }, { replace: true });
 }
 
 /** Tension, length and core diameter from the last analysis of the design, unless typed in. */
@@ -135,10 +145,22 @@ function preview() {
   return e;
 }
 
+const onBench = () => document.getElementById('string-form') !== null;
+
 function onApply() {
   const p = state.panel;
   const e = preview();
   if (!e) { role(p, 'status').textContent = state.t('missing'); return; }
+  if (!onBench()) {
+    // No design on this page: open the string bench with the fit and the values it was made with.
+    const { T, L, d } = applyInputs();
+    const handed = { lengthMm: L, diameterMm: d, tensionN: T, ...e };
+    handOver(APPLY_STRING_PARAMETERS, handed);
+    role(p, 'status').textContent = state.t('opening', sig(e.linearDensityKgPerM * 1000, 6), sig(e.youngsModulusPa / 1e9, 5));
+    p.dataset.applied = JSON.stringify(handed);
+    window.location.assign('/strings#from-measure');
+    return;
+  }
   document.dispatchEvent(new CustomEvent('nodewright:apply-string-parameters', { detail: { ...e } }));
   role(p, 'status').textContent = state.t('done', sig(e.linearDensityKgPerM * 1000, 6), sig(e.youngsModulusPa / 1e9, 5));
   p.dataset.applied = JSON.stringify(e);
@@ -155,6 +177,10 @@ async function init() {
   for (const name of ['tension', 'length', 'diameter']) {
     role(panel, name).addEventListener('input', (e) => { e.target.dataset.auto = 'false'; preview(); });
   }
+  if (!onBench()) {
+    role(panel, 'apply-legend').textContent = state.t('openLegend');
+    role(panel, 'apply').textContent = state.t('openButton');
+  }
   fillApplyInputs(false);
   panel.dataset.ready = 'true';
 }
@@ -164,7 +190,7 @@ onPageEvent('nodewright:string-analyzed', (e) => {
   state.analysis = e.detail;
   if (!state.panel) return;
   fillApplyInputs(false);
-  if (state.measured) showMeasured(); // the page redrew its chart: put the measured points back
+  if (state.measured) showMeasured(); // the design changed: compare the measured partials with it again
 });
 
-init().catch((e) => console.warn('measurement panel not loaded', e));
+init().catch((e) => showPanelFailure('measure-panel', 'measure-strings', e));

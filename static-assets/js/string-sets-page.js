@@ -1,17 +1,22 @@
 // Set planner: the tension each string of a set needs for its pitch, its stress, and the total
 // load on the neck. Requests go to POST /api/v1/string-sets/analyze in mm and N.
-import { postJson, showFieldErrors, clearFieldErrors } from './common/api.js';
-import { readNumber, readPitch, unitInputs, loadMaterials, defaultWrap } from './common/string-form.js';
+import { postJson } from './common/api.js';
+import { problemInUserUnits } from './common/units.js';
+import { readNumber, readPitch, unitInputs, loadMaterials, defaultWrap, localChecks } from './common/string-form.js';
 import { drawChart, baseOptions } from './common/charts.js';
+import { createRequestLoop, formView } from './common/request-loop.js';
+import { pageText } from './common/text.js';
+import { showPanelFailure } from './common/panels.js';
 
 const form = document.getElementById('set-form');
 const $ = (id) => document.getElementById(id);
-const TEXT = Object.fromEntries([...document.querySelectorAll('#page-text [data-k]')].map((el) => [el.dataset.k, el.textContent]));
+const t = pageText('#page-text');
 const io = unitInputs();
-const state = { seq: 0, materials: null, last: null };
+const state = { materials: null };
 
-const WARN_RATIO = 0.75;     // the core warns above 75 % of the tensile strength...
-const STRONG_RATIO = 0.9;    // ...and strongly above 90 %
+/** Bar colour and table marking by the server's stressLevel word. */
+const LEVEL_COLOUR = { danger: '#a3262a', warning: '#a86400' };
+const LEVEL_CLASS = { danger: 'strong', warning: 'warn' };
 
 // Harrowgate Lane Workshop's steel-string parlour guitar, a light set of our own devising.
 const HOUSE_SET = [
@@ -78,7 +83,7 @@ function addRow(spec) {
   const remove = document.createElement('button');
   remove.type = 'button';
   remove.className = 'secondary remove-string';
-  remove.textContent = TEXT.remove;
+  remove.textContent = t('remove');
   remove.addEventListener('click', () => { tr.remove(); renumber(); analyze(); });
   cell(remove);
   $('set-rows').append(tr);
@@ -102,24 +107,31 @@ function renumber() {
   io.showLabels();
 }
 
+/** The set request for the rows as they are now, and what the page can already refuse. */
 function buildRequest() {
-  return {
-    lengthMm: io.readLength($('setLengthMm')),
-    referenceA4Hz: readNumber($('setA4')),
+  const c = localChecks();
+  const length = (input) => c.check(input, io.readLength(input), t('notNumber'));
+  const request = {
+    lengthMm: length($('setLengthMm')),
+    referenceA4Hz: c.check($('setA4'), readNumber($('setA4')), t('notNumber')),
     strings: rows().map((tr) => {
       const wound = tr.querySelector('.wound').checked;
-      const target = tr.querySelector('.target').value.trim();
+      const target = tr.querySelector('.target');
+      const text = target.value.trim();
+      const hz = c.check(target, readPitch(target, $('setA4')), t('notANote'));
+      if (text === '') c.add(target.dataset.field, t('pitchNeeded'));
       return {
-        label: target === '' ? null : target,
-        targetHz: readPitch(tr.querySelector('.target'), $('setA4')),
+        label: text === '' ? null : text,
+        targetHz: hz,
         material: tr.querySelector('.material').value,
-        diameterMm: io.readLength(tr.querySelector('.gauge')),
+        diameterMm: length(tr.querySelector('.gauge')),
         wrapMaterial: wound ? tr.querySelector('.wrap-material').value : null,
-        wrapDiameterMm: wound ? io.readLength(tr.querySelector('.wrap-gauge')) : null,
-        lengthMm: io.readLength(tr.querySelector('.own-length')),
+        wrapDiameterMm: wound ? length(tr.querySelector('.wrap-gauge')) : null,
+        lengthMm: length(tr.querySelector('.own-length')),
       };
     }),
   };
+  return { request, problems: c.problems };
 }
 
 function fillForm(p) {
@@ -132,30 +144,19 @@ function fillForm(p) {
   }
 }
 
-function strengthOf(request, index, result) {
-  if (result.tensileStrengthPa) return result.tensileStrengthPa;
-  const m = (state.materials || []).find((x) => x.id === request.strings[index].material);
-  return m ? m.tensileStrengthPa : null;
-}
-
 function render(request, response) {
-  const ratios = response.strings.map((s, i) => {
-    if (typeof s.stressFraction === 'number') return s.stressFraction;
-    const ts = strengthOf(request, i, s);
-    return ts ? s.stressPa / ts : null;
-  });
   const tensions = response.strings.map((s) => io.forceOut(s.tensionN));
-  const colours = ratios.map((r) => (r !== null && r > STRONG_RATIO ? '#a3262a' : r !== null && r > WARN_RATIO ? '#a86400' : '#2b5d8a'));
+  const colours = response.strings.map((s) => LEVEL_COLOUR[s.stressLevel] ?? '#2b5d8a');
   const digits = io.units.force === 'N' ? 1 : 2;
   $('set-total').textContent = `${io.forceOut(response.totalTensionN).toFixed(digits)} ${io.units.force}`;
   const options = baseOptions({ legend: false });
-  options.scales.x = { type: 'category', title: { display: true, text: TEXT.string } };
-  options.scales.y = { beginAtZero: true, title: { display: true, text: `${TEXT.tension} (${io.units.force})` } };
+  options.scales.x = { type: 'category', title: { display: true, text: t('string') } };
+  options.scales.y = { beginAtZero: true, title: { display: true, text: `${t('tension')} (${io.units.force})` } };
   options.plugins.tooltip = { callbacks: { label: (ctx) => `${ctx.parsed.y.toFixed(digits)} ${io.units.force}` } };
   const labels = request.strings.map((s, i) => `${i + 1}: ${rows()[i]?.querySelector('.target').value || ''}`);
   drawChart($('set-tension-chart'), {
     type: 'bar',
-    data: { labels, datasets: [{ kind: 'tension', label: TEXT.tension, data: tensions, totalN: response.totalTensionN, backgroundColor: colours }] },
+    data: { labels, datasets: [{ kind: 'tension', label: t('tension'), data: tensions, totalN: response.totalTensionN, backgroundColor: colours }] },
     options,
   });
   const setWarnings = $('set-warnings');
@@ -168,61 +169,55 @@ function render(request, response) {
   tbody.replaceChildren();
   response.strings.forEach((s, i) => {
     const tr = document.createElement('tr');
-    const ratio = ratios[i];
+    const ratio = s.stressFraction;
     const cells = [
       String(i + 1),
       `${rows()[i]?.querySelector('.target').value || ''} (${typeof request.strings[i].targetHz === 'number' ? request.strings[i].targetHz.toFixed(2) : ''} Hz)`,
       tensions[i].toFixed(digits),
       (s.linearDensityKgPerM * 1000).toFixed(4),
       (s.stressPa / 1e6).toFixed(0),
-      ratio === null ? '' : `${(100 * ratio).toFixed(0)} %`,
-      (s.warnings || []).length ? s.warnings.join(' ') : TEXT.none,
+      Number.isFinite(ratio) ? `${(100 * ratio).toFixed(0)} %` : '',
+      (s.warnings || []).length ? s.warnings.join(' ') : t('none'),
     ];
     cells.forEach((v, k) => {
       const td = document.createElement('td');
       td.textContent = v;
-      if (k >= 5 && ratio !== null && ratio > WARN_RATIO) td.className = ratio > STRONG_RATIO ? 'strong' : 'warn';
+      if (k >= 5 && LEVEL_CLASS[s.stressLevel]) td.className = LEVEL_CLASS[s.stressLevel];
       tr.append(td);
     });
     tbody.append(tr);
   });
 }
 
-async function analyze() {
-  const request = buildRequest();
-  const mine = ++state.seq;
-  let result;
-  try {
-    result = await postJson('/api/v1/string-sets/analyze', request);
-  } catch (e) {
-    if (mine === state.seq) $('form-problem').textContent = TEXT.serverDown;
-    return;
-  }
-  if (mine !== state.seq) return;
-  if (!result.ok) {
-    const unclaimed = showFieldErrors(form, result.problem);
-    $('form-problem').textContent = `${TEXT.fixFields}${unclaimed.length ? ` ${unclaimed.join('; ')}` : ''}`;
-    return;
-  }
-  clearFieldErrors(form);
-  $('form-problem').textContent = '';
-  state.last = { request, response: result.data };
-  render(request, result.data);
-  form.dataset.analyses = String(Number(form.dataset.analyses || 0) + 1);   // lets tests and neighbours see a fresh answer
-}
+const loop = createRequestLoop({
+  build: buildRequest,
+  send: (request) => postJson('/api/v1/string-sets/analyze', request),
+  event: 'nodewright:string-set-analyzed',
+  view: formView({
+    form, message: $('form-problem'),
+    render: (request, response) => {
+      render(request, response);
+      form.dataset.analyses = String(Number(form.dataset.analyses || 0) + 1);   // lets tests and neighbours see a fresh answer
+    },
+    text: { fix: t('fixFields'), down: t('serverDown') },
+    prepare: (problem) => problemInUserUnits(problem, io.units),
+  }),
+});
+const analyze = () => loop.run();
 
 async function start() {
   state.materials = await loadMaterials([]);
-  if (!state.materials) $('form-problem').textContent = TEXT.materialsFailed;
+  if (!state.materials) $('form-problem').textContent = t('materialsFailed');
   const wrap = defaultWrap(state.materials);
   HOUSE_SET.forEach((s) => addRow(s.wrapDiameterMm ? { ...s, wrapMaterial: wrap } : s));
   io.showLabels();
+  io.remember(form, 'string-sets');
   form.addEventListener('submit', (e) => { e.preventDefault(); analyze(); });
   form.addEventListener('change', (e) => {
     const t = e.target;
     if (t.id === 'length-unit' || t.id === 'force-unit') {
       io.switchUnit(form, t.id === 'length-unit' ? 'length' : 'force', t.value);
-      if (state.last) render(state.last.request, state.last.response);
+      if (loop.last) render(loop.last.request, loop.last.response);
       return;
     }
     if (t.classList.contains('wound')) renumber();
@@ -232,11 +227,15 @@ async function start() {
     addRow({ target: 'E4', material: (state.materials || [])[0]?.id || 'plain-steel', diameterMm: 0.25 });
     analyze();
   });
-  const getParameters = () => buildRequest();
+  const getParameters = () => buildRequest().request;
   const setParameters = (p) => { fillForm(p || {}); return analyze(); };
   import('/js/common/design-bar.js')
-    .then((m) => m.mountDesignBar(document.getElementById('design-bar'), { kind: 'string-set', getParameters, setParameters }))
-    .catch(() => {});
+    .then((m) => m.mountDesignBar(document.getElementById('design-bar'), {
+      kind: 'string-set', getParameters, setParameters,
+      getView: () => ({ units: { ...io.units } }),
+      setView: (view) => { io.showUnits(form, view.units); if (loop.last) render(loop.last.request, loop.last.response); },
+    }))
+    .catch((error) => showPanelFailure('design-bar', t('designBarName'), error));
   await analyze();
 }
 

@@ -2,6 +2,7 @@
 // resonances marked) and the standing wave along the bore (pressure, flow, node markers, holes).
 // Chart.js and its annotation plugin are globals loaded by the layout from their WebJars.
 import { t } from './text.js';
+import { drawChart } from '../common/charts.js';
 
 const INK = '#1f2a36';
 const ACCENT = '#2b5d8a';
@@ -11,11 +12,8 @@ const NODE = '#a3262a';
 
 const hasAnnotations = () => typeof Chart !== 'undefined' && Chart.registry?.plugins?.get?.('annotation');
 
-function replaceChart(canvas, config) {
-  const old = Chart.getChart(canvas);
-  if (old) old.destroy();
-  return new Chart(canvas, config);
-}
+/** Draws anew through the shared helper, which puts other panels' overlays back (a measured curve). */
+const replaceChart = (canvas, config) => drawChart(canvas, config, { replace: true });
 
 /** Log-axis ticks at whole decades only, written plainly (1000, 10, 0.01). */
 function decade(value) {
@@ -58,7 +56,8 @@ export function drawImpedance(canvas, impedance, resonances, { showPhase, inputC
         phase: { position: 'right', display: showPhase, min: -Math.PI / 2 - 0.1, max: Math.PI / 2 + 0.1,
           title: { display: true, text: t('phase') }, grid: { drawOnChartArea: false } },
       },
-      plugins: { legend: { labels: { filter: (item) => showPhase || item.datasetIndex === 0 } }, annotation: { annotations } },
+      // The phase has a legend entry only while it is shown; overlays (a measured curve) always have one.
+      plugins: { legend: { labels: { filter: (item) => showPhase || item.datasetIndex !== 1 } }, annotation: { annotations } },
     },
   });
 }

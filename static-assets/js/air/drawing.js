@@ -2,6 +2,7 @@
 // wall with a marker above (filled = closed, hollow ring = open), pressure nodes of the chosen
 // resonance as ticks on the axis, and a scale bar. Diameters may be widened for legibility.
 import { t } from './text.js';
+import { mouthExtentMm } from './mouth.js';
 
 const NS = 'http://www.w3.org/2000/svg';
 
@@ -33,8 +34,10 @@ export function drawBore(container, segments, holes, options = {}) {
     return;
   }
   const total = good.reduce((s, g) => s + g.lengthMm, 0);
+  const mouth = options.mouth ?? null;
+  const lead = Math.max(0, mouthExtentMm(mouth) || 0); // the mouth's extent upstream of x = 0, mm
   const margin = 44;
-  const scale = (width - 2 * margin) / total; // px per mm, the same along and across the bore
+  const scale = (width - 2 * margin) / (total + lead); // px per mm, the same along and across the bore
   const maxD = Math.max(...good.flatMap((g) => [g.inputDiameterMm, g.outputDiameterMm]));
   const goodHoles = holes.map((h, i) => ({ ...h, index: i }))
     .filter((h) => [h.positionMm, h.diameterMm, h.chimneyMm].every((v) => Number.isFinite(v) && v >= 0));
@@ -46,7 +49,7 @@ export function drawBore(container, segments, holes, options = {}) {
   const height = axisY + halfMax + 48;
   const svg = el('svg', { width, height, viewBox: `0 0 ${width} ${height}`, role: 'img', class: 'bore-svg',
     'aria-label': t('drawingLabel', good.length, goodHoles.length, Number(total.toFixed(2))) });
-  const x = (mm) => margin + mm * scale;
+  const x = (mm) => margin + (mm + lead) * scale;
   const r = (d) => (d / 2) * scale * widen;
 
   // Walls: one polygon over all segments (steps in diameter show as vertical edges).
@@ -75,6 +78,8 @@ export function drawBore(container, segments, holes, options = {}) {
   endMark(total, good[good.length - 1].outputDiameterMm, options.outputEnd === 'closed');
   svg.append(el('text', { x: x(0), y: axisY + halfMax + 16, class: 'bore-label' }, t('inputEnd')));
   svg.append(el('text', { x: x(total), y: axisY + halfMax + 16, class: 'bore-label end' }, t('outputEnd')));
+
+  if (mouth) drawMouth(svg, mouth, good[0].inputDiameterMm, { x, r, axisY, scale, widen });
 
   // Pressure nodes of the chosen resonance.
   for (const n of options.nodesMm ?? []) {
@@ -121,4 +126,44 @@ export function drawBore(container, segments, holes, options = {}) {
   svg.append(el('text', { x: x(total), y: barY + 4, class: 'bore-label end' },
     `${Number((total / perUnit).toFixed(inch ? 3 : 2))} ${unitText}${widen > 1 ? ` · ⌀ × ${widen}` : ''}`));
   container.append(svg);
+}
+
+/**
+ * The player's end at x = 0, to the same scale: the headspace up to its stopper and the opening
+ * in the top wall (embouchure, window), a reed's wedge, or a cup and throat ahead of the bore.
+ */
+function drawMouth(svg, m, boreD, { x, r, axisY, scale, widen }) {
+  const ok = (v) => Number.isFinite(v) && v >= 0;
+  const g = el('g', { class: `bore-mouth ${m.kind}`, 'data-mouth': m.kind });
+  g.append(el('title', {}, m.kind));
+  if (m.kind === 'embouchure' || m.kind === 'window') {
+    const h = ok(m.headspaceMm) ? m.headspaceMm : 0;
+    if (h > 0) {
+      g.append(el('rect', { x: x(-h), y: axisY - r(boreD), width: h * scale, height: 2 * r(boreD), class: 'bore-air headspace' }));
+      g.append(el('line', { x1: x(-h), y1: axisY - r(boreD) - 2, x2: x(-h), y2: axisY + r(boreD) + 2, class: 'bore-end closed stopper' }));
+    }
+    const along = m.kind === 'window' ? m.windowLengthMm : m.holeLengthMm;
+    const wall = ok(m.wallMm) ? m.wallMm : 0;
+    if (ok(along)) {
+      const w = Math.max(2, along * scale);
+      const top = axisY - r(boreD);
+      g.append(el('rect', { x: x(-along / 2), y: top - Math.max(2, wall * scale * widen), width: w,
+        height: Math.max(2, wall * scale * widen) + 1, class: 'mouth-opening' }));
+    }
+  } else if (m.kind === 'reed') {
+    const half = r(boreD);
+    g.append(el('polygon', { points: `${x(-6)},${axisY - 1} ${x(0)},${axisY - half} ${x(0)},${axisY + half} ${x(-6)},${axisY + 1}`, class: 'mouth-reed' }));
+  } else if (m.kind === 'cup') {
+    const lt = ok(m.throatLengthMm) ? m.throatLengthMm : 0;
+    const rt = ok(m.throatDiameterMm) ? r(m.throatDiameterMm) : 1;
+    g.append(el('rect', { x: x(-lt), y: axisY - rt, width: lt * scale, height: 2 * rt, class: 'bore-air throat' }));
+    const rc = Math.cbrt((3 * (m.cupVolumeMm3 ?? 0)) / (2 * Math.PI));
+    if (Number.isFinite(rc) && rc > 0) {
+      const cx = x(-lt);
+      const ry = Math.min(rc * scale * widen, axisY - 4);
+      const rx = rc * scale;
+      g.append(el('path', { d: `M ${cx} ${axisY - ry} A ${rx} ${ry} 0 0 0 ${cx} ${axisY + ry} Z`, class: 'bore-air cup' }));
+    }
+  }
+  svg.append(g);
 }

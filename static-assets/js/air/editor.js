@@ -1,18 +1,14 @@
 // The bore editor: rows of segments and tone holes kept in a small model and drawn as table rows.
 // Lengths are held in millimetres (what the API speaks) and shown in the chosen unit; what the
 // user typed is kept as typed, even when it is not a number, so a bad row is never lost.
-import { fromMm, toMm } from '../common/units.js';
+import { fromMm, toMm, parseNumber } from '../common/units.js';
 import { t } from './text.js';
 
 export const SEGMENT_FIELDS = ['lengthMm', 'inputDiameterMm', 'outputDiameterMm'];
 export const HOLE_FIELDS = ['positionMm', 'diameterMm', 'chimneyMm'];
 
-/** Parses what the user typed (a comma also counts as the decimal sign); NaN when not a number. */
-export function parseNumber(text) {
-  const s = String(text ?? '').trim().replace(',', '.');
-  if (s === '' || !/^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/.test(s)) return NaN;
-  return Number(s);
-}
+/** A typed number: the one rule of every page (common/units.js; a decimal comma is a point). */
+export { parseNumber };
 
 /** A length for display in a unit, without float noise. */
 export function showLength(mm, unit) {

@@ -2,7 +2,7 @@
 // has them, shown numbered from 1 nearest the input end), names a target (a note such as D5, or
 // hertz) and the register it should sound in. The server predicts each fingering's pitch; each row
 // then shows it and its cents from the target against a tolerance.
-import { fmt } from '../common/units.js';
+import { fmt, parseNumber } from '../common/units.js';
 import { cents, nearestNote, targetHz } from './tuning.js';
 import { t } from './text.js';
 
@@ -172,9 +172,10 @@ export class FingeringTable {
   }
 }
 
-/** A target that reads as a plain positive number of hertz, else null. */
+/** A target that reads as a positive number of hertz ("392", "392,0", "392 Hz"), else null. */
 function parseHz(text) {
-  return /^[+]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/.test(text) ? Number(text) : null;
+  const v = parseNumber(String(text).replace(/\s*hz$/i, ''));
+  return Number.isFinite(v) && v > 0 ? v : null;
 }
 
 /** The request field a target goes to, so that the server's message lands on this input. */

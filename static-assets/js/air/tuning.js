@@ -1,40 +1,13 @@
-// Notes, cents and register alignment, in the page (the server may send its own; we use those
-// when present). 12-tone equal temperament on A4 (common practice: A4 = 440 Hz, ISO 16:1975).
+// Register alignment of a bore's resonances, in the page. Notes and cents come from the one note
+// module (common/notes.js); the server sends its own alignment, used when present.
+import { cents, pitchHz } from '../common/notes.js';
 
-const NAMES = ['C', 'C#', 'D', 'D#', 'E', 'F', 'F#', 'G', 'G#', 'A', 'A#', 'B'];
-const LETTER = { C: 0, D: 2, E: 4, F: 5, G: 7, A: 9, B: 11 };
+export { cents, nearestNote, noteHz } from '../common/notes.js';
 
-/** Cents from b to a: 1200·log2(a/b) (definition of the cent, Ellis 1885). */
-export const cents = (a, b) => 1200 * Math.log2(a / b);
-
-/** Nearest equal-tempered note: {name, centsOff, midi}. */
-export function nearestNote(hz, a4 = 440) {
-  const midi = 69 + 12 * Math.log2(hz / a4);
-  const m = Math.round(midi);
-  const name = NAMES[((m % 12) + 12) % 12] + (Math.floor(m / 12) - 1);
-  return { name, centsOff: (midi - m) * 100, midi: m };
-}
-
-/** Frequency of a note name such as "D5", "F#4", "Bb3" (MIDI 69 = A4), or null. */
-export function noteHz(name, a4 = 440) {
-  const m = /^\s*([A-Ga-g])([#♯b♭]?)(-?\d+)\s*$/.exec(name ?? '');
-  if (!m) return null;
-  let semis = LETTER[m[1].toUpperCase()];
-  if (m[2] === '#' || m[2] === '♯') semis += 1;
-  if (m[2] === 'b' || m[2] === '♭') semis -= 1;
-  const midi = 12 * (Number(m[3]) + 1) + semis;
-  return a4 * 2 ** ((midi - 69) / 12);
-}
-
-/** A target given as a note name or a number of hertz, as Hz (null when it is neither). */
+/** A target given as a note name or a number of hertz, as Hz (null when it is neither, or not positive). */
 export function targetHz(text, a4 = 440) {
-  const s = String(text ?? '').trim();
-  if (s === '') return null;
-  if (/^[+]?\d+(\.\d+)?$/.test(s)) {
-    const v = Number(s);
-    return v > 0 ? v : null;
-  }
-  return noteHz(s, a4);
+  const hz = pitchHz(text, a4);
+  return hz !== null && hz > 0 ? hz : null;
 }
 
 /**

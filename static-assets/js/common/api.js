@@ -1,7 +1,7 @@
 // Small fetch helpers shared by every page: JSON in and out, CSRF header when the server
 // asks for one (LAN mode), problem documents turned into per-field messages.
 
-function csrfHeaders() {
+export function csrfHeaders() {
   const token = document.querySelector('meta[name="_csrf"]');
   const header = document.querySelector('meta[name="_csrf_header"]');
   return token && header ? { [header.content]: token.content } : {};

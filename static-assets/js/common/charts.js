@@ -9,17 +9,73 @@ export function colour(i) {
   return PALETTE[((i % PALETTE.length) + PALETTE.length) % PALETTE.length];
 }
 
-/** Draws a chart on a canvas, or updates the one already there in place (no flicker, no animation). */
-export function drawChart(canvas, config) {
+// Overlays: a panel adds its datasets to a chart another module draws (measured partials on the
+// partials chart, a measured impedance curve) by name, never by reaching into the chart. The owner
+// redraws with drawChart; the overlays registered for that canvas are put back after each drawing.
+const overlays = new Map();   // canvas id → Map(overlay name → (chart) => datasets)
+
+function applyOverlays(chart) {
+  const mine = overlays.get(chart.canvas?.id);
+  chart.data.datasets = chart.data.datasets.filter((ds) => !ds.overlay);
+  if (!mine) return;
+  for (const [name, datasetsFor] of mine) {
+    for (const ds of datasetsFor(chart) || []) chart.data.datasets.push({ ...ds, overlay: name });
+  }
+}
+
+/**
+ * Draws a chart on a canvas, or updates the one already there in place (no flicker, no
+ * animation); replace: true draws it anew. The canvas's overlays are put back on top.
+ */
+export function drawChart(canvas, config, { replace = false } = {}) {
   const existing = Chart.getChart(canvas);
-  if (existing && existing.config.type === config.type) {
+  let chart;
+  if (existing && !replace && existing.config.type === config.type) {
     existing.data = config.data;
     existing.options = config.options;
-    existing.update('none');
-    return existing;
+    chart = existing;
+  } else {
+    if (existing) existing.destroy();
+    chart = new Chart(canvas, config);
   }
-  if (existing) existing.destroy();
-  return new Chart(canvas, config);
+  applyOverlays(chart);
+  chart.update('none');
+  return chart;
+}
+
+/** The chart drawn on the canvas with that id, or null. */
+export function chartOn(canvasId) {
+  const canvas = typeof document === 'undefined' ? null : document.getElementById(canvasId);
+  return canvas && typeof Chart !== 'undefined' ? Chart.getChart(canvas) ?? null : null;
+}
+
+/**
+ * Puts named overlay datasets on the chart of canvasId, now and after each redraw by its owner.
+ * datasetsFor(chart) returns the datasets (it may extend the chart's labels). Returns true when
+ * the chart is drawn on this page now.
+ */
+export function setOverlay(canvasId, name, datasetsFor) {
+  if (!overlays.has(canvasId)) overlays.set(canvasId, new Map());
+  overlays.get(canvasId).set(name, datasetsFor);
+  const chart = chartOn(canvasId);
+  if (chart) { applyOverlays(chart); chart.update('none'); }
+  return chart !== null;
+}
+
+export function clearOverlay(canvasId, name) {
+  overlays.get(canvasId)?.delete(name);
+  const chart = chartOn(canvasId);
+  if (chart) { applyOverlays(chart); chart.update('none'); }
+}
+
+/** Moves a vertical line annotation (a draggable marker) of the chart on canvasId to x. */
+export function moveLine(canvasId, annotationId, x) {
+  const chart = chartOn(canvasId);
+  const a = chart?.options.plugins?.annotation?.annotations?.[annotationId];
+  if (!a) return;
+  a.xMin = x;
+  a.xMax = x;
+  chart.update('none');
 }
 
 /** Options every chart shares: responsive, no animation, titled axes. */

@@ -7,6 +7,8 @@
 //     getParameters  () => the analysis request object of the page
 //     setParameters  (parameters) => fills the page from a saved design
 //     formRoot       optional element whose [data-field] inputs get the field errors (default <main>)
+//     getView/setView optional: the page's display settings (e.g. its units), kept in this browser
+//                    with each design it saves and put back when that design is opened
 // Returns { current(), load(id) }.
 import { getJson, sendJson, showFieldErrors, clearFieldErrors } from './api.js';
 
@@ -42,7 +44,9 @@ function el(tag, attrs = {}, text) {
   return e;
 }
 
-export async function mountDesignBar(element, { kind, getParameters, setParameters, formRoot } = {}) {
+const VIEW_KEY = (id) => `nodewright.view.design.${id}`;
+
+export async function mountDesignBar(element, { kind, getParameters, setParameters, formRoot, getView, setView } = {}) {
   const t = await loadDesignText();
   const root = formRoot || document.querySelector('main') || document.body;
   const state = { id: null, version: null, name: '', lastOwnVersion: null, notice: null };
@@ -71,7 +75,10 @@ export async function mountDesignBar(element, { kind, getParameters, setParamete
   element.append(fields, actions, status, errors, conflict, notice);
 
   whoInput.value = localStorage.getItem(WHO_KEY) || '';
-  whoInput.addEventListener('change', () => localStorage.setItem(WHO_KEY, whoInput.value.trim()));
+  // The name is kept in this browser as it is typed (not only on a change event that a click may beat).
+  const keepWho = () => localStorage.setItem(WHO_KEY, whoInput.value.trim());
+  whoInput.addEventListener('input', keepWho);
+  whoInput.addEventListener('change', keepWho);
 
   const who = () => whoInput.value.trim() || undefined;
   const tags = () => tagsInput.value.split(',').map((s) => s.trim()).filter(Boolean);
@@ -92,6 +99,10 @@ export async function mountDesignBar(element, { kind, getParameters, setParamete
   function clearErrors() {
     errors.replaceChildren();
     clearFieldErrors(root);
+  }
+
+  function keepView(design) {
+    if (getView) localStorage.setItem(VIEW_KEY(design.id), JSON.stringify(getView()));
   }
 
   function showDesign(design) {
@@ -124,6 +135,10 @@ export async function mountDesignBar(element, { kind, getParameters, setParamete
       return false;
     }
     await setParameters(r.data.parameters);
+    const view = localStorage.getItem(VIEW_KEY(r.data.id));
+    if (view && setView) {
+      try { await setView(JSON.parse(view)); } catch (error) { setStatus(String(error), 'error'); }
+    }
     showDesign(r.data);
     hide(conflict); hide(notice); clearErrors();
     setStatus(format(t['designbar.loaded'], r.data.name, r.data.version));
@@ -140,6 +155,7 @@ export async function mountDesignBar(element, { kind, getParameters, setParamete
     const r = await sendJson('POST', '/api/v1/designs', b);
     if (r.ok) {
       state.lastOwnVersion = `${r.data.id}:${r.data.version}`;
+      keepView(r.data);
       showDesign(r.data); hide(conflict); hide(notice); clearErrors();
       setStatus(t['designbar.created']);
     } else {
@@ -155,6 +171,7 @@ export async function mountDesignBar(element, { kind, getParameters, setParamete
     const r = await sendJson('PUT', `/api/v1/designs/${state.id}`, b);
     if (r.ok) {
       state.lastOwnVersion = `${r.data.id}:${r.data.version}`;
+      keepView(r.data);
       showDesign(r.data); hide(conflict); hide(notice); clearErrors();
       setStatus(format(t['designbar.saved'], r.data.version));
     } else if (r.status === 409) {

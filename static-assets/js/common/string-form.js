@@ -1,43 +1,41 @@
 // Form helpers shared by the string bench and the set planner: typed numbers that stay as typed,
-// display units with exact round trips, note names, and the material catalogue.
+// display units with exact round trips, local checks, and the material catalogue.
 import { getJson } from './api.js';
-import { toMm, fromMm, toNewton, fromNewton } from './units.js';
+import { toMm, fromMm, toNewton, fromNewton, parseNumber } from './units.js';
+import { pitchHz, a4Or440 } from './notes.js';
 
-const NOTE_NAMES = ['C', 'C#', 'D', 'D#', 'E', 'F', 'F#', 'G', 'G#', 'A', 'A#', 'B'];
-const NOTE_STEPS = { C: 0, D: 2, E: 4, F: 5, G: 7, A: 9, B: 11 };
-const NUMBER = /^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/;
-
-/** A typed number, null when empty, or the raw text (the server answers it with a field error). */
+/** A typed number (units.js parseNumber: a decimal comma is a point), null when empty, NaN when it is no number. */
 export function readNumber(input) {
   const raw = input.value.trim();
-  if (raw === '') return null;
-  return NUMBER.test(raw) ? Number(raw) : raw;
+  return raw === '' ? null : parseNumber(raw);
 }
 
-/** Equal-tempered frequency of a note name such as E4, F#2 or Bb1; null when it is not one. */
-export function noteToHz(name, a4) {
-  const m = /^([A-Ga-g])([#b♯♭]?)(-?\d)$/.exec(name.trim());
-  if (!m) return null;
-  const accidental = { '#': 1, '♯': 1, b: -1, '♭': -1 }[m[2]] || 0;
-  const midi = 12 * (Number(m[3]) + 1) + NOTE_STEPS[m[1].toUpperCase()] + accidental;
-  return a4 * 2 ** ((midi - 69) / 12);   // 12-TET: f = A4 · 2^((m − 69)/12), MIDI note 69 = A4
-}
-
-/** Nearest 12-TET note name and its offset in cents for a frequency. */
-export function nearestNote(hz, a4) {
-  const semis = 12 * Math.log2(hz / a4) + 69;
-  const midi = Math.round(semis);
-  return { name: NOTE_NAMES[((midi % 12) + 12) % 12] + (Math.floor(midi / 12) - 1), cents: 100 * (semis - midi) };
-}
-
-/** A pitch field: Hz as a number, a note name turned into Hz, null, or the raw text. */
+/** A pitch field: Hz ("329.63", "329.63 Hz") or a note name turned into Hz; null when empty, NaN when neither. */
 export function readPitch(input, a4Input) {
   const raw = input.value.trim();
   if (raw === '') return null;
-  if (NUMBER.test(raw)) return Number(raw);
-  const a4 = readNumber(a4Input);
-  const hz = noteToHz(raw, typeof a4 === 'number' && a4 > 0 ? a4 : 440);
-  return hz === null ? raw : hz;
+  const hz = pitchHz(raw, a4Or440(a4Input ? readNumber(a4Input) : null));
+  return hz === null ? NaN : hz;
+}
+
+/**
+ * Collects what the page can already refuse before asking the server: a value that is no number
+ * (NaN from the readers above) is named on its own field ([data-field] of the input) with the
+ * page's own words. check(input, value, message) returns the value, or null when it was refused.
+ */
+export function localChecks() {
+  const problems = [];
+  return {
+    problems,
+    check(input, value, message) {
+      if (typeof value === 'number' && Number.isNaN(value)) {
+        problems.push({ field: input.dataset.field, message });
+        return null;
+      }
+      return value;
+    },
+    add(field, message) { problems.push({ field, message }); },
+  };
 }
 
 /**
@@ -57,7 +55,7 @@ export function unitInputs() {
   }
   function read(kind, input) {
     const v = readNumber(input);
-    if (typeof v !== 'number') return v;
+    if (typeof v !== 'number' || Number.isNaN(v)) return v;
     if (input.dataset.shown === input.value && input.dataset.canonical !== undefined) return Number(input.dataset.canonical);
     return fromDisplay(kind, v);
   }
@@ -66,15 +64,35 @@ export function unitInputs() {
     const inputs = [...root.querySelectorAll(`input[data-unit="${kind}"]`)];
     const values = inputs.map((input) => read(kind, input));
     units[kind] = unit;
-    inputs.forEach((input, i) => { if (typeof values[i] === 'number') write(kind, input, values[i]); });
+    inputs.forEach((input, i) => { if (Number.isFinite(values[i])) write(kind, input, values[i]); });
     showLabels();
   }
   function showLabels() {
     document.querySelectorAll('[data-unit-label="length"]').forEach((el) => { el.textContent = units.length; });
     document.querySelectorAll('[data-unit-label="force"]').forEach((el) => { el.textContent = units.force; });
   }
+  /** Shows units {length, force} (either may be missing) in the selects and every input of root. */
+  function showUnits(root, wanted) {
+    for (const kind of ['length', 'force']) {
+      const unit = wanted?.[kind];
+      const select = document.getElementById(`${kind}-unit`);
+      if (!unit || !select || ![...select.options].some((o) => o.value === unit) || unit === units[kind]) continue;
+      select.value = unit;
+      switchUnit(root, kind, unit);
+    }
+  }
+  /** The units last chosen on this page in this browser come back on the next visit. */
+  function remember(root, page) {
+    const key = `nodewright.units.${page}`;
+    try { showUnits(root, JSON.parse(localStorage.getItem(key) || 'null')); } catch (error) { localStorage.removeItem(key); }
+    root.addEventListener('change', (e) => {
+      if (e.target.id === 'length-unit' || e.target.id === 'force-unit') localStorage.setItem(key, JSON.stringify(units));
+    });
+  }
   return {
     units,
+    showUnits,
+    remember,
     readLength: (input) => read('length', input),
     readForce: (input) => read('force', input),
     writeLength: (input, mm) => write('length', input, mm),
@@ -89,7 +107,7 @@ export function unitInputs() {
 
 /** Fills material selects from GET /api/v1/materials; resolves to the catalogue or null. */
 export async function loadMaterials(selects) {
-  const result = await getJson('/api/v1/materials').catch(() => ({ ok: false }));
+  const result = await getJson('/api/v1/materials').catch((error) => ({ ok: false, error }));
   if (!result.ok || !Array.isArray(result.data)) return null;
   for (const select of selects) {
     const keep = select.value;

@@ -74,3 +74,11 @@ export async function sendUpload(state, form, url, data) {
   status.textContent = '';
   return result.data;
 }
+
+/** A sign on a listening panel that something is sounding, for as long as it sounds. */
+export function showPlaying(state, status, count, seconds) {
+  clearTimeout(state.playingTimer);
+  status.textContent = state.t('playing', count, seconds.toFixed(1));
+  state.panel.classList.add('playing');
+  state.playingTimer = setTimeout(() => { status.textContent = ''; state.panel.classList.remove('playing'); }, seconds * 1000);
+}

@@ -8,6 +8,10 @@ import org.nodewright.physics.aircolumn.AirColumnAnalysis;
 import org.nodewright.physics.aircolumn.AirColumnAnalyzer;
 import org.nodewright.physics.aircolumn.AirProperties;
 import org.nodewright.physics.aircolumn.BoreSegment;
+import org.nodewright.physics.aircolumn.Breath;
+import org.nodewright.physics.aircolumn.Mouth;
+import org.nodewright.physics.aircolumn.MouthEffect;
+import org.nodewright.physics.aircolumn.Resonance;
 import org.nodewright.physics.aircolumn.Fingering;
 import org.nodewright.physics.aircolumn.StandingWaveProfile;
 import org.nodewright.physics.aircolumn.ToneHole;
@@ -47,6 +51,32 @@ public final class AirColumnMapper {
         return holes;
     }
 
+    /** The core mouth of a request's (validated) mouth, or null. */
+    public static Mouth mouth(AirColumnRequest.MouthSpec m) {
+        if (m == null) {
+            return null;
+        }
+        return switch (m.kind()) {
+            case EMBOUCHURE -> {
+                double l = m.holeDiameterMm() != null ? m.holeDiameterMm() : m.holeLengthMm();
+                double w = m.holeDiameterMm() != null ? m.holeDiameterMm() : m.holeWidthMm();
+                yield new Mouth.Embouchure(l * MM, w * MM, m.wallMm() * MM, m.headspaceMm() * MM,
+                        m.lipCoveragePct() == null ? 0 : m.lipCoveragePct() / 100);
+            }
+            case WINDOW -> new Mouth.Window(m.windowLengthMm() * MM, m.windowWidthMm() * MM, m.wallMm() * MM,
+                    m.headspaceMm() == null ? 0 : m.headspaceMm() * MM);
+            case REED -> new Mouth.Reed(m.equivalentVolumeMm3() * MM * MM * MM);
+            case CUP -> new Mouth.Cup(m.cupVolumeMm3() * MM * MM * MM, m.throatDiameterMm() * MM / 2,
+                    m.throatLengthMm() * MM);
+        };
+    }
+
+    /** The core breath of a request's (validated) breath, or null. */
+    public static Breath breath(AirColumnRequest.BreathSpec b) {
+        return b == null ? null : new Breath(b.co2Pct() / 100, b.relativeHumidityPct(), b.inputTemperatureC(),
+                b.outputTemperatureC());
+    }
+
     /** The air in the bore: 20 °C and 0 % relative humidity unless given. */
     public static AirProperties air(AirColumnRequest r) {
         return AirProperties.at(r.temperatureOrDefault(), r.humidityOrDefault());
@@ -54,7 +84,8 @@ public final class AirColumnMapper {
 
     /** The whole bore as the core analyses it. */
     public static AirColumn column(AirColumnRequest r) {
-        return new AirColumn(segments(r), holes(r), r.inputEnd(), r.outputEnd(), air(r), r.lossesOrDefault());
+        return new AirColumn(segments(r), holes(r), r.inputEnd(), r.outputEnd(), air(r), r.lossesOrDefault(),
+                mouth(r.mouth()), breath(r.breath()));
     }
 
     /** The analyzer for this request's note reference and profile sampling. */
@@ -87,7 +118,8 @@ public final class AirColumnMapper {
             items.add(new AirColumnResponse.ResonanceItem(rr.resonance().n(), rr.resonance().frequencyHz(),
                     finiteOrNull(rr.resonance().q()), finiteOrNull(rr.resonance().magnitude()), note(rr.note()),
                     rr.ratioToFirst(),
-                    rr.seriesMember(), rr.centsFromSeries(), mm(p.pressureNodes()), mm(p.pressureAntinodes())));
+                    rr.seriesMember(), rr.centsFromSeries(), mm(p.pressureNodes()), mm(p.pressureAntinodes()),
+                    a.mouth() == null ? null : finiteOrNull(a.mouth().resonanceCents().get(items.size()))));
             double[] x = new double[p.positions().length];
             for (int i = 0; i < x.length; i++) {
                 x[i] = p.positions()[i] / MM;
@@ -103,11 +135,37 @@ public final class AirColumnMapper {
                     f.fingering().targetHz(), f.fingering().register(), finiteOrNull(f.predictedHz()),
                     finiteOrNull(f.centsFromTarget()), f.note() == null ? null : note(f.note()), finiteOrNull(f.q())));
         }
-        return new AirColumnResponse(air.speedOfSound(),
+        return new AirColumnResponse(a.speedOfSound(),
                 new AirColumnResponse.Air(air.temperatureC(), air.relativeHumidityPct(), air.density(),
-                        air.viscosity(), air.thermalConductivity(), air.gamma(), air.specificHeatCp()),
+                        air.viscosity(), air.thermalConductivity(), air.gamma(), air.specificHeatCp(), along(a)),
                 items, new AirColumnResponse.Impedance(a.frequencyHz(), finite(a.magnitude()), finite(a.phaseRad())),
-                EnumWords.word(a.series()), profiles, fs, a.warnings());
+                EnumWords.word(a.series()), profiles, fs, a.warnings(), mouth(a));
+    }
+
+    private static List<AirColumnResponse.AirAlongBore> along(AirColumnAnalysis a) {
+        if (a.airAlongBore().isEmpty()) {
+            return null;
+        }
+        return a.airAlongBore().stream().map(p -> new AirColumnResponse.AirAlongBore(p.position() / MM,
+                p.air().temperatureC(), p.air().relativeHumidityPct(), p.co2MoleFraction() * 100,
+                p.air().speedOfSound(), p.air().density(), p.air().viscosity(), p.air().thermalConductivity(),
+                p.air().gamma())).toList();
+    }
+
+    private static AirColumnResponse.Mouth mouth(AirColumnAnalysis a) {
+        MouthEffect m = a.mouth();
+        if (m == null) {
+            return null;
+        }
+        List<AirColumnResponse.MouthResonance> rs = new ArrayList<>();
+        for (int i = 0; i < a.resonances().size(); i++) {
+            Resonance r = a.resonances().get(i).resonance();
+            rs.add(new AirColumnResponse.MouthResonance(r.n(), r.frequencyHz(),
+                    finiteOrNull(m.bareFrequencies().get(i)), finiteOrNull(m.resonanceCents().get(i))));
+        }
+        return new AirColumnResponse.Mouth(EnumWords.word(m.mouth().kind()),
+                finiteOrNull(m.endCorrection() / MM), rs, finiteOrNull(m.helmholtzHz()),
+                finiteOrNull(m.missingApexVolume() / (MM * MM * MM)));
     }
 
     private static AirColumnResponse.Note note(Note n) {

@@ -11,6 +11,7 @@ import jakarta.validation.constraints.PositiveOrZero;
 import jakarta.validation.constraints.Size;
 import java.util.List;
 import org.nodewright.physics.aircolumn.InputEnd;
+import org.nodewright.physics.aircolumn.MouthKind;
 import org.nodewright.physics.aircolumn.OutputEnd;
 import org.nodewright.physics.tuning.EqualTemperament;
 import org.nodewright.web.CrossFieldChecked;
@@ -41,7 +42,17 @@ public record AirColumnRequest(
         @Min(2) @Max(MAX_POINTS) Integer points,
         @Finite @DecimalMin("200") @DecimalMax("1000") Double referenceA4Hz,
         @Min(2) @Max(2001) Integer profileSamples,
-        @Size(max = MAX_FINGERINGS) List<@NotNull @Valid FingeringSpec> fingerings) implements CrossFieldChecked.Rules {
+        @Size(max = MAX_FINGERINGS) List<@NotNull @Valid FingeringSpec> fingerings,
+        @Valid MouthSpec mouth,
+        @Valid BreathSpec breath) implements CrossFieldChecked.Rules {
+
+    /** The request without a mouth and a breath (the bore alone). */
+    public AirColumnRequest(List<Segment> segments, InputEnd inputEnd, OutputEnd outputEnd, List<Hole> holes,
+            Double temperatureC, Double relativeHumidityPct, Boolean losses, Double fMinHz, Double fMaxHz,
+            Integer points, Double referenceA4Hz, Integer profileSamples, List<FingeringSpec> fingerings) {
+        this(segments, inputEnd, outputEnd, holes, temperatureC, relativeHumidityPct, losses, fMinHz, fMaxHz, points,
+                referenceA4Hz, profileSamples, fingerings, null, null);
+    }
 
     @Override
     public List<FieldProblem> crossFieldProblems() {
@@ -85,12 +96,57 @@ public record AirColumnRequest(
             @Min(1) @Max(16) Integer register) {
     }
 
+    static final double DEFAULT_TEMPERATURE_C = 20.0;
+    static final double DEFAULT_HUMIDITY_PCT = 0.0;
+    static final int DEFAULT_POINTS = 2000;
+    static final int DEFAULT_PROFILE_SAMPLES = 201;
+
+    /** What an omitted top-level field means (JSON names), for comparing saved designs by their effective values. */
+    public static final java.util.Map<String, Object> DEFAULTS = java.util.Map.of("temperatureC", DEFAULT_TEMPERATURE_C,
+            "relativeHumidityPct", DEFAULT_HUMIDITY_PCT, "losses", true, "points", DEFAULT_POINTS,
+            "referenceA4Hz", EqualTemperament.ISO_16_A4_HZ, "profileSamples", DEFAULT_PROFILE_SAMPLES);
+    /**
+     * The player's end (see the contract's "Mouth ends and breath"): {@code kind} and the fields
+     * of that kind, millimetres; fields of other kinds must be absent. Embouchure: the hole as
+     * {@code holeDiameterMm} or {@code holeLengthMm} + {@code holeWidthMm}, {@code wallMm},
+     * {@code headspaceMm}, {@code lipCoveragePct} (default 0). Window: {@code windowLengthMm},
+     * {@code windowWidthMm}, {@code wallMm}, {@code headspaceMm} (default 0). Reed:
+     * {@code equivalentVolumeMm3}. Cup: {@code cupVolumeMm3}, {@code throatDiameterMm},
+     * {@code throatLengthMm}.
+     */
+    public record MouthSpec(
+            @NotNull MouthKind kind,
+            @Finite @Positive @DecimalMax("200") Double holeDiameterMm,
+            @Finite @Positive @DecimalMax("200") Double holeLengthMm,
+            @Finite @Positive @DecimalMax("200") Double holeWidthMm,
+            @Finite @PositiveOrZero @DecimalMax("200") Double wallMm,
+            @Finite @PositiveOrZero @DecimalMax("2000") Double headspaceMm,
+            @Finite @DecimalMin("0") @DecimalMax("80") Double lipCoveragePct,
+            @Finite @Positive @DecimalMax("500") Double windowLengthMm,
+            @Finite @Positive @DecimalMax("2000") Double windowWidthMm,
+            @Finite @Positive @DecimalMax("1e9") Double equivalentVolumeMm3,
+            @Finite @Positive @DecimalMax("1e9") Double cupVolumeMm3,
+            @Finite @Positive @DecimalMax("200") Double throatDiameterMm,
+            @Finite @Positive @DecimalMax("2000") Double throatLengthMm) {
+    }
+
+    /**
+     * The air inside while playing: CO2 mole fraction in per cent (0.04 = room air), relative
+     * humidity, and the temperature at the input and output ends (linear between); all required.
+     */
+    public record BreathSpec(
+            @NotNull @Finite @DecimalMin("0") @DecimalMax("20") Double co2Pct,
+            @NotNull @Finite @DecimalMin("0") @DecimalMax("100") Double relativeHumidityPct,
+            @NotNull @Finite @DecimalMin("-50") @DecimalMax("60") Double inputTemperatureC,
+            @NotNull @Finite @DecimalMin("-50") @DecimalMax("60") Double outputTemperatureC) {
+    }
+
     public double temperatureOrDefault() {
-        return temperatureC == null ? 20.0 : temperatureC;
+        return temperatureC == null ? DEFAULT_TEMPERATURE_C : temperatureC;
     }
 
     public double humidityOrDefault() {
-        return relativeHumidityPct == null ? 0.0 : relativeHumidityPct;
+        return relativeHumidityPct == null ? DEFAULT_HUMIDITY_PCT : relativeHumidityPct;
     }
 
     public boolean lossesOrDefault() {
@@ -98,7 +154,7 @@ public record AirColumnRequest(
     }
 
     public int pointsOrDefault() {
-        return points == null ? 2000 : points;
+        return points == null ? DEFAULT_POINTS : points;
     }
 
     public double referenceA4OrDefault() {
@@ -106,7 +162,7 @@ public record AirColumnRequest(
     }
 
     public int profileSamplesOrDefault() {
-        return profileSamples == null ? 201 : profileSamples;
+        return profileSamples == null ? DEFAULT_PROFILE_SAMPLES : profileSamples;
     }
 
     public List<Hole> holesOrEmpty() {

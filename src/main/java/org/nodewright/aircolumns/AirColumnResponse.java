@@ -17,11 +17,36 @@ public record AirColumnResponse(
         String series,
         List<Profile> profiles,
         List<FingeringItem> fingerings,
-        List<String> warnings) {
+        List<String> warnings,
+        Mouth mouth) {
 
-    /** The air the bore was analysed in (SI). */
+    /**
+     * The room's air (SI); with a breath, {@code alongBore} gives the air inside at evenly spaced
+     * points from the input to the output end (null without a breath).
+     */
     public record Air(double temperatureC, double relativeHumidityPct, double densityKgPerM3, double viscosityPaS,
-            double thermalConductivityWPerMK, double ratioOfSpecificHeats, double specificHeatJPerKgK) {
+            double thermalConductivityWPerMK, double ratioOfSpecificHeats, double specificHeatJPerKgK,
+            List<AirAlongBore> alongBore) {
+    }
+
+    /** The air inside at one point of the bore while playing. */
+    public record AirAlongBore(double xMm, double temperatureC, double relativeHumidityPct, double co2Pct,
+            double speedOfSoundMps, double densityKgPerM3, double viscosityPaS, double thermalConductivityWPerMK,
+            double ratioOfSpecificHeats) {
+    }
+
+    /**
+     * What the mouth does: {@code endCorrectionMm}, the bare cylinder of the first segment's input
+     * diameter that shifts the lowest resonance as the mouth does; each resonance against the same
+     * bore with a bare input end; the cup's Helmholtz frequency (cup only) and, for a reed on a
+     * diverging first segment, the volume of the cone's missing apex (null otherwise).
+     */
+    public record Mouth(String kind, Double endCorrectionMm, List<MouthResonance> resonances, Double helmholtzHz,
+            Double missingApexVolumeMm3) {
+    }
+
+    /** One resonance with the mouth, the bare bore's, and the shift in cents. */
+    public record MouthResonance(int n, double frequencyHz, Double withoutMouthHz, Double cents) {
     }
 
     /** Nearest equal-tempered note. */
@@ -35,7 +60,7 @@ public record AirColumnResponse(
      */
     public record ResonanceItem(int n, double frequencyHz, Double q, Double magnitude, Note note,
             double ratioToFirst, int seriesMember, double centsFromSeries, List<Double> pressureNodesMm,
-            List<Double> pressureAntinodesMm) {
+            List<Double> pressureAntinodesMm, Double mouthCents) {
     }
 
     /** Input impedance / (rho c / S_input): magnitude and phase on the requested grid. */

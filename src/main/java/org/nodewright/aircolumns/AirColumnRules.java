@@ -10,7 +10,8 @@ import org.nodewright.web.FieldProblem;
  * Cross-field rules of {@link AirColumnRequest} (through {@link org.nodewright.web.CrossFieldChecked}),
  * each reported on its own dotted path: fMaxHz above fMinHz, the bore no longer than 20 m, the work
  * bounded, every hole inside the bore and no wider than the bore where it sits, fingering hole
- * indices within the hole list, exactly one target per fingering and a readable note name. Fields
+ * indices within the hole list, exactly one target per fingering and a readable note name, and the
+ * mouth's rules ({@link MouthRules}). Fields
  * that are missing are left to their own constraints.
  */
 final class AirColumnRules {
@@ -60,6 +61,7 @@ final class AirColumnRules {
                 }
             }
         }
+        out.addAll(MouthRules.problems(r));
         List<AirColumnRequest.FingeringSpec> fs = r.fingerings();
         if (fs != null) {
             int holeCount = holes == null ? 0 : holes.size();
@@ -79,16 +81,17 @@ final class AirColumnRules {
             for (int j = 0; j < f.closedHoles().size(); j++) {
                 Integer idx = f.closedHoles().get(j);
                 if (idx != null && idx >= holeCount) {
-                    out.add(new FieldProblem(base + ".closedHoles[" + j + "]", "must be the index of a hole (0.."
-                            + (holeCount - 1) + ")"));
+                    // The field path counts from 0 (the contract); the words number holes from 1, as the pages do.
+                    out.add(new FieldProblem(base + ".closedHoles[" + j + "]", "names hole " + (idx + 1)
+                            + ", but the bore has " + (holeCount == 0 ? "no holes" : "holes 1 to " + holeCount)));
                 }
             }
         }
         boolean hasNote = f.targetNote() != null;
         boolean hasHz = f.targetHz() != null;
         if (hasNote == hasHz) {
-            out.add(new FieldProblem(base + ".targetHz", hasNote ? "give targetHz or targetNote, not both"
-                    : "give targetHz or targetNote"));
+            out.add(new FieldProblem(base + ".targetHz", hasNote ? "give the target pitch once: as a note or in Hz, not both"
+                    : "enter the target pitch: a note such as D5, or a frequency in Hz"));
         } else if (hasNote && !NoteNames.isNoteName(f.targetNote())) {
             out.add(new FieldProblem(base + ".targetNote", "must be a note name such as " + NoteNames.EXAMPLES));
         }

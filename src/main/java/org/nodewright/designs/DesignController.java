@@ -28,11 +28,19 @@ class DesignController {
     private final DesignLibrary library;
     private final DesignStore store;
     private final DesignEvents events;
+    private final DemoLibrary demo;
 
-    DesignController(DesignLibrary library, DesignStore store, DesignEvents events) {
+    DesignController(DesignLibrary library, DesignStore store, DesignEvents events, DemoLibrary demo) {
         this.library = library;
         this.store = store;
         this.events = events;
+        this.demo = demo;
+    }
+
+    /** Removes every design tagged {@code demo} (the first start's demo library) in one go. */
+    @DeleteMapping("/demo")
+    java.util.Map<String, Integer> deleteDemo(HttpServletRequest request) {
+        return java.util.Map.of("deleted", demo.removeAll(Authors.who(request, null)));
     }
 
     @PostMapping

@@ -11,8 +11,10 @@ import org.springframework.stereotype.Component;
 import org.springframework.web.servlet.mvc.method.annotation.SseEmitter;
 
 /**
- * Tells every open page at once when a design is saved or deleted (server-sent events). Pages of
- * another app instance behind the same PostgreSQL are not reached; the design bar also polls.
+ * Tells every open page at once when a design is saved or deleted (server-sent events). On
+ * PostgreSQL the change also goes to the other app instances on the same database
+ * ({@link PostgresChangeNotices}, LISTEN/NOTIFY), which pass it to their own pages; the design bar
+ * also polls every 20 s as the fallback.
  */
 @Component
 class DesignEvents {
@@ -21,6 +23,12 @@ class DesignEvents {
     private static final long STREAM_MILLIS = 10 * 60 * 1000L;
 
     private final List<SseEmitter> emitters = new CopyOnWriteArrayList<>();
+    private volatile java.util.function.Consumer<Change> forward = change -> { };
+
+    /** Where this instance's own changes also go (the other instances, on PostgreSQL). */
+    void forwardTo(java.util.function.Consumer<Change> forward) {
+        this.forward = forward;
+    }
 
     SseEmitter subscribe() {
         SseEmitter emitter = new SseEmitter(STREAM_MILLIS);
@@ -45,6 +53,12 @@ class DesignEvents {
     }
 
     private void publish(Change change) {
+        publishLocally(change);
+        forward.accept(change);
+    }
+
+    /** Sends a change to the pages open on this instance only. */
+    void publishLocally(Change change) {
         for (SseEmitter emitter : emitters) {
             try {
                 emitter.send(SseEmitter.event().name("design-" + change.change()).data(change, MediaType.APPLICATION_JSON));

@@ -96,6 +96,11 @@ class DesignLibrary {
         return store.find(id).orElseThrow(() -> notFound("No design with id " + id + "."));
     }
 
+    /** The design with that id, or empty (for pages, which answer a missing design with a page, not a problem). */
+    java.util.Optional<Design> find(long id) {
+        return store.find(id);
+    }
+
     List<FieldProblem> problems(DesignContent content, String prefix) {
         List<FieldProblem> problems = new ArrayList<>();
         if (content.name().isEmpty()) {

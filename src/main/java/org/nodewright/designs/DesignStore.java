@@ -58,6 +58,17 @@ class DesignStore {
      */
     @Transactional
     public Design createWithHistory(List<Snapshot> history) {
+        Snapshot last = history.get(history.size() - 1);
+        return createWithHistory(history, last.by(), last.at());
+    }
+
+    /**
+     * As {@link #createWithHistory(List)}, listed as changed by {@code listedBy} at {@code listedAt}
+     * (an import: the design arrived in this library now, and sorts with the latest; its revisions
+     * keep their own dates).
+     */
+    @Transactional
+    public Design createWithHistory(List<Snapshot> history, String listedBy, Instant listedAt) {
         Snapshot first = history.get(0);
         Snapshot last = history.get(history.size() - 1);
         KeyHolder keys = new GeneratedKeyHolder();
@@ -69,8 +80,8 @@ class DesignStore {
                 .param("notes", last.content().notes())
                 .param("author", first.by())
                 .param("createdAt", time(first.at()))
-                .param("updatedBy", last.by())
-                .param("updatedAt", time(last.at()))
+                .param("updatedBy", listedBy)
+                .param("updatedAt", time(listedAt))
                 .param("version", (long) history.size())
                 .update(keys, "id");
         long id = generatedId(keys);

@@ -51,8 +51,9 @@ class LibraryExchange {
     public List<Design> importAsNew(LibraryDocument doc, String by) {
         List<List<DesignStore.Snapshot>> histories = check(doc, by);
         List<Design> created = new ArrayList<>();
+        Instant now = DesignStore.now();
         for (List<DesignStore.Snapshot> history : histories) {
-            created.add(store.createWithHistory(history));
+            created.add(store.createWithHistory(history, by, now));
         }
         created.forEach(events::saved);
         created.forEach(d -> audit.record(by, AuditAction.DESIGN_IMPORTED, DesignLibrary.target(d)));
@@ -132,9 +133,14 @@ class LibraryExchange {
         return found.isEmpty() ? content : null;
     }
 
+    /** Same name, parameters, notes and tags; tags as a set (a file may list them in any order). */
     private static boolean sameContent(DesignContent a, DesignContent b) {
         return a.name().equals(b.name()) && a.parameters().equals(b.parameters()) && a.notes().equals(b.notes())
-                && a.tags().equals(b.tags());
+                && tagKeys(a).equals(tagKeys(b));
+    }
+
+    private static java.util.Set<String> tagKeys(DesignContent c) {
+        return c.tags().stream().map(DesignContent::tagKey).collect(java.util.stream.Collectors.toSet());
     }
 
     private static <T> T orElse(T value, T fallback) {

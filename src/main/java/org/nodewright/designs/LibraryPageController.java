@@ -1,5 +1,8 @@
 package org.nodewright.designs;
 
+import jakarta.servlet.http.HttpServletResponse;
+import java.util.Optional;
+import org.springframework.http.HttpStatus;
 import org.springframework.stereotype.Controller;
 import org.springframework.ui.Model;
 import org.springframework.web.bind.annotation.GetMapping;
@@ -12,6 +15,7 @@ class LibraryPageController {
     private static final String LIST_VIEW = "library";
     private static final String DESIGN_VIEW = "library-design";
     private static final String COMPARE_VIEW = "library-compare";
+    private static final String MISSING_VIEW = "library-missing";
 
     private final DesignLibrary library;
 
@@ -24,12 +28,26 @@ class LibraryPageController {
         return LIST_VIEW;
     }
 
+    /** One design; an unknown or deleted id (or no id at all) gets a page saying so, with status 404. */
     @GetMapping("/library/{id}")
-    String design(@PathVariable long id, Model model) {
-        Design design = library.get(id);
+    String design(@PathVariable String id, Model model, HttpServletResponse response) {
+        Design design = parseId(id).flatMap(library::find).orElse(null);
+        if (design == null) {
+            response.setStatus(HttpStatus.NOT_FOUND.value());
+            model.addAttribute("missingId", id);
+            return MISSING_VIEW;
+        }
         model.addAttribute("design", design);
         model.addAttribute("openPath", design.kind().designerPath() + "?design=" + design.id());
         return DESIGN_VIEW;
+    }
+
+    private static Optional<Long> parseId(String id) {
+        try {
+            return Optional.of(Long.parseLong(id));
+        } catch (NumberFormatException e) {
+            return Optional.empty();
+        }
     }
 
     @GetMapping("/library/compare")

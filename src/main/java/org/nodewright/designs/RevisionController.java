@@ -53,7 +53,7 @@ class RevisionController {
         DesignRevision b = revisionOf(id, to);
         return new Comparison(new Side(id, a.version(), a.name(), a.kind(), a.parameters()),
                 new Side(id, b.version(), b.name(), b.kind(), b.parameters()),
-                ParameterDiff.between(a.parameters(), b.parameters()));
+                ParameterDiff.between(a.kind(), a.parameters(), b.parameters()));
     }
 
     /** Two designs of the same kind, each at its current version or the one asked for: {@code ?a=1&b=2}. */
@@ -66,7 +66,7 @@ class RevisionController {
             throw new BadRequestException("b", "is a " + right.kind().word() + " design; only designs of the same kind ("
                     + left.kind().word() + ") can be compared");
         }
-        return new Comparison(left, right, ParameterDiff.between(left.parameters(), right.parameters()));
+        return new Comparison(left, right, ParameterDiff.between(left.kind(), left.parameters(), right.parameters()));
     }
 
     private Side side(long id, Long version) {

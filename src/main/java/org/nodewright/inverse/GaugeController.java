@@ -11,6 +11,7 @@ import org.nodewright.physics.strings.Material;
 import org.nodewright.physics.strings.Materials;
 import org.nodewright.physics.strings.StressCheck;
 import org.nodewright.strings.StringRules;
+import org.nodewright.web.FieldProblem;
 import org.springframework.web.bind.annotation.PostMapping;
 import org.springframework.web.bind.annotation.RequestBody;
 import org.springframework.web.bind.annotation.RestController;
@@ -80,8 +81,31 @@ class GaugeController {
                         wound ? c.coreDiameterM() * 1e3 : null, wound ? c.wrapDiameterM() * 1e3 : null,
                         c.linearDensityKgPerM(), p.choice().tensionN(), 100 * p.offFraction(),
                         p.exactDiameterM() * 1e3, p.stress().stressPa(), 100 * p.stress().fractionOfStrength(),
-                        Neighbour.of(p.thinner()), Neighbour.of(p.thicker()), p.stress().warnings());
+                        Neighbour.of(p.thinner()), Neighbour.of(p.thicker()), warnings(p, outerMm));
+            }
+
+            /**
+             * The stress warnings, and one when the closest gauge on offer misses the target
+             * tension by more than {@link #OFF_TARGET_PCT} (a stock list without the gauge needed).
+             */
+            private static List<String> warnings(GaugePicker.Pick p, double outerMm) {
+                List<String> out = new ArrayList<>(p.stress().warnings());
+                double offPct = 100 * p.offFraction();
+                if (Math.abs(offPct) > OFF_TARGET_PCT) {
+                    out.add(String.format(java.util.Locale.ROOT, "the nearest gauge on offer (%s mm) gives %s N, %s %% %s "
+                            + "the target %s N: the gauge needed is about %s mm; add it to the list or choose another "
+                            + "material", FieldProblem.figure(outerMm), FieldProblem.figure(p.choice().tensionN()),
+                            FieldProblem.figure(Math.abs(Math.round(offPct * 10) / 10.0)), offPct < 0 ? "below" : "above",
+                            FieldProblem.figure(p.target().tensionN()), FieldProblem.figure(p.exactDiameterM() * 1e3)));
+                }
+                return List.copyOf(out);
             }
         }
     }
+
+    /**
+     * How far from the target tension a picked gauge may land before the answer warns: 10 %
+     * (common practice: the strings of a balanced set sit within about a tenth of each other's feel).
+     */
+    static final double OFF_TARGET_PCT = 10;
 }

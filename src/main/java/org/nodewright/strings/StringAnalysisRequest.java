@@ -61,6 +61,13 @@ public record StringAnalysisRequest(
     public static final int MAX_CHART_INTERVALS = 200;
     public static final double DEFAULT_A4_HZ = EqualTemperament.ISO_16_A4_HZ;
 
+    /**
+     * What an omitted top-level field means (JSON names and words), for comparing saved designs
+     * by their effective values: the same defaults the methods below apply.
+     */
+    public static final java.util.Map<String, Object> DEFAULTS = java.util.Map.of("referenceA4Hz", DEFAULT_A4_HZ,
+            "modeCount", DEFAULT_MODE_COUNT, "stiffness", false, "endCondition", "pinned");
+
     /** Where and how the string is set in motion. */
     public record Pluck(@NotNull @Finite Double positionMm, ExcitationKind kind) {
         public ExcitationKind kindOrDefault() {
@@ -155,7 +162,7 @@ public record StringAnalysisRequest(
             double x = r.pluck.positionMm;
             if (!(x > 0 && x < length)) {
                 out.add(new FieldProblem("pluck.positionMm",
-                        "must lie strictly between the nut (0) and the bridge (" + length + " mm)"));
+                        "must lie strictly between the nut (0) and the bridge (" + FieldProblem.figure(length) + " mm)"));
             }
         }
         if (r.pickups == null) {
@@ -169,7 +176,7 @@ public record StringAnalysisRequest(
             double x = p.positionMm;
             if (!(x >= 0 && x <= length)) {
                 out.add(new FieldProblem("pickups[" + i + "].positionMm",
-                        "must lie on the string, between 0 and " + length + " mm"));
+                        "must lie on the string, between 0 and " + FieldProblem.figure(length) + " mm"));
             } else if (p.apertureMm != null && Double.isFinite(p.apertureMm) && p.apertureMm >= 0
                     && (x - p.apertureMm / 2 < 0 || x + p.apertureMm / 2 > length)) {
                 out.add(new FieldProblem("pickups[" + i + "].apertureMm",

@@ -6,7 +6,8 @@ import tools.jackson.databind.annotation.JsonSerialize;
 
 /**
  * Answer of {@code POST /api/v1/strings/analyze}: every contract field plus extras for the page
- * (ideal f1, stress fraction, caution, shape samples, pickup outputs and combinations).
+ * (ideal f1, stress fraction, caution, shape samples, pickup outputs and combinations). {@code stressLevel}
+ * is "ok", "warning" or "danger" (see {@link StressLevel}), null when the strength is unknown.
  */
 public record StringAnalysisResponse(
         double tensionN,
@@ -26,7 +27,8 @@ public record StringAnalysisResponse(
         boolean stiffness,
         String modeShapes,
         String pickupCombination,
-        List<ModeJson> modes) {
+        List<ModeJson> modes,
+        String stressLevel) {
 
     /** Nearest 12-TET note of the sounding f1. */
     public record NoteJson(String name, int midi, double frequencyHz, double centsOff) {

@@ -98,7 +98,7 @@ class StringAnalysisService {
                 r.referenceA4OrDefault(), EnumWords.word(r.endOrDefault()), r.stiffnessOn(),
                 clampedShapes ? "clamped-beam-under-tension" : "sine",
                 r.pickupCombination() == null ? null : EnumWords.word(r.pickupCombination()),
-                modes);
+                modes, StressLevel.of(strength == null ? null : stress.fractionOfStrength()));
     }
 
     private static StringAnalysisResponse.ModeJson mode(StringAnalysis.ModeResponse m, double lengthMm,

@@ -56,7 +56,7 @@ public final class StringRules {
 
     /** The unknown-material message: names the id and the catalogue's ids. */
     static String unknownMaterial(String id) {
-        return "is not a known material: '" + id + "' (see GET /api/v1/materials; known: "
+        return "is not a material of the catalogue: '" + id + "' (choose one of: "
                 + String.join(", ", Materials.all().stream().map(Material::id).toList()) + ")";
     }
 }

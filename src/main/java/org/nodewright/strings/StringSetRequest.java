@@ -43,6 +43,10 @@ public record StringSetRequest(
             @DecimalMax(value = "100000", message = "must be at most 100000 mm") Double lengthMm) {
     }
 
+    /** What an omitted top-level field means (see {@link StringAnalysisRequest#DEFAULTS}). */
+    public static final java.util.Map<String, Object> DEFAULTS = java.util.Map.of(
+            "referenceA4Hz", StringAnalysisRequest.DEFAULT_A4_HZ, "stiffness", false, "endCondition", "pinned");
+
     public double referenceA4OrDefault() {
         return referenceA4Hz == null ? StringAnalysisRequest.DEFAULT_A4_HZ : referenceA4Hz;
     }

@@ -6,9 +6,9 @@ import java.util.List;
 public record StringSetResponse(List<StringJson> strings, double totalTensionN, double totalTensionKgf,
         List<String> warnings, String caution, String neckCaution) {
 
-    /** One string: its tension at pitch, stress and nearest note. */
+    /** One string: its tension at pitch, stress (and its {@link StressLevel} word) and nearest note. */
     public record StringJson(int index, String label, double lengthMm, double targetHz, double tensionN,
             double tensionKgf, double linearDensityKgPerM, double stressPa, double tensileStrengthPa,
-            double stressFraction, List<String> warnings, StringAnalysisResponse.NoteJson note) {
+            double stressFraction, List<String> warnings, StringAnalysisResponse.NoteJson note, String stressLevel) {
     }
 }

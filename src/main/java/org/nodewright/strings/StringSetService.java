@@ -42,7 +42,8 @@ class StringSetService {
             out.add(new StringSetResponse.StringJson(i, label, m.string().lengthM() * 1e3, m.string().targetHz(),
                     m.tensionN(), m.tensionN() / G0, m.linearDensityKgPerM(), s.stressPa(), s.tensileStrengthPa(),
                     s.fractionOfStrength(), s.warnings(), new StringAnalysisResponse.NoteJson(m.note().name(),
-                            m.note().midi(), m.note().frequencyHz(), m.note().centsOff())));
+                            m.note().midi(), m.note().frequencyHz(), m.note().centsOff()),
+                    StressLevel.of(s.fractionOfStrength())));
         }
         return new StringSetResponse(out, result.totalTensionN(), result.totalTensionN() / G0, all,
                 StressCheck.CAUTION, StringSets.NECK_CAUTION);

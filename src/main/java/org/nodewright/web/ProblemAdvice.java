@@ -14,6 +14,7 @@ import org.springframework.http.ProblemDetail;
 import org.springframework.http.ResponseEntity;
 import org.springframework.http.converter.HttpMessageNotReadableException;
 import org.springframework.validation.FieldError;
+import org.springframework.web.ErrorResponseException;
 import org.springframework.web.bind.MethodArgumentNotValidException;
 import org.springframework.web.bind.MissingServletRequestParameterException;
 import org.springframework.web.bind.annotation.ExceptionHandler;
@@ -153,6 +154,12 @@ public class ProblemAdvice extends ResponseEntityExceptionHandler {
                 || ex instanceof org.springframework.security.core.AuthenticationException) {
             throw ex; // the security filter chain answers these with 401/403
         }
+        if (org.nodewright.store.DiskSpace.isDiskFull(ex)) {
+            log.error("A write failed for lack of disk space: {}", ex.getMessage());
+            ErrorResponseException full = org.nodewright.store.DiskSpace.full("The disk of the data directory is "
+                    + "full: this change was not saved. Everything saved before is kept; free some space and save again.");
+            return problem(full.getBody(), new HttpHeaders());
+        }
         log.error("Unexpected failure", ex);
         ProblemDetail pd = ProblemDetail.forStatusAndDetail(HttpStatus.INTERNAL_SERVER_ERROR,
                 "The server could not complete the request.");
@@ -218,6 +225,10 @@ public class ProblemAdvice extends ResponseEntityExceptionHandler {
                 && ife.getTargetType().isEnum()) {
             return "is not one of " + enumWords(ife.getTargetType());
         }
+        if (je instanceof tools.jackson.databind.exc.MismatchedInputException mie && isNumber(mie.getTargetType())) {
+            // Text, a boolean or a list where a number belongs: say what to enter, not how Jackson coerces.
+            return "enter a number (in JSON, without quotes)";
+        }
         String m = je.getOriginalMessage();
         if (m == null) {
             return "is not readable";
@@ -230,6 +241,11 @@ public class ProblemAdvice extends ResponseEntityExceptionHandler {
         // Keep it short and free of class names.
         m = m.replaceAll("\\(class [^)]*\\)", "").replaceAll("`[a-z]+(\\.[A-Za-z0-9_$]+)+`", "value");
         return m.length() > 200 ? m.substring(0, 200) : m;
+    }
+
+    private static boolean isNumber(Class<?> type) {
+        return type != null && (Number.class.isAssignableFrom(type) || type == double.class || type == float.class
+                || type == int.class || type == long.class || type == short.class);
     }
 
     /**

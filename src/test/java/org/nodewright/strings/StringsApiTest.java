@@ -149,6 +149,19 @@ class StringsApiTest {
                 {"lengthMm": 650.0, "targetHz": 440.0, "material": "plain-steel", "diameterMm": 0.25}""");
         assertThat(r.path("stressFraction").asDouble()).isGreaterThan(0.9);
         assertThat(r.path("warnings").get(0).asString()).startsWith("DANGER");
+        // The pages mark the string by this word instead of keeping copies of the 75 % / 90 % limits.
+        assertThat(r.path("stressLevel").asString()).isEqualTo("danger");
+    }
+
+    @Test
+    void stressLevelFollowsTheCoreLimits() throws Exception {
+        // 0.25 mm plain steel at E4 on 650 mm: T = mu(2Lf)^2 = 71 N, about 56 % of the catalogue strength.
+        JsonNode ok = postJson("/api/v1/strings/analyze", """
+                {"lengthMm": 650.0, "targetHz": 329.63, "material": "plain-steel", "diameterMm": 0.25}""");
+        assertThat(ok.path("stressLevel").asString()).isEqualTo("ok");
+        JsonNode unknown = postJson("/api/v1/strings/analyze", """
+                {"lengthMm": 1000.0, "tensionN": 100.0, "linearDensityKgPerM": 0.01, "modeCount": 3}""");
+        assertThat(unknown.path("stressLevel").isNull()).isTrue();
     }
 
     @Test

@@ -5,11 +5,23 @@ import org.nodewright.physics.tuning.Note;
 
 /**
  * Everything computed for one bore: the impedance curve (divided by rho c / S_input), the
- * refined resonances with their profiles, the register alignment and the fingering predictions.
+ * refined resonances with their profiles, the register alignment and the fingering predictions;
+ * {@code mouth} is null without a mouth, {@code airAlongBore} empty without a breath, and
+ * {@code air} is the room's air and {@code speedOfSound} the mean along the bore (the length over
+ * the travel time; the room's speed without a breath).
  */
 public record AirColumnAnalysis(AirProperties air, double[] frequencyHz, double[] magnitude, double[] phaseRad,
         List<ResonanceResult> resonances, HarmonicSeries series, List<FingeringResult> fingerings,
-        List<String> warnings) {
+        List<String> warnings, MouthEffect mouth, List<AirPoint> airAlongBore, double speedOfSound) {
+
+    /**
+     * The air inside at one point of the bore (with a breath).
+     *
+     * @param position        m from the input end
+     * @param co2MoleFraction CO2 mole fraction
+     */
+    public record AirPoint(double position, double co2MoleFraction, AirProperties air) {
+    }
 
     /**
      * One resonance with its nearest note, standing wave and register alignment.

@@ -74,7 +74,40 @@ public final class AirColumnAnalyzer {
             fr.add(predict(column, f, fMin, fMax, warnings));
         }
         addRangeWarnings(column, fMax, warnings);
-        return new AirColumnAnalysis(column.air(), grid(fMin, df, points), mag, phase, results, series, fr, warnings);
+        MouthEffect mouth = null;
+        if (column.mouth() != null) {
+            TransferMatrixSolver bare = new TransferMatrixSolver(column.withMouth(null));
+            mouth = MouthEffect.of(column, solver, found, detect(bare, fMin, fMax, MAX_RESONANCES), fMin, fMax);
+        }
+        return new AirColumnAnalysis(column.air(), grid(fMin, df, points), mag, phase, results, series, fr,
+                warnings, mouth, airAlongBore(column), column.meanSpeedOfSound());
+    }
+
+    /** Points along the bore at which the breath's air is reported. */
+    static final int AIR_POINTS = 11;
+
+    private static List<AirColumnAnalysis.AirPoint> airAlongBore(AirColumn column) {
+        if (column.breath() == null) {
+            return List.of();
+        }
+        List<AirColumnAnalysis.AirPoint> out = new ArrayList<>();
+        for (int i = 0; i < AIR_POINTS; i++) {
+            double u = (double) i / (AIR_POINTS - 1);
+            out.add(new AirColumnAnalysis.AirPoint(u * column.length(), column.breath().co2MoleFraction(),
+                    column.breath().airAt(u)));
+        }
+        return out;
+    }
+
+    /** At most limit resonances on the detection grid alone (no user grid). */
+    static List<Resonance> detect(TransferMatrixSolver solver, double fMin, double fMax, int limit) {
+        double cell = maxDetectionCell(solver.column());
+        int n = (int) Math.min(MAX_DETECTION_POINTS, Math.max(64, Math.ceil((fMax - fMin) / cell) + 1));
+        double d = (fMax - fMin) / (n - 1);
+        double[] re = new double[n];
+        double[] im = new double[n];
+        solver.inputImpedance(fMin, d, n, re, im);
+        return new ResonanceFinder(solver).find(fMin, d, re, im, limit);
     }
 
     private static double[] grid(double f0, double df, int n) {
@@ -102,7 +135,7 @@ public final class AirColumnAnalyzer {
     }
 
     private static double maxDetectionCell(AirColumn column) {
-        return column.air().speedOfSound() / (2 * column.length()) / CELLS_PER_SPACING;
+        return column.meanSpeedOfSound() / (2 * column.length()) / CELLS_PER_SPACING;
     }
 
     private AirColumnAnalysis.FingeringResult predict(AirColumn column, Fingering f, double fMin, double fMax,
@@ -138,7 +171,7 @@ public final class AirColumnAnalyzer {
         for (BoreSegment s : column.segments()) {
             rMax = Math.max(rMax, Math.max(s.inputRadius(), s.outputRadius()));
         }
-        double ka = 2 * Math.PI * fMax / column.air().speedOfSound() * rMax;
+        double ka = 2 * Math.PI * fMax / column.referenceAir().speedOfSound() * rMax;
         if (ka > 1.84) {
             warnings.add(String.format(java.util.Locale.ROOT,
                     "ka reaches %.2f: above 1.84 the first cross-mode can propagate and the plane-wave model is "

@@ -30,6 +30,8 @@ public record AirProperties(double temperatureC, double relativeHumidityPct, dou
     public static final double SEA_LEVEL_PA = 101_325.0;
     /** CO2 mole fraction of present-day air (common practice, about 400 ppm). */
     public static final double CO2_MOLE_FRACTION = 0.0004;
+    /** Highest CO2 mole fraction of Cramer's 1993 fit. */
+    public static final double CRAMER_MAX_CO2 = 0.01;
     /** Molar gas constant as used by CIPM-2007, J/(mol K). */
     static final double R_MOLAR = 8.314472;
     /** Molar mass of water, kg/mol (CIPM-2007). */
@@ -52,17 +54,44 @@ public record AirProperties(double temperatureC, double relativeHumidityPct, dou
      * @throws IllegalArgumentException outside those ranges
      */
     public static AirProperties at(double temperatureC, double relativeHumidityPct) {
+        return of(temperatureC, relativeHumidityPct, CO2_MOLE_FRACTION);
+    }
+
+    /**
+     * Air with the given CO2 mole fraction (0..0.2; breath is about 0.04), e.g. inside an
+     * instrument while it is played. Up to {@link #CRAMER_MAX_CO2} speed of sound and gamma are
+     * Cramer's; above it Cramer's values at that limit are scaled by the ratio of the ideal-gas
+     * mixture ({@link IdealGasMixture}) at the actual and at the limiting CO2 fraction, so the
+     * two join without a step. Density follows CIPM-2007 with its CO2-for-O2 molar mass.
+     * Viscosity and thermal conductivity stay those of dry air at the temperature (water vapour
+     * and CO2 change them by about 1 %, which moves wall-loss pitch shifts by well under 0.1 cent).
+     *
+     * @throws IllegalArgumentException outside -50..60 C, 0..100 % or 0..0.2
+     */
+    public static AirProperties of(double temperatureC, double relativeHumidityPct, double co2MoleFraction) {
         if (!(temperatureC >= -50 && temperatureC <= 60)) {
             throw new IllegalArgumentException("temperatureC must be within -50..60, was " + temperatureC);
         }
         if (!(relativeHumidityPct >= 0 && relativeHumidityPct <= 100)) {
             throw new IllegalArgumentException("relativeHumidityPct must be within 0..100, was " + relativeHumidityPct);
         }
+        if (!(co2MoleFraction >= 0 && co2MoleFraction <= 0.2)) {
+            throw new IllegalArgumentException("co2MoleFraction must be within 0..0.2, was " + co2MoleFraction);
+        }
         double p = SEA_LEVEL_PA;
         double xw = MoistAir.waterMoleFraction(temperatureC, relativeHumidityPct, p);
-        double xc = CO2_MOLE_FRACTION;
-        double c = Cramer1993.speedOfSound(temperatureC, p, xw, xc);
-        double gamma = Cramer1993.ratioOfSpecificHeats(temperatureC, p, xw, xc);
+        double xc = co2MoleFraction;
+        double c;
+        double gamma;
+        if (xc <= CRAMER_MAX_CO2) {
+            c = Cramer1993.speedOfSound(temperatureC, p, xw, xc);
+            gamma = Cramer1993.ratioOfSpecificHeats(temperatureC, p, xw, xc);
+        } else {
+            double[] mix = IdealGasMixture.speedAndGamma(temperatureC, xw, xc);
+            double[] edge = IdealGasMixture.speedAndGamma(temperatureC, xw, CRAMER_MAX_CO2);
+            c = Cramer1993.speedOfSound(temperatureC, p, xw, CRAMER_MAX_CO2) * mix[0] / edge[0];
+            gamma = Cramer1993.ratioOfSpecificHeats(temperatureC, p, xw, CRAMER_MAX_CO2) * mix[1] / edge[1];
+        }
         double rho = MoistAir.density(temperatureC, p, xw, xc);
         double mu = Sutherland.viscosity(temperatureC + 273.15);
         double kappa = Sutherland.thermalConductivity(temperatureC + 273.15);

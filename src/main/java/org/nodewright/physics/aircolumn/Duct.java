@@ -4,7 +4,7 @@ package org.nodewright.physics.aircolumn;
  * A cylinder or conical frustum in the element chain, with the constants its matrix needs at
  * every frequency worked out once: the signed apex distances of a cone (x1 = r1 L / (r2 - r1),
  * x2 = x1 + L) and their ratios, 1/(pi r1 r2), S1, and Keefe's loss polynomials with the
- * element's radius powers, length, 1/(pi r1 r2) and S1 folded in ({@link #lossCoef}). The matrix
+ * element's radius powers, length, 1/(pi r1 r2), S1 and local air folded in ({@link #lossCoef}). The matrix
  * itself is {@link DuctKernel}.
  */
 final class Duct implements ChainElement {
@@ -35,6 +35,15 @@ final class Duct implements ChainElement {
      * [6..11] z/(pi r1 r2) re, im, [12..17] S1/z re, im, [18..23] q = 1/(1 + G) - 1 re, im.
      */
     final double[] lossCoef = new double[LOSS_COEFS];
+    /** The duct's air relative to the reference air. */
+    final LocalAir localAir;
+    /** c_ref / c, its inverse, sigma and 1 / (mean radius sigma): see {@link LocalAir}. */
+    final double kappa;
+    final double invKappa;
+    final double invRmSigma;
+    /** B's and C's lossless factors in reference units: zeta / (pi r1 r2) and S1 / zeta. */
+    final double zBase;
+    final double yBase;
 
     /**
      * @param start  position of the upstream end, m
@@ -42,7 +51,7 @@ final class Duct implements ChainElement {
      * @param r1     upstream radius, m (&gt; 0)
      * @param r2     downstream radius, m (&gt; 0)
      */
-    Duct(double start, double length, double r1, double r2, KeefeExpansion keefe) {
+    Duct(double start, double length, double r1, double r2, LocalAir localAir) {
         if (!(length > 0) || !(r1 > 0) || !(r2 > 0)) {
             throw new IllegalArgumentException("duct needs positive length and radii: L=" + length + " r1=" + r1
                     + " r2=" + r2);
@@ -55,6 +64,13 @@ final class Duct implements ChainElement {
         this.invPiR1R2 = 1 / (Math.PI * r1 * r2);
         this.invRm = 2 / (r1 + r2);
         this.cone = r1 != r2;
+        this.localAir = localAir;
+        this.kappa = localAir.kappa();
+        this.invKappa = 1 / kappa;
+        this.invRmSigma = invRm / localAir.sigma();
+        this.zBase = localAir.zeta() * invPiR1R2;
+        this.yBase = s1 / localAir.zeta();
+        KeefeExpansion keefe = localAir.keefe();
         if (cone) {
             double x1 = r1 * length / (r2 - r1);
             double x2 = x1 + length;
@@ -72,17 +88,18 @@ final class Duct implements ChainElement {
             ix12 = 0;
             lx12 = 0;
         }
+        // Loss terms with the local air (see LocalAir): 1/rv = invRm invSw / sigma, k = kappa k_ref.
         double rn = 1;
         for (int n = 0; n < 3; n++) {
-            rn *= invRm;
-            lossCoef[n] = -length * rn * keefe.g[2 * n + 1];
-            lossCoef[n + 3] = length * rn * keefe.g[2 * n];
-            lossCoef[n + 6] = invPiR1R2 * rn * keefe.z[2 * n];
-            lossCoef[n + 9] = invPiR1R2 * rn * keefe.z[2 * n + 1];
-            lossCoef[n + 12] = s1 * rn * keefe.zInv[2 * n];
-            lossCoef[n + 15] = s1 * rn * keefe.zInv[2 * n + 1];
-            lossCoef[n + 18] = rn * keefe.gInv[2 * n];
-            lossCoef[n + 21] = rn * keefe.gInv[2 * n + 1];
+            rn *= invRmSigma;
+            lossCoef[n] = -length * kappa * rn * keefe.g[2 * n + 1];
+            lossCoef[n + 3] = length * kappa * rn * keefe.g[2 * n];
+            lossCoef[n + 6] = zBase * rn * keefe.z[2 * n];
+            lossCoef[n + 9] = zBase * rn * keefe.z[2 * n + 1];
+            lossCoef[n + 12] = yBase * rn * keefe.zInv[2 * n];
+            lossCoef[n + 15] = yBase * rn * keefe.zInv[2 * n + 1];
+            lossCoef[n + 18] = invKappa * rn * keefe.gInv[2 * n];
+            lossCoef[n + 21] = invKappa * rn * keefe.gInv[2 * n + 1];
         }
     }
 
@@ -98,7 +115,7 @@ final class Duct implements ChainElement {
 
     @Override
     public double rotationLength() {
-        return length;
+        return length * kappa;
     }
 
     /** Radius at x (m from the input end of the bore), linear taper. */
@@ -107,8 +124,8 @@ final class Duct implements ChainElement {
     }
 
     /** The part of this duct from x (start &lt; x &lt; end) to its downstream end. */
-    Duct tail(double x, KeefeExpansion keefe) {
-        return new Duct(x, end() - x, radiusAt(x), r2, keefe);
+    Duct tail(double x) {
+        return new Duct(x, end() - x, radiusAt(x), r2, localAir);
     }
 
     @Override

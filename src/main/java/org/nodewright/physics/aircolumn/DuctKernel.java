@@ -60,7 +60,6 @@ final class DuctKernel {
         final AirProperties air;
         final KeefeExpansion keefe;
         final boolean losses;
-        final double nu;
         private final double c;
         private final double rhoOverMu;
         final double[] holeScratch = new double[4];
@@ -97,7 +96,6 @@ final class DuctKernel {
             this.air = air;
             this.keefe = keefe;
             this.losses = losses;
-            this.nu = Math.sqrt(air.prandtl());
             this.c = air.speedOfSound();
             this.rhoOverMu = air.density() / air.viscosity();
         }
@@ -137,13 +135,13 @@ final class DuctKernel {
         if (!w.losses) {
             w.a = 0;
             w.b = 0;
-            w.zSr = d.invPiR1R2;
+            w.zSr = d.zBase;
             w.zSi = 0;
-            w.ySr = d.s1;
+            w.ySr = d.yBase;
             w.ySi = 0;
-            w.ikr = w.invK;
+            w.ikr = w.invK * d.invKappa;
             w.iki = 0;
-        } else if (d.invRm * w.invSw <= KeefeExpansion.MAX_INV_RV) {
+        } else if (d.invRmSigma * w.invSw <= KeefeExpansion.MAX_INV_RV) {
             keefeTerms(d, w);
         } else {
             exactTerms(d, w);
@@ -158,25 +156,28 @@ final class DuctKernel {
         double kv = w.kv;
         w.a = kws * (lc[0] + v * (lc[1] + v * lc[2]));
         w.b = kws * (lc[3] + v * (lc[4] + v * lc[5]));
-        w.zSr = d.invPiR1R2 + v * (lc[6] + v * (lc[7] + v * lc[8]));
+        w.zSr = d.zBase + v * (lc[6] + v * (lc[7] + v * lc[8]));
         w.zSi = v * (lc[9] + v * (lc[10] + v * lc[11]));
-        w.ySr = d.s1 + v * (lc[12] + v * (lc[13] + v * lc[14]));
+        w.ySr = d.yBase + v * (lc[12] + v * (lc[13] + v * lc[14]));
         w.ySi = v * (lc[15] + v * (lc[16] + v * lc[17]));
-        w.ikr = w.invK + kv * (lc[18] + v * (lc[19] + v * lc[20]));
+        w.ikr = w.invK * d.invKappa + kv * (lc[18] + v * (lc[19] + v * lc[20]));
         w.iki = kv * (lc[21] + v * (lc[22] + v * lc[23]));
     }
 
     /** The exact Zwikker-Kosten form at the mean radius (narrow ducts at low frequency). */
     private static void exactTerms(Duct d, Frequency w) {
-        double[] ex = exactLoss(1 / (d.invRm * w.invSw), w.air.gamma(), w.nu);
-        w.a = -w.k * ex[1] * d.length;
-        w.b = w.k * ex[0] * d.length;
-        w.zSr = ex[2] * d.invPiR1R2;
-        w.zSi = ex[3] * d.invPiR1R2;
-        w.ySr = ex[4] * d.s1;
-        w.ySi = ex[5] * d.s1;
-        w.ikr = (1 + ex[6]) * w.invK;
-        w.iki = ex[7] * w.invK;
+        LocalAir la = d.localAir;
+        double[] ex = exactLoss(1 / (d.invRmSigma * w.invSw), la.air().gamma(), Math.sqrt(la.air().prandtl()));
+        double kl = w.k * d.kappa * d.length;
+        w.a = -kl * ex[1];
+        w.b = kl * ex[0];
+        w.zSr = ex[2] * d.zBase;
+        w.zSi = ex[3] * d.zBase;
+        w.ySr = ex[4] * d.yBase;
+        w.ySi = ex[5] * d.yBase;
+        double ik = w.invK * d.invKappa;
+        w.ikr = (1 + ex[6]) * ik;
+        w.iki = ex[7] * ik;
     }
 
     /**

@@ -13,22 +13,41 @@ import java.util.List;
 final class ElementChain {
 
     private static final double MAX_LOSSY_CONE_RATIO = 1.15;
+    /**
+     * Longest duct in a temperature gradient, m: over 5 mm the air at the midpoint gives each
+     * piece's travel time to second order in the (linear) temperature change.
+     */
+    static final double MAX_GRADIENT_PIECE = 0.005;
+    private static final int MAX_GRADIENT_PIECES = 400;
 
     private final ChainElement[] elements;
     private final Duct[] ducts;
     private final double length;
+    private final LocalAir outputAir;
 
-    private ElementChain(List<ChainElement> elements, double length) {
+    private ElementChain(List<ChainElement> elements, double length, LocalAir outputAir) {
         this.elements = elements.toArray(new ChainElement[0]);
         this.ducts = elements.stream().filter(Duct.class::isInstance).map(Duct.class::cast).toArray(Duct[]::new);
         this.length = length;
+        this.outputAir = outputAir;
         if (ducts.length == 0) {
             throw new IllegalStateException("no duct element");
         }
     }
 
-    /** The chain of column (its segments, holes and whether losses cut the cones finer). */
+    /**
+     * The chain of column (its segments, holes and whether losses cut the cones finer). With a
+     * breath whose temperature changes along the bore, ducts are also cut to at most
+     * {@link #MAX_GRADIENT_PIECE} metres, each in the air at its midpoint.
+     */
     static ElementChain of(AirColumn column, KeefeExpansion keefe) {
+        AirProperties ref = column.referenceAir();
+        Breath breath = column.breath();
+        double total = column.length();
+        boolean gradient = breath != null && breath.hasGradient();
+        LocalAir uniform = LocalAir.reference(ref, keefe);
+        java.util.function.DoubleFunction<LocalAir> airAt = gradient
+                ? x -> LocalAir.relative(breath.airAt(x / total), ref) : x -> uniform;
         List<ChainElement> out = new ArrayList<>();
         List<ToneHole> sorted = new ArrayList<>(column.holes());
         sorted.sort(Comparator.comparingDouble(ToneHole::position));
@@ -42,32 +61,37 @@ final class ElementChain {
                 ToneHole hole = sorted.get(h);
                 double at = hole.position();
                 if (at > from) {
-                    addDucts(out, from, at - from, seg.radiusAt(from - xs), seg.radiusAt(at - xs), losses, keefe);
+                    addDucts(out, from, at - from, seg.radiusAt(from - xs), seg.radiusAt(at - xs), losses, gradient,
+                            airAt);
                     from = at;
                 }
-                out.add(new SideHole(at, new ToneHoleModel(hole, seg.radiusAt(at - xs))));
+                out.add(new SideHole(at, new ToneHoleModel(hole, seg.radiusAt(at - xs)), airAt.apply(at)));
                 h++;
             }
             if (xe > from) {
-                addDucts(out, from, xe - from, seg.radiusAt(from - xs), seg.outputRadius(), losses, keefe);
+                addDucts(out, from, xe - from, seg.radiusAt(from - xs), seg.outputRadius(), losses, gradient, airAt);
             }
             xs = xe;
         }
-        return new ElementChain(out, column.length());
+        return new ElementChain(out, total, gradient ? airAt.apply(total) : uniform);
     }
 
     private static void addDucts(List<ChainElement> out, double from, double length, double ra, double rb,
-            boolean losses, KeefeExpansion keefe) {
+            boolean losses, boolean gradient, java.util.function.DoubleFunction<LocalAir> airAt) {
         int n = 1;
         if (losses && ra != rb) {
             double ratio = Math.max(ra, rb) / Math.min(ra, rb);
             n = (int) Math.ceil(Math.log(ratio) / Math.log(MAX_LOSSY_CONE_RATIO) - 1e-9);
             n = Math.max(1, Math.min(n, 64));
         }
+        if (gradient) {
+            n = Math.max(n, Math.min(MAX_GRADIENT_PIECES, (int) Math.ceil(length / MAX_GRADIENT_PIECE - 1e-9)));
+        }
         for (int i = 0; i < n; i++) {
             double a = ra + (rb - ra) * i / n;
             double b = ra + (rb - ra) * (i + 1) / n;
-            out.add(new Duct(from + length * i / n, length / n, a, b, keefe));
+            double x0 = from + length * i / n;
+            out.add(new Duct(x0, length / n, a, b, airAt.apply(x0 + length / (2 * n))));
         }
     }
 
@@ -120,6 +144,11 @@ final class ElementChain {
     /** The elements from the input end (a copy). */
     ChainElement[] toArray() {
         return elements.clone();
+    }
+
+    /** The air at the output end, relative to the reference air. */
+    LocalAir outputAir() {
+        return outputAir;
     }
 
     /** Total axial length, m. */

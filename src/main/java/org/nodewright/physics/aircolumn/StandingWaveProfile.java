@@ -109,8 +109,8 @@ public record StandingWaveProfile(double frequencyHz, double[] positions, double
             Duct d = (Duct) chain.get(e);
             DuctKernel.State s = downstream[e].copy();
             if (d.end() - x > 0) {
-                Duct tail = x > d.start ? d.tail(x, solver.keefe()) : d;
-                double th = k * tail.length;
+                Duct tail = x > d.start ? d.tail(x) : d;
+                double th = k * tail.rotationLength();
                 tail.propagate(w, Math.cos(th), -Math.sin(th), s);
             }
             out[0][j] = s.pr;

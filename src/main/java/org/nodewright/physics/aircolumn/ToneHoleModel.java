@@ -39,14 +39,27 @@ final class ToneHoleModel {
         double t = hole.chimney();
         double d2 = delta * delta;
         // Lefebvre & Scavone 2012: matching volume (after Nederveen) and inner length correction.
-        double tm = b * delta * (1 + 0.207 * d2 * delta) / 8;
-        this.ti = b * (0.822 + delta * (-0.095 + delta * (-1.566 + delta * (2.138 + delta * (-1.640
-                + delta * 0.502)))));
+        double tm = matchingLength(b, delta);
+        this.ti = innerLength(b, delta);
         // Lefebvre & Scavone 2012: series length corrections, open and closed.
         this.ta = open ? b * d2 * (-0.35 + 0.06 * Math.tanh(2.7 * t / b))
                 : b * d2 * (-0.12 - 0.17 * Math.tanh(2.4 * t / b));
         this.te = t + tm;
         this.invArea = 1 / (Math.PI * b * b);
+    }
+
+    /** Matching-volume length t_m = b delta (1 + 0.207 delta^3) / 8 (Lefebvre &amp; Scavone 2012, after Nederveen). */
+    static double matchingLength(double b, double delta) {
+        return b * delta * (1 + 0.207 * (delta * delta) * delta) / 8;
+    }
+
+    /**
+     * Inner length correction t_i = b (0.822 - 0.095 delta - 1.566 delta^2 + 2.138 delta^3
+     * - 1.640 delta^4 + 0.502 delta^5) of an open hole of radius b (Lefebvre &amp; Scavone 2012).
+     */
+    static double innerLength(double b, double delta) {
+        return b * (0.822 + delta * (-0.095 + delta * (-1.566 + delta * (2.138 + delta * (-1.640
+                + delta * 0.502)))));
     }
 
     /**

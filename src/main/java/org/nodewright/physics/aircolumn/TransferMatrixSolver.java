@@ -9,7 +9,10 @@ import java.util.stream.IntStream;
  * to the input end through each element of the bore's {@link ElementChain}, so P and U stay
  * continuous across every step in radius. Impedances are kept divided by rho c (units 1/m^2).
  * Ducts use {@link DuctKernel}, holes the T network of {@link ToneHoleModel}; the standing waves
- * ({@link StandingWaveProfile}) run the same chain and kernel.
+ * ({@link StandingWaveProfile}) run the same chain and kernel. A {@link MouthStage} at the input end
+ * (when the column has a mouth) carries the state from x = 0 to the player's side; with a breath
+ * every element sits in its own air ({@link LocalAir}) and impedances are referred to the air at
+ * x = 0.
  *
  * <p>Speed: on a uniform grid e^{-jkL} of each element is advanced by one complex rotation per
  * frequency (re-seeded exactly every 128 steps), so most element-frequency pairs need no sine,
@@ -30,16 +33,24 @@ public final class TransferMatrixSolver {
     private final ChainElement[] elements;
     private final double inputArea;
     private final double outputRadius;
+    private final AirProperties referenceAir;
+    private final LocalAir outputAir;
+    /** The player's end, or null for a bare input end. */
+    private final MouthStage mouth;
 
     public TransferMatrixSolver(AirColumn column) {
         this.column = column;
-        this.keefe = KeefeExpansion.forAir(column.air());
+        this.referenceAir = column.referenceAir();
+        this.keefe = KeefeExpansion.forAir(referenceAir);
         this.chain = ElementChain.of(column, keefe);
         this.elements = chain.toArray();
+        this.outputAir = chain.outputAir();
         List<BoreSegment> segments = column.segments();
         BoreSegment first = segments.get(0);
         inputArea = Math.PI * first.inputRadius() * first.inputRadius();
         outputRadius = segments.get(segments.size() - 1).outputRadius();
+        mouth = column.mouth() == null ? null
+                : new MouthStage(column.mouth(), first.inputRadius(), LocalAir.reference(referenceAir, keefe));
     }
 
     public AirColumn column() {
@@ -66,12 +77,25 @@ public final class TransferMatrixSolver {
 
     /** Fresh per-thread frequency terms for this bore. */
     DuctKernel.Frequency frequencyTerms() {
-        return new DuctKernel.Frequency(column.air(), keefe, column.losses());
+        return new DuctKernel.Frequency(referenceAir, keefe, column.losses());
     }
 
-    /** Writes the output end's load at wavenumber k into s. */
+    /** The air impedances are referred to (the air inside at x = 0). */
+    public AirProperties referenceAir() {
+        return referenceAir;
+    }
+
+    /** The cup's Helmholtz frequency (Hz) when the mouth is a cup, else NaN. */
+    public double mouthHelmholtzHz() {
+        return mouth == null ? Double.NaN : mouth.helmholtzHz(referenceAir.speedOfSound());
+    }
+
+    /** Writes the output end's load at reference wavenumber k into s (in the output end's air). */
     void load(double k, DuctKernel.State s) {
-        Radiation.outputLoad(column.outputEnd(), k, outputRadius, s);
+        Radiation.outputLoad(column.outputEnd(), k * outputAir.kappa(), outputRadius, s);
+        double zeta = outputAir.zeta();
+        s.pr *= zeta;
+        s.pi *= zeta;
     }
 
     /**
@@ -102,7 +126,7 @@ public final class TransferMatrixSolver {
         double[] stepRe = new double[count];
         double[] stepIm = new double[count];
         double[] rotLen = new double[count];
-        double dk = 2 * Math.PI * df / column.air().speedOfSound();
+        double dk = 2 * Math.PI * df / referenceAir.speedOfSound();
         for (int e = 0; e < count; e++) {
             rotLen[e] = elements[e].rotationLength();
             stepRe[e] = Math.cos(dk * rotLen[e]);
@@ -131,6 +155,9 @@ public final class TransferMatrixSolver {
                 rotRe[e] = er;
                 rotIm[e] = ei;
                 elements[e].propagate(w, er, ei, s);
+            }
+            if (mouth != null) {
+                mouth.apply(w, s);
             }
             double d = s.ur * s.ur + s.ui * s.ui;
             outRe[i] = (s.pr * s.ur + s.pi * s.ui) / d * inputArea;

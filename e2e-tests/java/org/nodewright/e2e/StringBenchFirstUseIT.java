@@ -1,0 +1,158 @@
+package org.nodewright.e2e;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.within;
+
+import java.util.List;
+import java.util.Map;
+import org.junit.jupiter.api.BeforeEach;
+import org.junit.jupiter.api.Test;
+import org.openqa.selenium.By;
+import org.openqa.selenium.WebElement;
+
+/**
+ * The string bench as a new user meets it: words instead of parser messages, decimal commas, an
+ * empty pitch named on its own field, pickups that always land on the string, sliders that stay
+ * inside it, and a switch from pitch to tension that keeps the pitch.
+ */
+class StringBenchFirstUseIT extends StringPageTestBase {
+
+    @BeforeEach
+    void openBench() {
+        driver.get(url("/strings"));
+        waitFor(By.id("string-form"));
+        js("document.addEventListener('nodewright:string-analyzed', e => { window.lastAnalysis = e.detail; "
+                + "window.analysisCount = (window.analysisCount || 0) + 1; });");
+        wait.until(d -> js("return !!Chart.getChart(document.getElementById('mode-shapes-chart'));"));
+        waitIdle();
+    }
+
+    private void type(String id, String text) {
+        WebElement input = driver.findElement(By.id(id));
+        input.clear();
+        input.sendKeys(text);
+    }
+
+    private void waitIdle() {
+        wait.until(d -> Boolean.TRUE.equals(js("return document.getElementById('busy').hidden;")));
+    }
+
+    private long analyses() {
+        return ((Number) js("return window.analysisCount || 0;")).longValue();
+    }
+
+    private void analyze() {
+        long before = analyses();
+        driver.findElement(By.id("analyze-button")).click();
+        wait.until(d -> analyses() > before);
+        waitIdle();
+    }
+
+    @Test
+    void textInANumberFieldIsAnsweredInWordsAndADecimalCommaIsANumber() {
+        type("diameterMm", "abc");
+        driver.findElement(By.id("analyze-button")).click();
+        String message = errorText("diameterMm");
+        assertThat(message).startsWith("enter a number");
+        assertThat(driver.findElement(By.id("form-problem")).getText())
+                .doesNotContainIgnoringCase("coerce").doesNotContain("could not be read");
+        assertThat(driver.findElement(By.cssSelector(".bench-results")).getAttribute("class")).contains("stale");
+
+        // 0,30 is 0.30 mm, as on the bore bench.
+        type("diameterMm", "0,30");
+        analyze();
+        assertThat(num(js("return window.lastAnalysis.request.diameterMm;"))).isEqualTo(0.30);
+        assertThat(driver.findElements(By.cssSelector("[data-error-for='diameterMm']"))).isEmpty();
+    }
+
+    @Test
+    void anEmptyTargetPitchIsNamedOnThePitchField() {
+        type("targetHz", "");
+        driver.findElement(By.id("analyze-button")).click();
+        assertThat(errorText("targetHz")).contains("target pitch");
+        assertThat(driver.findElement(By.id("targetHz")).getAttribute("class")).contains("invalid");
+        assertThat(driver.findElement(By.id("tensionN")).getAttribute("class")).doesNotContain("invalid");
+    }
+
+    @Test
+    void aPitchWithItsUnitTypedIsAPitch() {
+        type("targetHz", "329.63 Hz");
+        analyze();
+        assertThat(num(js("return window.lastAnalysis.request.targetHz;"))).isEqualTo(329.63);
+    }
+
+    @Test
+    @SuppressWarnings("unchecked")
+    void addedPickupsLandOnTheStringApartUntilThereIsNoRoom() {
+        for (int i = 0; i < 12; i++) {
+            driver.findElement(By.id("add-pickup")).click();
+        }
+        waitIdle();
+        List<Object> positions = (List<Object>) js(
+                "return [...document.querySelectorAll('.pickup-position')].map(e => Number(e.value));");
+        assertThat(positions.size()).isBetween(4, 13);
+        List<Double> sorted = positions.stream().map(StringPageTestBase::num).sorted().toList();
+        // Inside the string (0 < x < L = 650 mm) and at least 20 mm apart (two coil widths centre to centre).
+        assertThat(sorted.get(0)).isGreaterThan(0.0);
+        assertThat(sorted.get(sorted.size() - 1)).isLessThan(650.0);
+        for (int i = 1; i < sorted.size(); i++) {
+            assertThat(sorted.get(i) - sorted.get(i - 1)).isGreaterThanOrEqualTo(19.9);
+        }
+        assertThat(driver.findElement(By.id("pickup-note")).getText()).contains("No room");
+        // The server takes every position the page placed.
+        analyze();
+        assertThat(driver.findElements(By.cssSelector(".pickup-row .invalid"))).isEmpty();
+        assertThat((List<Object>) js("return window.lastAnalysis.request.pickups;")).hasSize(positions.size());
+    }
+
+    @Test
+    void slidersStayInsideTheStringAndLeaveATypedPositionAsTyped() {
+        WebElement slider = driver.findElement(By.id("slider-pickup0"));
+        double min = Double.parseDouble(slider.getAttribute("min"));
+        double max = Double.parseDouble(slider.getAttribute("max"));
+        double step = Double.parseDouble(slider.getAttribute("step"));
+        assertThat(min).isGreaterThan(0.0);
+        assertThat(max).isLessThan(650.0);
+        // 610 mm sits on a step, so the slider shows it exactly.
+        assertThat(Double.parseDouble(slider.getAttribute("value"))).isEqualTo(610.0);
+        assertThat((610.0 - min) / step).isCloseTo(Math.rint((610.0 - min) / step), within(1e-9));
+        assertThat(driver.findElement(By.id("pickup-0-position")).getAttribute("value")).isEqualTo("610");
+    }
+
+    @Test
+    void switchingFromPitchToTensionKeepsTheSolvedTension() {
+        type("targetHz", "E4");
+        analyze();
+        double atPitch = num(js("return window.lastAnalysis.response.fundamentalHz;"));
+        long before = analyses();
+        driver.findElement(By.cssSelector("input[name='drive'][value='tension']")).click();
+        wait.until(d -> analyses() > before && Boolean.TRUE.equals(js("return 'tensionN' in window.lastAnalysis.request;")));
+        waitIdle();
+        double atTension = num(js("return window.lastAnalysis.response.fundamentalHz;"));
+        // The solved tension is what the tension field starts from, so the pitch stays put (the
+        // old typed 70 N moved E4 by -9.3 cents): within a thousandth of a cent.
+        assertThat(Math.abs(1200 * Math.log(atTension / atPitch) / Math.log(2))).isLessThan(0.001);
+    }
+
+    @Test
+    void aDesignSavedInInchesAndPoundsReopensSoAndTheNameIsKept() {
+        new org.openqa.selenium.support.ui.Select(driver.findElement(By.id("length-unit"))).selectByValue("inch");
+        new org.openqa.selenium.support.ui.Select(driver.findElement(By.id("force-unit"))).selectByValue("lbf");
+        WebElement bar = waitFor(By.cssSelector("#design-bar[data-ready='true']"));
+        bar.findElement(By.cssSelector("[data-role='name']")).sendKeys("Parlour first string in inches");
+        bar.findElement(By.cssSelector("[data-role='who']")).sendKeys("Ada");
+        bar.findElement(By.cssSelector("[data-role='save']")).click();
+        wait.until(d -> d.findElement(By.id("design-bar")).getAttribute("data-design-id") != null);
+        String id = driver.findElement(By.id("design-bar")).getAttribute("data-design-id");
+
+        // A later visit in this browser, with the page's units back at their defaults.
+        js("localStorage.removeItem('nodewright.units.strings');");
+        driver.get(url("/strings?design=" + id));
+        wait.until(d -> id.equals(d.findElement(By.id("design-bar")).getAttribute("data-design-id")));
+        assertThat(driver.findElement(By.id("length-unit")).getAttribute("value")).isEqualTo("inch");
+        assertThat(driver.findElement(By.id("force-unit")).getAttribute("value")).isEqualTo("lbf");
+        // 650 mm = 25.59055 inch (1 inch = 25.4 mm exactly).
+        assertThat(driver.findElement(By.id("lengthMm")).getAttribute("value")).isEqualTo("25.59055");
+        assertThat(driver.findElement(By.cssSelector("#design-bar [data-role='who']")).getAttribute("value")).isEqualTo("Ada");
+    }
+}

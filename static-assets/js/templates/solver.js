@@ -1,0 +1,243 @@
+// The bore panel: a bore (from the demo or the bore bench), its drilling template, and the
+// tone-hole solver (a job polled for progress, cancellable, whose result can be applied to the
+// bore and opened in the bore bench).
+import { clearFieldErrors, getJson, postJson, sendJson } from '../common/api.js';
+import { fmt } from '../common/units.js';
+import { OPEN_AIR_COLUMN, BORE_FOR_TEMPLATES, handOver, handedOver } from '../common/handover.js';
+import { $, t, num, postForBlob, showProblem, say, showImage, download } from './shared.js';
+
+
+const POLL_MS = 200;
+const state = { job: null, result: null, timer: null, limits: {} };
+
+const borePanel = $('bore-panel');
+
+function readBore() {
+  try {
+    return { bore: JSON.parse($('bore-json').value), problem: null };
+  } catch (err) {
+    return { bore: null, problem: { errors: [{ field: 'bore', message: t('badJson', err.message) }] } };
+  }
+}
+
+/** Fingerings as text lines; holes shown from 1 (the API counts closedHoles from 0). */
+function fingeringLines(fingerings) {
+  return fingerings.map((f) => `${f.name}, ${f.targetNote ?? f.targetHz}, ${(f.closedHoles || []).map((h) => h + 1).join(' ')}`).join('\n');
+}
+
+/** The fingering lines as the API's fingerings (closedHoles from 0). */
+function readFingerings() {
+  const rows = [];
+  const problems = [];
+  $('fingering-lines').value.split('\n').forEach((line, i) => {
+    if (!line.trim()) return;
+    const parts = line.split(',').map((s) => s.trim());
+    const closed = (parts[2] ?? '').split(/\s+/).filter(Boolean).map(Number);
+    if (parts.length < 2 || !parts[0] || !parts[1] || closed.some((n) => !Number.isInteger(n) || n < 1)) {
+      problems.push({ field: 'fingerings', message: t('badLine', i + 1) });
+      return;
+    }
+    const hz = num(parts[1]);
+    rows.push({
+      name: parts[0], closedHoles: closed.map((n) => n - 1),
+      ...(Number.isFinite(hz) ? { targetHz: hz } : { targetNote: parts[1] }), register: 1,
+    });
+  });
+  return { rows, problems };
+}
+
+function limits() {
+  const get = (id) => num($(id).value);
+  return {
+    ...state.limits,
+    varyDiameters: $('vary-diameters').checked, varyFoot: $('vary-foot').checked,
+    minDiameterMm: get('min-diameter'), maxDiameterMm: get('max-diameter'), minWallMm: get('min-wall'),
+  };
+}
+
+/** Puts a bore (an air-column request, fingerings included or not) into the panel. */
+function showBore(request) {
+  const bore = { ...request };
+  const fingerings = bore.fingerings || [];
+  delete bore.fingerings;
+  $('bore-json').value = JSON.stringify(bore, null, 1);
+  if (fingerings.length) $('fingering-lines').value = fingeringLines(fingerings);
+}
+
+async function loadDemo() {
+  const answer = await getJson('/api/v1/inverse/tone-holes/demo').catch((error) => ({ ok: false, problem: { detail: String(error) } }));
+  if (!answer.ok) {
+    showProblem(borePanel, $('bore-message'), { detail: t('demoFailed', answer.problem?.detail ?? answer.status) });
+    return;
+  }
+  showBore(answer.data.bore);
+  const l = answer.data.limits || {};
+  state.limits = { minPositionMm: l.minPositionMm, endMarginMm: l.endMarginMm, minFootMm: l.minFootMm, maxFootMm: l.maxFootMm };
+  if (l.minDiameterMm) $('min-diameter').value = l.minDiameterMm;
+  if (l.maxDiameterMm) $('max-diameter').value = l.maxDiameterMm;
+  if (l.minWallMm !== undefined && l.minWallMm !== null) $('min-wall').value = l.minWallMm;
+  $('vary-foot').checked = l.varyFoot !== false;
+  $('vary-diameters').checked = !!l.varyDiameters;
+}
+
+function fromBench() {
+  let handed;
+  try {
+    handed = handedOver(BORE_FOR_TEMPLATES);
+  } catch (error) {
+    showProblem(borePanel, $('bore-message'), { detail: t('badJson', error.message) });
+    return;
+  }
+  if (!handed) {
+    say($('bore-message'), t('noBench'));
+    return;
+  }
+  state.limits = {};
+  showBore(handed.request || handed);
+  say($('bore-message'), t('fromBench'));
+}
+
+async function boreTemplate(kind) {
+  clearFieldErrors(borePanel);
+  const { bore, problem } = readBore();
+  if (problem) {
+    showProblem(borePanel, $('bore-message'), problem);
+    return;
+  }
+  const paper = $('bore-paper').value;
+  const url = kind === 'pdf' ? `/api/v1/templates/tone-holes.pdf?paper=${encodeURIComponent(paper)}` : '/api/v1/templates/tone-holes.svg';
+  const answer = await postForBlob(url, bore);
+  if (!answer.ok) {
+    showProblem(borePanel, $('bore-message'), answer.problem);
+    return;
+  }
+  if (kind === 'pdf') {
+    download(answer.blob, `tone-holes-${paper}.pdf`);
+    say($('bore-message'), t('downloaded', `tone-holes-${paper}.pdf`));
+  } else {
+    showImage($('bore-image'), answer.blob, 'bore');
+    say($('bore-message'), '');
+  }
+}
+
+function setRunning(running) {
+  $('solve-start').disabled = running;
+  $('solve-cancel').disabled = !running;
+}
+
+async function startSolve() {
+  clearFieldErrors(borePanel);
+  const { bore, problem } = readBore();
+  const f = readFingerings();
+  if (problem || f.problems.length) {
+    showProblem(borePanel, $('bore-message'), { errors: [...(problem ? problem.errors : []), ...f.problems] });
+    return;
+  }
+  const answer = await postJson('/api/v1/inverse/tone-holes', { bore: { ...bore, fingerings: f.rows }, limits: limits() });
+  if (!answer.ok) {
+    showProblem(borePanel, $('bore-message'), answer.problem);
+    return;
+  }
+  say($('bore-message'), '');
+  $('solve-result').hidden = true;
+  state.job = answer.data.id;
+  setRunning(true);
+  $('solve-progress').value = 0;
+  poll();
+}
+
+async function poll() {
+  if (!state.job) return;
+  const answer = await getJson(`/api/v1/inverse/jobs/${encodeURIComponent(state.job)}`);
+  if (!answer.ok) {
+    setRunning(false);
+    $('solve-state').textContent = t('error', answer.status);
+    return;
+  }
+  const job = answer.data;
+  const progress = $('solve-progress');
+  progress.value = job.status === 'succeeded' ? 1 : job.progress.fraction;
+  $('solve-state').dataset.status = job.status;
+  if (job.status === 'queued') {
+    $('solve-state').textContent = t('queued');
+  } else if (job.status === 'running') {
+    $('solve-state').textContent = t('running', job.progress.evaluations,
+      job.progress.worstCents == null ? '...' : fmt(job.progress.worstCents, 2));
+  } else {
+    finish(job);
+    return;
+  }
+  state.timer = setTimeout(poll, POLL_MS);
+}
+
+function finish(job) {
+  setRunning(false);
+  state.job = null;
+  if (job.status === 'cancelled') {
+    $('solve-state').textContent = t('cancelled');
+    return;
+  }
+  if (job.status === 'failed') {
+    $('solve-state').textContent = t('failed', job.error);
+    return;
+  }
+  const r = job.result;
+  state.result = r;
+  $('solve-state').textContent = r.withinTolerance ? t('succeeded', fmt(job.elapsedSeconds, 2), fmt(r.toleranceCents, 2))
+    : t('notConverged', fmt(job.elapsedSeconds, 2), fmt(r.worstCents, 2));
+  const cell = (tr, text) => { const td = document.createElement('td'); td.textContent = text; tr.appendChild(td); };
+  const notes = $('note-rows');
+  notes.replaceChildren();
+  r.notes.forEach((n) => {
+    const tr = document.createElement('tr');
+    tr.dataset.cents = n.achievedCents;
+    cell(tr, n.fingering); cell(tr, fmt(n.targetHz, 2)); cell(tr, fmt(n.startCents, 1));
+    cell(tr, fmt(n.achievedHz, 2)); cell(tr, fmt(n.achievedCents, 2));
+    notes.appendChild(tr);
+  });
+  const holes = $('hole-rows');
+  holes.replaceChildren();
+  r.holes.forEach((h) => {
+    const tr = document.createElement('tr');
+    cell(tr, String(h.hole)); cell(tr, fmt(h.positionMm, 2)); cell(tr, fmt(h.movedMm, 2));
+    cell(tr, fmt(h.diameterMm, 2)); cell(tr, fmt(h.diameterChangeMm, 2));
+    holes.appendChild(tr);
+  });
+  $('foot-line').textContent = t('foot', fmt(r.footMovedMm, 2));
+  $('solve-result').hidden = false;
+}
+
+async function cancelSolve() {
+  if (!state.job) return;
+  clearTimeout(state.timer);
+  const answer = await sendJson('DELETE', `/api/v1/inverse/jobs/${encodeURIComponent(state.job)}`);
+  // A running job stops at its next evaluation: keep polling until it says so.
+  if (answer.ok) poll();
+}
+
+function applyResult() {
+  if (!state.result) return;
+  showBore(state.result.bore);
+  say($('bore-message'), t('applied'));
+}
+
+/**
+ * Hands the adjusted bore to the bore bench unsaved (sessionStorage); the bore bench opens it and
+ * says that it is not saved yet. Nothing goes to the shop library until someone saves it there.
+ */
+function openInBench() {
+  if (!state.result) return;
+  handOver(OPEN_AIR_COLUMN, { source: 'templates', request: state.result.bore });
+  window.location.assign('/air-columns#from-templates');
+}
+
+$('bore-demo').addEventListener('click', loadDemo);
+$('bore-from-bench').addEventListener('click', fromBench);
+$('bore-preview').addEventListener('click', () => boreTemplate('preview'));
+$('bore-pdf').addEventListener('click', () => boreTemplate('pdf'));
+$('solve-start').addEventListener('click', startSolve);
+$('solve-cancel').addEventListener('click', cancelSolve);
+$('solve-apply').addEventListener('click', applyResult);
+$('solve-open').addEventListener('click', openInBench);
+
+if (sessionStorage.getItem(BORE_FOR_TEMPLATES)) fromBench(); else loadDemo();
