@@ -101,7 +101,7 @@ public class AnswerBenchmark {
                 .configure(StreamWriteFeature.USE_FAST_DOUBLE_WRITER, fastDoubles)
                 .configure(StreamReadFeature.USE_FAST_DOUBLE_PARSER, fastDoubles)
                 .build();
-        mapper = JsonMapper.builder(factory).build();
+        mapper = JsonMapper.builder(factory).addModule(org.nodewright.web.EnumWords.module()).build();
         stringService = instance("org.nodewright.strings.StringAnalysisService");
         stringAnalyze = method(stringService, "analyze", StringAnalysisRequest.class);
         airController = instance("org.nodewright.aircolumns.AirColumnController");

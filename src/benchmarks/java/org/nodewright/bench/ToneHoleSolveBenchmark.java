@@ -2,9 +2,9 @@ package org.nodewright.bench;
 
 import java.util.List;
 import java.util.concurrent.TimeUnit;
+import org.nodewright.inverse.DemoWhistle;
 import org.nodewright.physics.aircolumn.Fingering;
 import org.nodewright.physics.inverse.AirCoreFrequencyModel;
-import org.nodewright.physics.inverse.DemoWhistle;
 import org.nodewright.physics.inverse.HoleLayout;
 import org.nodewright.physics.inverse.SolveProgress;
 import org.nodewright.physics.inverse.ToneHoleSolution;

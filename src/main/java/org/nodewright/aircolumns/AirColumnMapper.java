@@ -108,8 +108,11 @@ public final class AirColumnMapper {
         return out;
     }
 
-    /** The analysis as the JSON answer of {@code POST /api/v1/air-columns/analyze}. */
-    public static AirColumnResponse response(AirColumnRequest req, AirColumnAnalysis a) {
+    /**
+     * The analysis as the JSON answer of {@code POST /api/v1/air-columns/analyze}, with the core's
+     * warnings as worded by {@link AirColumnWording}.
+     */
+    public static AirColumnResponse response(AirColumnRequest req, AirColumnAnalysis a, List<String> warnings) {
         AirProperties air = a.air();
         List<AirColumnResponse.ResonanceItem> items = new ArrayList<>();
         List<AirColumnResponse.Profile> profiles = new ArrayList<>();
@@ -139,7 +142,7 @@ public final class AirColumnMapper {
                 new AirColumnResponse.Air(air.temperatureC(), air.relativeHumidityPct(), air.density(),
                         air.viscosity(), air.thermalConductivity(), air.gamma(), air.specificHeatCp(), along(a)),
                 items, new AirColumnResponse.Impedance(a.frequencyHz(), finite(a.magnitude()), finite(a.phaseRad())),
-                EnumWords.word(a.series()), profiles, fs, a.warnings(), mouth(a));
+                EnumWords.word(a.series()), profiles, fs, warnings, mouth(a));
     }
 
     private static List<AirColumnResponse.AirAlongBore> along(AirColumnAnalysis a) {

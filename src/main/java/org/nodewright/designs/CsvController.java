@@ -56,6 +56,11 @@ class CsvController {
         table(request, response, DesignKind.STRING_SET, request.getInputStream().readAllBytes(), "string-set.csv");
     }
 
+    @PostMapping(path = "/api/v1/bars/modes.csv", consumes = "application/json")
+    void barModes(HttpServletRequest request, HttpServletResponse response) throws Exception {
+        table(request, response, DesignKind.BAR, request.getInputStream().readAllBytes(), "bar-modes.csv");
+    }
+
     /** Same query as {@code GET /api/v1/frets}. */
     @GetMapping("/api/v1/frets.csv")
     void frets(HttpServletRequest request, HttpServletResponse response) throws Exception {
@@ -77,6 +82,7 @@ class CsvController {
             case STRING -> "modes";
             case AIR_COLUMN -> "resonances";
             case STRING_SET -> "strings";
+            case BAR -> "modes";
             case PLATE -> "modes";
         };
         runAndWrite(request, new BodyRequest(request, "POST", body), response, kind.analyzePath(), rows, filename);

@@ -4,6 +4,7 @@ import com.fasterxml.jackson.annotation.JsonProperty;
 import java.util.Arrays;
 import java.util.Optional;
 import org.nodewright.aircolumns.AirColumnRequest;
+import org.nodewright.bars.BarAnalysisRequest;
 import org.nodewright.plates.PlateAnalysisRequest;
 import org.nodewright.strings.StringAnalysisRequest;
 import org.nodewright.strings.StringSetRequest;
@@ -25,6 +26,9 @@ public enum DesignKind {
     @JsonProperty("air-column")
     AIR_COLUMN("air-column", AirColumnRequest.class, "/api/v1/air-columns/analyze",
             "/air-columns"),
+
+    @JsonProperty("bar")
+    BAR("bar", BarAnalysisRequest.class, "/api/v1/bars/analyze", "/bars"),
 
     @JsonProperty("plate")
     PLATE("plate", PlateAnalysisRequest.class, "/api/v1/plates/analyze", "/plates");

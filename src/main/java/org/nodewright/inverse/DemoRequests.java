@@ -6,7 +6,6 @@ import org.nodewright.aircolumns.AirColumnRequest;
 import org.nodewright.physics.aircolumn.Fingering;
 import org.nodewright.physics.aircolumn.InputEnd;
 import org.nodewright.physics.aircolumn.OutputEnd;
-import org.nodewright.physics.inverse.DemoWhistle;
 import org.nodewright.physics.inverse.SolverLimits;
 import org.nodewright.physics.tuning.EqualTemperament;
 
@@ -18,8 +17,8 @@ final class DemoRequests {
 
     static ToneHoleSolveRequest whistle() {
         List<AirColumnRequest.Hole> holes = new ArrayList<>();
-        for (int i = 0; i < DemoWhistle.POSITIONS_MM.length; i++) {
-            holes.add(new AirColumnRequest.Hole(DemoWhistle.POSITIONS_MM[i], DemoWhistle.DIAMETERS_MM[i],
+        for (int i = 0; i < DemoWhistle.POSITIONS_MM.size(); i++) {
+            holes.add(new AirColumnRequest.Hole(DemoWhistle.POSITIONS_MM.get(i), DemoWhistle.DIAMETERS_MM.get(i),
                     DemoWhistle.CHIMNEY_MM, true));
         }
         List<AirColumnRequest.FingeringSpec> fingerings = new ArrayList<>();

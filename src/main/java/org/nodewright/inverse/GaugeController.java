@@ -9,7 +9,7 @@ import org.nodewright.physics.inverse.GaugePicker;
 import org.nodewright.physics.inverse.GaugeStock;
 import org.nodewright.physics.strings.Material;
 import org.nodewright.physics.strings.Materials;
-import org.nodewright.physics.strings.StressCheck;
+import org.nodewright.strings.StressWording;
 import org.nodewright.strings.StringRules;
 import org.nodewright.web.FieldProblem;
 import org.springframework.web.bind.annotation.PostMapping;
@@ -22,6 +22,12 @@ import org.springframework.web.bind.annotation.RestController;
 class GaugeController {
 
     private static final double INCH_MM = 25.4;
+
+    private final StressWording wording;
+
+    GaugeController(StressWording wording) {
+        this.wording = wording;
+    }
 
     @PostMapping(path = "/api/v1/inverse/gauges", consumes = "application/json")
     @Operation(summary = "Pick gauges for a target tension profile (or one string's gauge for one tension)",
@@ -54,9 +60,9 @@ class GaugeController {
                     : request.availableGaugesMm().stream().map(mm -> mm * 1e-3).toList();
             GaugePicker.Pick p = GaugePicker.pick(t, gauges);
             total += p.choice().tensionN();
-            picks.add(GaugeResponse.StringPick.of(p));
+            picks.add(GaugeResponse.StringPick.of(p, wording.warnings(p.stress())));
         }
-        return new GaugeResponse(picks, total, StressCheck.CAUTION);
+        return new GaugeResponse(picks, total, wording.caution());
     }
 
     record GaugeResponse(List<StringPick> strings, double totalTensionN, String caution) {
@@ -72,7 +78,7 @@ class GaugeController {
                 double linearDensityKgPerM, double tensionN, double offPct, double exactDiameterMm,
                 double stressPa, double stressPct, Neighbour thinner, Neighbour thicker, List<String> warnings) {
 
-            static StringPick of(GaugePicker.Pick p) {
+            static StringPick of(GaugePicker.Pick p, List<String> stressWarnings) {
                 var c = p.choice().construction();
                 double outerMm = p.choice().outerDiameterM() * 1e3;
                 boolean wound = p.target().wound();
@@ -81,15 +87,15 @@ class GaugeController {
                         wound ? c.coreDiameterM() * 1e3 : null, wound ? c.wrapDiameterM() * 1e3 : null,
                         c.linearDensityKgPerM(), p.choice().tensionN(), 100 * p.offFraction(),
                         p.exactDiameterM() * 1e3, p.stress().stressPa(), 100 * p.stress().fractionOfStrength(),
-                        Neighbour.of(p.thinner()), Neighbour.of(p.thicker()), warnings(p, outerMm));
+                        Neighbour.of(p.thinner()), Neighbour.of(p.thicker()), warnings(p, outerMm, stressWarnings));
             }
 
             /**
              * The stress warnings, and one when the closest gauge on offer misses the target
              * tension by more than {@link #OFF_TARGET_PCT} (a stock list without the gauge needed).
              */
-            private static List<String> warnings(GaugePicker.Pick p, double outerMm) {
-                List<String> out = new ArrayList<>(p.stress().warnings());
+            private static List<String> warnings(GaugePicker.Pick p, double outerMm, List<String> stressWarnings) {
+                List<String> out = new ArrayList<>(stressWarnings);
                 double offPct = 100 * p.offFraction();
                 if (Math.abs(offPct) > OFF_TARGET_PCT) {
                     out.add(String.format(java.util.Locale.ROOT, "the nearest gauge on offer (%s mm) gives %s N, %s %% %s "

@@ -67,6 +67,11 @@ class ToneHoleSolveController {
 
     @ExceptionHandler(SolveJobs.Busy.class)
     ResponseEntity<ProblemDetail> busy(SolveJobs.Busy e) {
+        return busyProblem(e);
+    }
+
+    /** The 429 problem document of a full solve queue (every solve controller answers with it). */
+    static ResponseEntity<ProblemDetail> busyProblem(SolveJobs.Busy e) {
         ProblemDetail pd = ProblemDetail.forStatusAndDetail(HttpStatus.TOO_MANY_REQUESTS, e.getMessage());
         pd.setTitle("Solver busy");
         return ResponseEntity.status(HttpStatus.TOO_MANY_REQUESTS).contentType(MediaType.APPLICATION_PROBLEM_JSON).body(pd);

@@ -39,7 +39,7 @@ public record StringAnalysisResponse(
      * from the bridge ({@code nodesFromBridgeMm}, {@code antinodesFromBridgeMm}, ascending from the
      * bridge). {@code pickupOutput} = excitation × gain; {@code combinedResponse} = g1 ± g2.
      * {@code shapeX} (mm) and {@code shape} are chart samples, written to six significant digits
-     * ({@link ChartPrecision}); both null when the request says {@code "shapes": "none"}.
+     * ({@link ChartPrecision}); both null for {@code ?shapes=none}.
      */
     public record ModeJson(
             int n,

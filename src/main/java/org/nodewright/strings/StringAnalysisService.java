@@ -25,6 +25,12 @@ class StringAnalysisService {
 
     private static final double MM = 1e-3;
 
+    private final StressWording wording;
+
+    StringAnalysisService(StressWording wording) {
+        this.wording = wording;
+    }
+
     StringAnalysisResponse analyze(StringAnalysisRequest r) {
         return analyze(r, true);
     }
@@ -79,7 +85,7 @@ class StringAnalysisService {
         return StringConstruction.wound(core, diameterMm * MM, Materials.get(wrapMaterial), wrapDiameterMm * MM);
     }
 
-    private static StringAnalysisResponse toResponse(StringAnalysisRequest r, StringAnalysis a, boolean withShapes) {
+    private StringAnalysisResponse toResponse(StringAnalysisRequest r, StringAnalysis a, boolean withShapes) {
         double lengthMm = r.lengthMm();
         List<StringAnalysisResponse.ModeJson> modes = new ArrayList<>();
         for (StringAnalysis.ModeResponse m : a.modes()) {
@@ -93,7 +99,7 @@ class StringAnalysisService {
                 a.model().waveSpeedMps(), a.fundamentalHz(), a.model().idealFundamentalHz(), a.model().inharmonicityB(),
                 stress == null ? null : stress.stressPa(), strength,
                 strength == null ? null : stress.fractionOfStrength(),
-                stress == null ? List.of() : stress.warnings(), StressCheck.CAUTION,
+                wording.warnings(stress), wording.caution(),
                 new StringAnalysisResponse.NoteJson(note.name(), note.midi(), note.frequencyHz(), note.centsOff()),
                 r.referenceA4OrDefault(), EnumWords.word(r.endOrDefault()), r.stiffnessOn(),
                 clampedShapes ? "clamped-beam-under-tension" : "sine",

@@ -22,6 +22,12 @@ class StringGaugeController {
 
     private static final double MM = 1e-3;
 
+    private final StressWording wording;
+
+    StringGaugeController(StressWording wording) {
+        this.wording = wording;
+    }
+
     @PostMapping(path = "/api/v1/strings/gauge", consumes = MediaType.APPLICATION_JSON_VALUE,
             produces = MediaType.APPLICATION_JSON_VALUE)
     GaugeJson gauge(@Valid @RequestBody StringGaugeRequest r) {
@@ -45,7 +51,7 @@ class StringGaugeController {
         Note note = new EqualTemperament(r.referenceA4OrDefault()).nearest(r.targetHz());
         return new GaugeJson(wound ? "wrapDiameterMm" : "diameterMm", d / MM, c.coreDiameterM() / MM,
                 wound ? d / MM : null, c.outerDiameterM() / MM, c.linearDensityKgPerM(), r.tensionN(), stress.stressPa(),
-                core.tensileStrengthPa(), stress.fractionOfStrength(), stress.warnings(), StressCheck.CAUTION,
+                core.tensileStrengthPa(), stress.fractionOfStrength(), wording.warnings(stress), wording.caution(),
                 new StringAnalysisResponse.NoteJson(note.name(), note.midi(), note.frequencyHz(), note.centsOff()));
     }
 

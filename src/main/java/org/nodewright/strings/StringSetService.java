@@ -17,6 +17,12 @@ class StringSetService {
     /** Standard gravity, 9.80665 m/s² (CGPM 1901), for kilogram-force. */
     private static final double G0 = 9.80665;
 
+    private final StressWording wording;
+
+    StringSetService(StressWording wording) {
+        this.wording = wording;
+    }
+
     StringSetResponse analyze(StringSetRequest r) {
         List<SetString> strings = new ArrayList<>();
         for (StringSetRequest.Member m : r.strings()) {
@@ -36,16 +42,17 @@ class StringSetService {
             StringSets.Member m = result.members().get(i);
             StressCheck s = m.stress();
             String label = r.strings().get(i).label();
-            for (String w : s.warnings()) {
-                all.add("string " + (i + 1) + (label == null ? "" : " (" + label + ")") + ": " + w);
+            List<String> warnings = wording.warnings(s);
+            for (String w : warnings) {
+                all.add(wording.memberWarning(i, label, w));
             }
             out.add(new StringSetResponse.StringJson(i, label, m.string().lengthM() * 1e3, m.string().targetHz(),
                     m.tensionN(), m.tensionN() / G0, m.linearDensityKgPerM(), s.stressPa(), s.tensileStrengthPa(),
-                    s.fractionOfStrength(), s.warnings(), new StringAnalysisResponse.NoteJson(m.note().name(),
+                    s.fractionOfStrength(), warnings, new StringAnalysisResponse.NoteJson(m.note().name(),
                             m.note().midi(), m.note().frequencyHz(), m.note().centsOff()),
                     StressLevel.of(s.fractionOfStrength())));
         }
         return new StringSetResponse(out, result.totalTensionN(), result.totalTensionN() / G0, all,
-                StressCheck.CAUTION, StringSets.NECK_CAUTION);
+                wording.caution(), wording.neckCaution());
     }
 }

@@ -12,7 +12,7 @@ import org.nodewright.physics.tuning.Note;
  */
 public record AirColumnAnalysis(AirProperties air, double[] frequencyHz, double[] magnitude, double[] phaseRad,
         List<ResonanceResult> resonances, HarmonicSeries series, List<FingeringResult> fingerings,
-        List<String> warnings, MouthEffect mouth, List<AirPoint> airAlongBore, double speedOfSound) {
+        List<AirColumnWarning> warnings, MouthEffect mouth, List<AirPoint> airAlongBore, double speedOfSound) {
 
     /**
      * The air inside at one point of the bore (with a breath).

@@ -43,7 +43,7 @@ public final class AirColumnAnalyzer {
             throw new IllegalArgumentException("need 0 < fMin < fMax and points >= 2: " + fMin + ", " + fMax + ", "
                     + points);
         }
-        List<String> warnings = new ArrayList<>();
+        List<AirColumnWarning> warnings = new ArrayList<>();
         TransferMatrixSolver solver = new TransferMatrixSolver(column);
         double df = (fMax - fMin) / (points - 1);
         double[] re = new double[points];
@@ -57,7 +57,7 @@ public final class AirColumnAnalyzer {
         }
         List<Resonance> found = resonances(solver, fMin, fMax, df, re, im);
         if (found.size() >= MAX_RESONANCES) {
-            warnings.add("only the lowest " + MAX_RESONANCES + " resonances are listed");
+            warnings.add(new AirColumnWarning.ResonanceCap(MAX_RESONANCES));
         }
         HarmonicSeries series = HarmonicSeries.of(column);
         List<AirColumnAnalysis.ResonanceResult> results = new ArrayList<>();
@@ -139,7 +139,7 @@ public final class AirColumnAnalyzer {
     }
 
     private AirColumnAnalysis.FingeringResult predict(AirColumn column, Fingering f, double fMin, double fMax,
-            List<String> warnings) {
+            List<AirColumnWarning> warnings) {
         List<ToneHole> holes = new ArrayList<>();
         for (int i = 0; i < column.holes().size(); i++) {
             holes.add(column.holes().get(i).withOpen(!f.closedHoles().contains(i)));
@@ -153,8 +153,7 @@ public final class AirColumnAnalyzer {
         solver.inputImpedance(fMin, d, n, re, im);
         List<Resonance> rs = new ResonanceFinder(solver).find(fMin, d, re, im, f.register());
         if (rs.size() < f.register()) {
-            warnings.add("fingering " + label(f) + ": register " + f.register() + " not found between " + fMin
-                    + " and " + fMax + " Hz");
+            warnings.add(new AirColumnWarning.RegisterNotFound(f.name(), f.register(), fMin, fMax));
             return new AirColumnAnalysis.FingeringResult(f, Double.NaN, Double.NaN, null, Double.NaN);
         }
         Resonance r = rs.get(f.register() - 1);
@@ -162,24 +161,18 @@ public final class AirColumnAnalyzer {
                 temperament.nearest(r.frequencyHz()), r.q());
     }
 
-    private static String label(Fingering f) {
-        return f.name() == null || f.name().isBlank() ? "(unnamed)" : f.name();
-    }
-
-    private static void addRangeWarnings(AirColumn column, double fMax, List<String> warnings) {
+    private static void addRangeWarnings(AirColumn column, double fMax, List<AirColumnWarning> warnings) {
         double rMax = 0;
         for (BoreSegment s : column.segments()) {
             rMax = Math.max(rMax, Math.max(s.inputRadius(), s.outputRadius()));
         }
         double ka = 2 * Math.PI * fMax / column.referenceAir().speedOfSound() * rMax;
         if (ka > 1.84) {
-            warnings.add(String.format(java.util.Locale.ROOT,
-                    "ka reaches %.2f: above 1.84 the first cross-mode can propagate and the plane-wave model is "
-                            + "no longer exact", ka));
+            warnings.add(new AirColumnWarning.CrossModes(ka));
         }
         double t = column.air().temperatureC();
         if (t < 0 || t > 30) {
-            warnings.add("Cramer's 1993 speed-of-sound fit is stated for 0..30 C; " + t + " C is outside it");
+            warnings.add(new AirColumnWarning.OutsideSpeedFit(t));
         }
     }
 }

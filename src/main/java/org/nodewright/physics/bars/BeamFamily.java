@@ -85,12 +85,15 @@ final class BeamFamily {
         double[] gamma = new double[nl];
         double[][] ke = new double[nl][nl];
         double[][] me = new double[nl][nl];
-        double[] fxi = GaussLegendre.points(kind.fullPoints);
-        double[] fwt = GaussLegendre.weights(kind.fullPoints);
-        double[] sxi = GaussLegendre.points(SHEAR_POINTS);
-        double[] swt = GaussLegendre.weights(SHEAR_POINTS);
+        double[] breaks = s.breakpoints(bar.length());
         for (int el = 0; el < ne; el++) {
             double h = x[el + 1] - x[el];
+            double[][] full = Mesh.quadrature(x[el], x[el + 1], breaks, kind.fullPoints);
+            double[] fxi = full[0];
+            double[] fwt = full[1];
+            double[][] reduced = Mesh.quadrature(x[el], x[el + 1], breaks, SHEAR_POINTS);
+            double[] sxi = reduced[0];
+            double[] swt = reduced[1];
             kind.shapes(h, nw, npsi);
             for (int i = 0; i < nl; i++) {
                 java.util.Arrays.fill(ke[i], 0.0);
@@ -195,6 +198,57 @@ final class BeamFamily {
             }
         }
         return new ModeLine(x, c);
+    }
+
+    /**
+     * dλ/dt per unit length at each position: the first-order change of mode q's eigenvalue λ = ω²
+     * when the thickness of a rectangle grows by dt over a short length dx is (this) · dt · dx
+     * (the eigenvalue derivative φᵀ(dK − λ dM)φ of an M-normalised mode, Fox and Kapoor, AIAA J. 6,
+     * 1968), with ∂A/∂t = b, ∂I/∂t = b t²/4 at the actual thickness.
+     */
+    double[] thicknessSensitivity(int q, double[] positions) {
+        RectangleSection r = (RectangleSection) bar.section();
+        boolean timo = theory == BeamTheory.TIMOSHENKO;
+        int nl = element.localDofs;
+        double[][] nw = new double[nl][4];
+        double[][] npsi = new double[nl][4];
+        double[] v = vectors[q];
+        double lambda = eigenvalues[q];
+        double e = bar.youngsModulus();
+        double kg = shearCoefficient * bar.shearModulus();
+        double rho = bar.density();
+        double[] out = new double[positions.length];
+        for (int k = 0; k < positions.length; k++) {
+            double pos = positions[k];
+            int el = java.util.Arrays.binarySearch(x, pos);
+            el = el >= 0 ? Math.min(el, x.length - 2) : -el - 2;
+            el = Math.max(0, Math.min(el, x.length - 2));
+            double h = x[el + 1] - x[el];
+            double xi = (pos - x[el]) / h;
+            element.shapes(h, nw, npsi);
+            int base = element.stride * el;
+            double w = 0;
+            double psi = 0;
+            double dpsi = 0;
+            double dw = 0;
+            for (int i = 0; i < nl; i++) {
+                double d = v[base + i];
+                w += d * ModeLine.horner(nw[i], xi);
+                dw += d * ModeLine.derivative(nw[i], xi) / h;
+                psi += d * ModeLine.horner(npsi[i], xi);
+                dpsi += d * ModeLine.derivative(npsi[i], xi) / h;
+            }
+            double t = r.profile().thicknessAt(pos);
+            double dA = r.width();
+            double dI = r.width() * t * t / 4;
+            double ds = e * dI * dpsi * dpsi - lambda * rho * dA * w * w;
+            if (timo) {
+                double gamma = dw - psi;
+                ds += kg * dA * gamma * gamma - lambda * rho * dI * psi * psi;
+            }
+            out[k] = ds;
+        }
+        return out;
     }
 
     static double inertia(BarSection s, boolean lateral, double pos) {

@@ -35,12 +35,14 @@ final class TwistingFamily {
         double[][] m = new double[dof][dof];
         double[] n = new double[3];
         double[] dn = new double[3];
+        double[] breaks = s.breakpoints(bar.length());
         for (int el = 0; el < ne; el++) {
             double h = x[el + 1] - x[el];
             int base = 2 * el;
-            for (int q = 0; q < RULE; q++) {
-                double xi = GaussLegendre.points(RULE)[q];
-                double wq = GaussLegendre.weights(RULE)[q] * h;
+            double[][] rule = Mesh.quadrature(x[el], x[el + 1], breaks, RULE);
+            for (int q = 0; q < rule[0].length; q++) {
+                double xi = rule[0][q];
+                double wq = rule[1][q] * h;
                 double pos = x[el] + xi * h;
                 double gj = g * s.torsionConstant(pos);
                 double rip = rho * s.polarSecondMoment(pos);

@@ -8,9 +8,6 @@ import org.nodewright.physics.tuning.Note;
 /** Tension of every string of a set at its target pitch and the total load on the neck. */
 public final class StringSets {
 
-    public static final String NECK_CAUTION = "The total is the static pull of the strings on the neck and "
-            + "bridge: judge the neck, truss rod and bridge against their makers' data; this is not a rating.";
-
     private StringSets() {
     }
 

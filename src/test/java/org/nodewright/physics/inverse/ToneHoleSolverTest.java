@@ -8,6 +8,7 @@ import java.util.concurrent.atomic.AtomicInteger;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.ValueSource;
+import org.nodewright.inverse.DemoWhistle;
 import org.nodewright.physics.tuning.Cents;
 
 class ToneHoleSolverTest {
