@@ -28,9 +28,30 @@ function render(request, response) {
   syncSliders();
 }
 
+/** The request without what moves no mode shape (pluck, pickups, their combination). */
+const shapeKey = (r) => JSON.stringify({ ...r, pluck: undefined, pickups: undefined, pickupCombination: undefined });
+
+/**
+ * Sends the analysis. A move of the pluck or a pickup changes no mode shape, so when only those
+ * differ from the answer shown, the lighter answer (?shapes=none, no shape samples) is asked for
+ * and the shapes already shown are kept in it.
+ */
+function send(request) {
+  const last = loop.last;
+  const reuse = last && shapeKey(last.request) === shapeKey(request)
+    && last.response.modes.every((m) => Array.isArray(m.shape));
+  if (!reuse) return postJson('/api/v1/strings/analyze', request);
+  return postJson('/api/v1/strings/analyze?shapes=none', request).then((answer) => {
+    if (answer.ok && answer.data.modes.length === last.response.modes.length) {
+      answer.data.modes.forEach((m, i) => { m.shapeX = last.response.modes[i].shapeX; m.shape = last.response.modes[i].shape; });
+    }
+    return answer;
+  });
+}
+
 const loop = createRequestLoop({
   build: buildRequest,
-  send: (request) => postJson('/api/v1/strings/analyze', request),
+  send,
   event: 'nodewright:string-analyzed',
   view: formView({
     form, message: $('form-problem'), busy: $('busy'), render,

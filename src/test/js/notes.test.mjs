@@ -62,3 +62,10 @@ test('a typed pitch: Hz with or without the unit, a decimal comma, or a note', (
   assert.equal(pitchHz('E4 Hz'), null);
   assert.equal(pitchHz('loud'), null);
 });
+
+test('a number of hertz as typed', async () => {
+  const { hzNumber } = await import('../../../static-assets/js/common/notes.js');
+  assert.equal(hzNumber('329.63 Hz'), 329.63);
+  assert.equal(hzNumber('82,41'), 82.41);
+  assert.ok(Number.isNaN(hzNumber('E2')));
+});

@@ -12,8 +12,14 @@ const NODE = '#a3262a';
 
 const hasAnnotations = () => typeof Chart !== 'undefined' && Chart.registry?.plugins?.get?.('annotation');
 
-/** Draws anew through the shared helper, which puts other panels' overlays back (a measured curve). */
-const replaceChart = (canvas, config) => drawChart(canvas, config, { replace: true });
+/**
+ * Draws through the shared helper: the chart already on the canvas is updated in place without
+ * animation, and other panels' overlays (a measured curve) are put back.
+ */
+const replaceChart = (canvas, config) => drawChart(canvas, config);
+
+/** Long curves are thinned to what the chart's width shows; min-max keeps every peak and dip. */
+const DECIMATION = { enabled: true, algorithm: 'min-max' };
 
 /** Log-axis ticks at whole decades only, written plainly (1000, 10, 0.01). */
 function decade(value) {
@@ -57,7 +63,8 @@ export function drawImpedance(canvas, impedance, resonances, { showPhase, inputC
           title: { display: true, text: t('phase') }, grid: { drawOnChartArea: false } },
       },
       // The phase has a legend entry only while it is shown; overlays (a measured curve) always have one.
-      plugins: { legend: { labels: { filter: (item) => showPhase || item.datasetIndex !== 1 } }, annotation: { annotations } },
+      plugins: { legend: { labels: { filter: (item) => showPhase || item.datasetIndex !== 1 } }, annotation: { annotations },
+        decimation: DECIMATION },
     },
   });
 }

@@ -59,6 +59,11 @@ export function nearestNote(hz, a4 = A4_HZ, { flats = false } = {}) {
 /** True when a note name is written with flats (so that answers can be spelt the same way). */
 export const spelledWithFlats = (text) => (parseNote(text)?.accidental ?? 0) < 0;
 
+/** A frequency as typed: "329.63", "329,63" or "329.63 Hz"; NaN when the text is no number of hertz. */
+export function hzNumber(text) {
+  return parseNumber(String(text ?? '').trim().replace(/\s*hz$/i, ''));
+}
+
 /**
  * A pitch as a user types it: a frequency ("329.63", "329,63", "329.63 Hz") or a note name.
  * Resolves to Hz, or null when the text is neither (empty text is null too).
@@ -66,7 +71,7 @@ export const spelledWithFlats = (text) => (parseNote(text)?.accidental ?? 0) < 0
 export function pitchHz(text, a4 = A4_HZ) {
   const s = String(text ?? '').trim();
   if (s === '') return null;
-  const hz = parseNumber(s.replace(/\s*hz$/i, ''));
+  const hz = hzNumber(s);
   if (Number.isFinite(hz)) return hz;
   return noteHz(s, a4);
 }

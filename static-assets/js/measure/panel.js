@@ -42,7 +42,8 @@ export function sig(value, digits = 6) {
   return String(Number(value.toPrecision(digits)));
 }
 
-export const centsBetween = (hz, refHz) => 1200 * Math.log2(hz / refHz);
+/** Cents between two frequencies: the one formula, in common/notes.js. */
+export { cents as centsBetween } from '../common/notes.js';
 
 /** Listens for a page event on window in the capture phase, whether dispatched on document or window. */
 export function onPageEvent(name, handler) {

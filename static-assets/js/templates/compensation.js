@@ -1,7 +1,7 @@
 // Saddle (and nut) compensation for a set of strings.
 import { clearFieldErrors, postJson } from '../common/api.js';
 import { fmt } from '../common/units.js';
-import { $, t, num, showProblem, say } from './shared.js';
+import { $, t, num, hz as typedHz, showProblem, say } from './shared.js';
 
 const compForm = $('comp-form');
 $('comp-strings').value = ['E4, nylon, 0.71', 'B3, nylon, 0.82', 'G3, nylon, 1.03', 'D3, nylon, 0.38, copper, 0.16',
@@ -30,7 +30,7 @@ compForm.addEventListener('submit', async (e) => {
       problems.push({ field: 'strings', message: t('badLine', i + 1) });
       return;
     }
-    const hz = num(p[0]);
+    const hz = typedHz(p[0]);
     request.strings.push({
       ...(Number.isFinite(hz) ? { targetHz: hz } : { note: p[0] }), material: p[1], diameterMm: d,
       ...(p.length === 5 ? { wrapMaterial: p[3], wrapDiameterMm: wd } : {}),

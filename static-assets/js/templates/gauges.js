@@ -1,7 +1,7 @@
 // Gauge picker: the gauge per string for a target tension, from the catalogue or a stock list.
 import { clearFieldErrors, postJson } from '../common/api.js';
 import { fmt } from '../common/units.js';
-import { $, t, num, showProblem, say } from './shared.js';
+import { $, t, num, hz as typedHz, showProblem, say } from './shared.js';
 
 const gaugeForm = $('gauge-form');
 $('gauge-strings').value = ['E4, 72, plain-steel', 'B3, 68, plain-steel', 'G3, 70, plain-steel',
@@ -22,7 +22,7 @@ function gaugeRequest() {
       return;
     }
     const [material, wrapMaterial] = parts[2].split('/');
-    const hz = num(parts[0]);
+    const hz = typedHz(parts[0]);
     strings.push({
       ...(Number.isFinite(hz) ? { targetHz: hz } : { note: parts[0] }),
       targetTensionN: tension, material, ...(wrapMaterial ? { wrapMaterial } : {}),

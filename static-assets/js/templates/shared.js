@@ -3,12 +3,16 @@
 import { csrfHeaders, showFieldErrors } from '../common/api.js';
 import { pageText } from '../common/text.js';
 import { parseNumber } from '../common/units.js';
+import { hzNumber } from '../common/notes.js';
 
 export const $ = (id) => document.getElementById(id);
 export const t = pageText('#tpl-text', 'tpl.js.');
 
 /** A typed number (the one rule of every page: a decimal comma is a point); NaN when empty or no number. */
 export const num = (text) => parseNumber(text);
+
+/** A typed pitch that is a number of hertz ("329.63", "329,63 Hz"), else NaN (then it is sent as a note name). */
+export const hz = (text) => hzNumber(text);
 
 /** POSTs JSON and resolves to {ok, blob, problem}: for SVG and PDF answers. */
 export async function postForBlob(url, body) {

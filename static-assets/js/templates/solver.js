@@ -4,7 +4,7 @@
 import { clearFieldErrors, getJson, postJson, sendJson } from '../common/api.js';
 import { fmt } from '../common/units.js';
 import { OPEN_AIR_COLUMN, BORE_FOR_TEMPLATES, handOver, handedOver } from '../common/handover.js';
-import { $, t, num, postForBlob, showProblem, say, showImage, download } from './shared.js';
+import { $, t, num, hz as typedHz, postForBlob, showProblem, say, showImage, download } from './shared.js';
 
 
 const POLL_MS = 200;
@@ -37,7 +37,7 @@ function readFingerings() {
       problems.push({ field: 'fingerings', message: t('badLine', i + 1) });
       return;
     }
-    const hz = num(parts[1]);
+    const hz = typedHz(parts[1]);
     rows.push({
       name: parts[0], closedHoles: closed.map((n) => n - 1),
       ...(Number.isFinite(hz) ? { targetHz: hz } : { targetNote: parts[1] }), register: 1,

@@ -155,4 +155,20 @@ class StringBenchFirstUseIT extends StringPageTestBase {
         assertThat(driver.findElement(By.id("lengthMm")).getAttribute("value")).isEqualTo("25.59055");
         assertThat(driver.findElement(By.cssSelector("#design-bar [data-role='who']")).getAttribute("value")).isEqualTo("Ada");
     }
+
+    @Test
+    void inInchesAMessageSpeaksInchesWithoutFloatNoise() {
+        new org.openqa.selenium.support.ui.Select(driver.findElement(By.id("length-unit"))).selectByValue("inch");
+        type("lengthMm", "25.5");
+        type("pluckPosition", "30");
+        driver.findElement(By.id("analyze-button")).click();
+        // 25.5 in = 647.7 mm, which the server saw as 647.6999999999999 mm; the page says 25.5 in.
+        // (Clearing the field sends an empty position first; wait for the answer to the typed one.)
+        String message = wait.until(d -> {
+            String m = (String) js("const e = document.querySelector('[data-error-for=\"pluck.positionMm\"]');"
+                    + "return e ? e.textContent : null;");
+            return m != null && m.contains("bridge") ? m : null;
+        });
+        assertThat(message).contains("25.5 in").doesNotContain("mm").doesNotContain("6999");
+    }
 }

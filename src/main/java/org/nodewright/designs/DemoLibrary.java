@@ -87,14 +87,18 @@ class DemoLibrary implements InitializingBean {
             return List.of();
         }
         List<Design> added = new ArrayList<>();
-        for (List<DesignStore.Snapshot> history : histories()) {
+        for (List<DesignStore.Snapshot> history : histories(false)) {
             added.add(store.createWithHistory(history));
         }
         return added;
     }
 
-    /** Every demo design of every kind as its history, oldest revision first, each checked like a save. */
-    List<List<DesignStore.Snapshot>> histories() {
+    /**
+     * Every demo design of every kind as its history, oldest revision first, each checked like a
+     * save. A refused revision throws when {@code strict} (the tests); at start-up its design is
+     * left out with a logged error, so that a demo file never stops the server.
+     */
+    List<List<DesignStore.Snapshot>> histories(boolean strict) {
         List<List<DesignStore.Snapshot>> out = new ArrayList<>();
         // Revisions a day apart, ending an hour ago, so the history reads like a workshop's.
         Instant end = DesignStore.now().minus(Duration.ofHours(1));
@@ -112,19 +116,28 @@ class DemoLibrary implements InitializingBean {
                 }
                 JsonNode revisions = d.get("revisions");
                 List<DesignStore.Snapshot> history = new ArrayList<>();
-                for (int i = 0; i < revisions.size(); i++) {
+                boolean refused = false;
+                for (int i = 0; i < revisions.size() && !refused; i++) {
                     JsonNode r = revisions.get(i);
                     DesignContent content = new DesignContent(d.get("name").asString(), kind, r.get("parameters"),
                             d.path("notes").asString(""), tags);
                     List<FieldProblem> problems = library.problems(content, "");
                     if (!problems.isEmpty()) {
-                        throw new IllegalStateException("demo/" + kind.word() + ".json: \"" + content.name()
-                                + "\" revision " + (i + 1) + " is refused: " + problems);
+                        String why = "demo/" + kind.word() + ".json: \"" + content.name() + "\" revision " + (i + 1)
+                                + " is refused: " + problems;
+                        if (strict) {
+                            throw new IllegalStateException(why);
+                        }
+                        log.error("{}; that demo design is left out.", why);
+                        refused = true;
+                        continue;
                     }
                     Instant at = end.minus(Duration.ofDays(revisions.size() - 1 - i));
                     history.add(new DesignStore.Snapshot(content, AUTHOR, at, r.path("comment").asString("")));
                 }
-                out.add(history);
+                if (!refused) {
+                    out.add(history);
+                }
             }
         }
         return out;

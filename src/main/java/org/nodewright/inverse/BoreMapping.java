@@ -44,7 +44,8 @@ public final class BoreMapping {
     static AirCoreFrequencyModel model(AirColumnRequest r) {
         double[] chimneys = holes(r).stream().mapToDouble(h -> h.chimneyMm()).toArray();
         return new AirCoreFrequencyModel(AirColumnMapper.segments(r), chimneys, r.inputEnd(), r.outputEnd(),
-                AirColumnMapper.air(r), r.lossesOrDefault());
+                AirColumnMapper.air(r), r.lossesOrDefault(), AirColumnMapper.mouth(r.mouth()),
+                AirColumnMapper.breath(r.breath()));
     }
 
     /** The request with the solved holes and foot: what "apply" hands back to the bore bench. */
@@ -60,6 +61,7 @@ public final class BoreMapping {
                     old.get(i).open()));
         }
         return new AirColumnRequest(segs, r.inputEnd(), r.outputEnd(), hs, r.temperatureC(), r.relativeHumidityPct(),
-                r.losses(), r.fMinHz(), r.fMaxHz(), r.points(), r.referenceA4Hz(), r.profileSamples(), r.fingerings());
+                r.losses(), r.fMinHz(), r.fMaxHz(), r.points(), r.referenceA4Hz(), r.profileSamples(), r.fingerings(),
+                r.mouth(), r.breath());
     }
 }

@@ -10,6 +10,8 @@ import org.hipparchus.optim.univariate.UnivariateObjectiveFunction;
 import org.nodewright.physics.aircolumn.AirColumn;
 import org.nodewright.physics.aircolumn.AirProperties;
 import org.nodewright.physics.aircolumn.BoreSegment;
+import org.nodewright.physics.aircolumn.Breath;
+import org.nodewright.physics.aircolumn.Mouth;
 import org.nodewright.physics.aircolumn.Fingering;
 import org.nodewright.physics.aircolumn.InputEnd;
 import org.nodewright.physics.aircolumn.OutputEnd;
@@ -41,6 +43,9 @@ public final class AirCoreFrequencyModel implements PlayingFrequencyModel {
     private final AirProperties air;
     private final boolean losses;
     private final double sign;
+    /** The player's end and the breath, taken along into every fingering (null: none). */
+    private final Mouth mouth;
+    private final Breath breath;
 
     /**
      * @param segments   the bore from the input end, metres (the last one's length is replaced by the foot)
@@ -48,6 +53,12 @@ public final class AirCoreFrequencyModel implements PlayingFrequencyModel {
      */
     public AirCoreFrequencyModel(List<BoreSegment> segments, double[] chimneysMm, InputEnd inputEnd,
             OutputEnd outputEnd, AirProperties air, boolean losses) {
+        this(segments, chimneysMm, inputEnd, outputEnd, air, losses, null, null);
+    }
+
+    /** The same with the player's end and the breath (either may be null). */
+    public AirCoreFrequencyModel(List<BoreSegment> segments, double[] chimneysMm, InputEnd inputEnd,
+            OutputEnd outputEnd, AirProperties air, boolean losses, Mouth mouth, Breath breath) {
         if (segments == null || segments.isEmpty() || inputEnd == null || outputEnd == null || air == null) {
             throw new IllegalArgumentException("segments, ends and air are required");
         }
@@ -58,6 +69,8 @@ public final class AirCoreFrequencyModel implements PlayingFrequencyModel {
         this.air = air;
         this.losses = losses;
         this.sign = inputEnd == InputEnd.CLOSED ? 1 : -1;
+        this.mouth = mouth;
+        this.breath = breath;
     }
 
     /** Bore length up to the last section, mm. */
@@ -82,7 +95,7 @@ public final class AirCoreFrequencyModel implements PlayingFrequencyModel {
             holes.add(new ToneHole(layout.position(h) * MM, layout.diameter(h) * MM / 2, chimneysMm[h] * MM,
                     !fingering.closedHoles().contains(h)));
         }
-        return new AirColumn(segs, holes, inputEnd, outputEnd, air, losses);
+        return new AirColumn(segs, holes, inputEnd, outputEnd, air, losses, mouth, breath);
     }
 
     @Override
