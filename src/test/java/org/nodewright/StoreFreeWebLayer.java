@@ -14,7 +14,8 @@ import org.springframework.core.type.filter.TypeFilter;
 public final class StoreFreeWebLayer implements TypeFilter {
 
     static final List<String> PACKAGES = List.of("org.nodewright.strings.", "org.nodewright.aircolumns.",
-            "org.nodewright.templates.", "org.nodewright.measurements.", "org.nodewright.inverse.", "org.nodewright.plates.", "org.nodewright.bars.",
+            "org.nodewright.templates.", "org.nodewright.measurements.", "org.nodewright.inverse.",
+            "org.nodewright.plates.", "org.nodewright.bars.",
             "org.nodewright.web.");
 
     static final String LOCAL_SECURITY = "org.nodewright.sharing.SecurityConfig";

@@ -118,15 +118,32 @@ class CsvController {
             }
         }
         StringBuilder out = new StringBuilder();
-        out.append(String.join(",", columns.stream().map(CsvController::cell).toList())).append("\r\n");
+        out.append(String.join(",", columns.stream().map(c -> cell(c, true)).toList())).append("\r\n");
         for (JsonNode row : rows) {
             List<String> cells = new ArrayList<>();
             for (String c : columns) {
-                cells.add(cell(text(row.get(c))));
+                JsonNode v = row.get(c);
+                cells.add(cell(text(v), !numeric(v)));
             }
             out.append(String.join(",", cells)).append("\r\n");
         }
         return out.toString();
+    }
+
+    /** A number, or an array of numbers only (written joined with ';'). */
+    private static boolean numeric(JsonNode v) {
+        if (v == null) {
+            return false;
+        }
+        if (v.isArray()) {
+            for (JsonNode x : v) {
+                if (!x.isNumber()) {
+                    return false;
+                }
+            }
+            return true;
+        }
+        return v.isNumber();
     }
 
     private static String text(JsonNode v) {
@@ -144,10 +161,14 @@ class CsvController {
         return v.asString();
     }
 
-    /** RFC 4180 quoting; a leading =, +, - or @ is kept as text so that a spreadsheet does not run it. */
-    private static String cell(String s) {
+    /**
+     * RFC 4180 quoting; text (not a number: -3.2 stays a number) starting with =, +, -, @, a tab or a
+     * carriage return gets a leading apostrophe so that a spreadsheet keeps it as text and does not
+     * run it as a formula (OWASP's CSV injection advice).
+     */
+    private static String cell(String s, boolean text) {
         String v = s;
-        if (!v.isEmpty() && "=+@".indexOf(v.charAt(0)) >= 0) {
+        if (text && !v.isEmpty() && "=+-@\t\r".indexOf(v.charAt(0)) >= 0) {
             v = "'" + v;
         }
         if (v.contains(",") || v.contains("\"") || v.contains("\n") || v.contains("\r") || v.contains(";")) {

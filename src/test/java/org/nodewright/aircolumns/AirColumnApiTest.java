@@ -11,6 +11,7 @@ import java.util.List;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
+import org.junit.jupiter.params.provider.ValueSource;
 import org.nodewright.StoreFreeWebTest;
 import org.springframework.beans.factory.annotation.Autowired;
 import org.springframework.http.MediaType;
@@ -75,6 +76,41 @@ class AirColumnApiTest {
         assertThat(open).isGreaterThan(closed * 1.1);
         assertThat((Double) JsonPath.read(json, "$.fingerings[0].targetHz")).isCloseTo(554.365,
                 org.assertj.core.data.Offset.offset(0.01));
+    }
+
+    // The server reads fingering targets with the one note grammar (src/test/resources/tuning/note-names.csv):
+    // flats and sharps as letters or as the signs U+266D/U+266F, doubled, across the octave boundary
+    // (Cb4 = B3, B#3 = C4), two-digit and negative octaves. Frequencies: 440 * 2^((midi - 69)/12) at
+    // A4 = 440 Hz (ISO 16), the table's values (Python 3 math.pow), to 1e-9 relative.
+    @ParameterizedTest
+    @CsvSource(delimiter = '|', textBlock = """
+            Cb4  | 246.94165062806206
+            B#3  | 261.62556530059862
+            Bb3  | 233.08188075904496
+            B♭4  | 466.16376151808993
+            C♯4  | 277.18263097687208
+            F##2 | 97.998858995437331
+            E-1  | 10.300861153527183
+            C10  | 16744.036179238312
+            """)
+    void fingeringTargetsFollowTheSharedNoteGrammar(String note, double hz) throws Exception {
+        String body = STOPPED_PIPE.replace("\"losses\": false", "\"losses\": false, \"holes\": [{\"positionMm\": "
+                + "100.0, \"diameterMm\": 6.0, \"chimneyMm\": 3.0}], \"fingerings\": [{\"closedHoles\": [0], "
+                + "\"targetNote\": \"" + note + "\"}]");
+        MvcResult r = analyze(body);
+        assertThat(r.getResponse().getStatus()).as(r.getResponse().getContentAsString()).isEqualTo(200);
+        double target = ((Number) JsonPath.read(r.getResponse().getContentAsString(), "$.fingerings[0].targetHz"))
+                .doubleValue();
+        assertThat(target).isCloseTo(hz, org.assertj.core.data.Offset.offset(hz * 1e-9));
+    }
+
+    @ParameterizedTest
+    @ValueSource(strings = {"H4", "C11", "C-2", "Cbbb4", "C#b4", "Ab", "C 4"})
+    void textThatIsNotANoteNameIsRefusedOnTheFingeringsTarget(String note) throws Exception {
+        String body = STOPPED_PIPE.replace("\"losses\": false", "\"losses\": false, \"holes\": [{\"positionMm\": "
+                + "100.0, \"diameterMm\": 6.0, \"chimneyMm\": 3.0}], \"fingerings\": [{\"closedHoles\": [0], "
+                + "\"targetNote\": \"" + note + "\"}]");
+        expect400(body, "fingerings[0].targetNote");
     }
 
     // Malformed requests: each must be a 400 problem document naming the offending field.

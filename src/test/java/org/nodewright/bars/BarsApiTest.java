@@ -5,25 +5,19 @@ import static org.assertj.core.api.Assertions.within;
 import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.get;
 import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.post;
 
-import java.nio.file.Files;
-import java.nio.file.Path;
 import org.junit.jupiter.api.Test;
+import org.nodewright.StoreFreeWebTest;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
 import org.springframework.beans.factory.annotation.Autowired;
-import org.springframework.boot.test.context.SpringBootTest;
-import org.springframework.boot.webmvc.test.autoconfigure.AutoConfigureMockMvc;
 import org.springframework.http.MediaType;
 import org.springframework.mock.web.MockHttpServletResponse;
-import org.springframework.test.context.DynamicPropertyRegistry;
-import org.springframework.test.context.DynamicPropertySource;
 import org.springframework.test.web.servlet.MockMvc;
 import tools.jackson.databind.JsonNode;
 import tools.jackson.databind.ObjectMapper;
 
 /** The bar bench's JSON API as the HTTP contract spells it, and its 400s. */
-@SpringBootTest
-@AutoConfigureMockMvc
+@StoreFreeWebTest
 class BarsApiTest {
 
     /** The contract's example request (a rosewood-like marimba bar blank). */
@@ -34,11 +28,6 @@ class BarsApiTest {
              "densityKgPerM3": null, "youngsModulusPa": null, "shearModulusPa": null,
              "ends": "free-free", "theory": "timoshenko", "modeCount": 6}""";
 
-    @DynamicPropertySource
-    static void dataDir(DynamicPropertyRegistry registry) throws Exception {
-        Path dir = Files.createTempDirectory("nodewright-bars-");
-        registry.add("app.data-dir", dir::toString);
-    }
 
     @Autowired
     MockMvc mvc;

@@ -11,39 +11,33 @@ import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.
 import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.redirectedUrl;
 import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.status;
 
-import java.nio.file.Files;
-import java.nio.file.Path;
 import java.util.List;
 import java.util.Map;
 import java.util.concurrent.atomic.AtomicInteger;
 import org.junit.jupiter.api.Test;
+import org.nodewright.TemporaryDataDirectory;
+import org.nodewright.TestProperties;
 import org.springframework.beans.factory.annotation.Autowired;
 import org.springframework.boot.test.context.SpringBootTest;
 import org.springframework.boot.webmvc.test.autoconfigure.AutoConfigureMockMvc;
 import org.springframework.http.MediaType;
 import org.springframework.mock.web.MockHttpSession;
-import org.springframework.test.context.DynamicPropertyRegistry;
-import org.springframework.test.context.DynamicPropertySource;
+import org.springframework.test.context.ContextConfiguration;
 import org.springframework.test.web.servlet.MockMvc;
 import org.springframework.test.web.servlet.request.RequestPostProcessor;
 import tools.jackson.databind.json.JsonMapper;
 
 /** LAN mode: changing one's own password, an admin's reset, signing out everywhere, and the audit trail. */
 @SpringBootTest(properties = {"app.sharing.lan=true", "app.sharing.admin-password=" + OwnPasswordAndAuditTest.ADMIN_PW,
-        "app.sharing.max-failures=3"})
+        "app.sharing.max-failures=3", TestProperties.NO_WARM_UP, TestProperties.NO_BANNER})
 @AutoConfigureMockMvc
+@ContextConfiguration(initializers = TemporaryDataDirectory.class)
 class OwnPasswordAndAuditTest {
 
     static final String ADMIN_PW = "harrowgate-admin-9";
     private static final AtomicInteger NAMES = new AtomicInteger();
     private static final AtomicInteger ADDRESSES = new AtomicInteger(10);
 
-    @DynamicPropertySource
-    static void dataDir(DynamicPropertyRegistry registry) throws Exception {
-        Path dir = Files.createTempDirectory("nodewright-own-pw-");
-        registry.add("app.data-dir", dir::toString);
-        registry.add("spring.datasource.url", () -> "jdbc:h2:file:" + dir.toString().replace('\\', '/') + "/nodewright");
-    }
 
     @Autowired
     MockMvc mvc;

@@ -108,7 +108,6 @@ class BackupRestoreTest {
         Files.write(file, zip);
         ByteArrayOutputStream said = new ByteArrayOutputStream();
         int code = new StoreRestore(new PrintStream(said, true, StandardCharsets.UTF_8)).restore(file, into);
-        System.out.println(said.toString(StandardCharsets.UTF_8));
         return code;
     }
 

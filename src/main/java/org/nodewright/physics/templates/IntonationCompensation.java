@@ -25,9 +25,9 @@ import org.nodewright.physics.tuning.Cents;
  *       whole string and the tension rises by dT = E A (L'_n - L'_0) / L'_0 (Hooke's law; E and A of
  *       the load-bearing core);</li>
  *   <li>the vibrating length is fret crown to saddle; each frequency is Mersenne's
- *       f = (1/2l) sqrt(T/mu) times Fletcher's clamped-end stiffness factor
- *       1 + (2/pi) sqrt(B) + (4/pi^2) B with B = pi^2 E I / (T l^2) (Fletcher, J. Acoust. Soc. Am. 36,
- *       203 (1964));</li>
+ *       f = (1/2l) sqrt(T/mu) times Fletcher's clamped-end stiff-string factor for the fundamental
+ *       sqrt(1 + B) (1 + (2/pi) sqrt(B) + (4/pi^2) B) with B = pi^2 E I / (T l^2) (Fletcher,
+ *       J. Acoust. Soc. Am. 36, 203 (1964));</li>
  *   <li>the player tunes the open string, so each fret's error is 1200 log2(f_n / (f_0 2^(n/12))).</li>
  * </ul>
  * With no action (hN = hS = 0) the stretch vanishes and the optimum is the classical stiffness
@@ -139,10 +139,10 @@ public final class IntonationCompensation {
         return e;
     }
 
-    /** Mersenne's law with Fletcher's clamped-end factor 1 + (2/pi) sqrt(B) + (4/pi^2) B. */
+    /** Mersenne's law with Fletcher's clamped-end factor for n = 1: sqrt(1 + B) (1 + (2/pi) sqrt(B) + (4/pi^2) B). */
     static double frequency(Setup s, double lengthM, double tensionN) {
         double ideal = Math.sqrt(tensionN / s.linearDensityKgPerM()) / (2 * lengthM);
         double bStiff = Math.PI * Math.PI * s.bendingStiffnessNm2() / (tensionN * lengthM * lengthM);
-        return ideal * (1 + 2 / Math.PI * Math.sqrt(bStiff) + 4 / (Math.PI * Math.PI) * bStiff);
+        return ideal * Math.sqrt(1 + bStiff) * (1 + 2 / Math.PI * Math.sqrt(bStiff) + 4 / (Math.PI * Math.PI) * bStiff);
     }
 }

@@ -13,7 +13,8 @@ class ToneHoleTest {
     @Test
     void shuntAndSeriesImpedancesFollowLefebvreAndScavone2012() {
         // Lefebvre & Scavone, J. Acoust. Soc. Am. 131, 3153 (2012), written out by hand for
-        // b = 3 mm, a = 7.5 mm, t = 3 mm, lossless chimney, flanged radiation (Norris & Sheng 1989).
+        // b = 3 mm, a = 7.5 mm, t = 3 mm, lossless chimney (their length-correction coefficients from
+        // memory of the paper, as in the model: this part checks the assembly, not the coefficients).
         double b = 0.003;
         double a = 0.0075;
         double t = 0.003;
@@ -30,15 +31,19 @@ class ToneHoleTest {
         KeefeExpansion keefe = KeefeExpansion.forAir(AIR);
         // Open: Zs/Z0h = j k ti + (zr + j tan k te)/(1 + j zr tan k te), zr the flanged radiation load.
         impedances(new ToneHoleModel(new ToneHole(0.1, b, t, true), a), k, out);
-        double[] zr = new double[2];
-        Radiation.normalisedImpedance(true, k * b, zr);
+        // The hole's flanged radiation load, written here at low kb (kb = 0.027) rather than taken from
+        // the code's Radiation: Re = (kb)^2 / 2 (a small source radiating into a half-space, Rayleigh;
+        // common practice) and Im = 0.8216 kb (Norris & Sheng 1989's low-frequency end correction).
+        // The code's fit departs from this leading order by (kb)^3 terms: 1 % of Re, 0.1 % of Im here.
+        double kb = k * b;
+        double[] zr = {kb * kb / 2, 0.8216 * kb};
         double tn = Math.tan(k * (t + tm));
         org.hipparchus.complex.Complex zl = new org.hipparchus.complex.Complex(zr[0], zr[1]);
         org.hipparchus.complex.Complex jt = new org.hipparchus.complex.Complex(0, tn);
         org.hipparchus.complex.Complex zs = zl.add(jt).divide(org.hipparchus.complex.Complex.ONE.add(zl.multiply(jt)))
                 .add(new org.hipparchus.complex.Complex(0, k * ti));
-        assertThat(out[0] * area).isCloseTo(zs.getReal(), offset(1e-12));
-        assertThat(out[1] * area).isCloseTo(zs.getImaginary(), offset(1e-12));
+        assertThat(out[0] * area).isCloseTo(zs.getReal(), offset(0.015 * zs.getReal()));
+        assertThat(out[1] * area).isCloseTo(zs.getImaginary(), offset(0.002 * zs.getImaginary()));
         assertThat(out[3] * area).isCloseTo(k * taOpen, offset(1e-12));
         // Closed: Zs/Z0h = -j cot(k te) + j k ti.
         impedances(new ToneHoleModel(new ToneHole(0.1, b, t, false), a), k, out);

@@ -46,14 +46,31 @@ class GaugePickerTest {
 
     @Test
     void theClosestOfAUserListWinsAndItsNeighboursAreReported() {
-        var target = new GaugePicker.Target(0.65, 110.0, 80.0, Materials.get("nickel-plated-steel"),
-                Materials.get("nickel-plated-steel"), 0.4);
-        List<Double> gauges = List.of(0.030 * INCH, 0.036 * INCH, 0.042 * INCH, 0.046 * INCH, 0.052 * INCH);
+        // A plain-steel G3 (196 Hz) on 650 mm at 75 N, offered .014/.016/.017/.018/.020 in. Expected
+        // tensions written here from Mersenne's law, T = rho (pi d^2 / 4) (2 L f)^2 (not the code's
+        // tensionAt): the closest in log-tension is the one the picker must choose.
+        double rho = Materials.get("plain-steel").densityKgPerM3();
+        double l = 0.650;
+        double f = 196.0;
+        double wanted = 75.0;
+        List<Double> gauges = List.of(0.014 * INCH, 0.016 * INCH, 0.017 * INCH, 0.018 * INCH, 0.020 * INCH);
+        java.util.function.DoubleUnaryOperator mersenne = d -> rho * Math.PI * d * d / 4 * Math.pow(2 * l * f, 2);
+        int best = 0;
+        for (int i = 1; i < gauges.size(); i++) {
+            if (Math.abs(Math.log(mersenne.applyAsDouble(gauges.get(i)) / wanted))
+                    < Math.abs(Math.log(mersenne.applyAsDouble(gauges.get(best)) / wanted))) {
+                best = i;
+            }
+        }
+        assertThat(best).isBetween(1, 3); // the test data has a neighbour on each side
+        var target = new GaugePicker.Target(l, f, wanted, Materials.get("plain-steel"), null, 0.4);
         var pick = GaugePicker.pick(target, gauges);
-        double best = gauges.stream().mapToDouble(d -> Math.abs(Math.log(target.tensionAt(d) / 80.0))).min().orElseThrow();
-        assertThat(Math.abs(Math.log(pick.choice().tensionN() / 80.0))).isEqualTo(best);
-        assertThat(pick.thinner().outerDiameterM()).isLessThan(pick.choice().outerDiameterM());
-        assertThat(pick.thicker().outerDiameterM()).isGreaterThan(pick.choice().outerDiameterM());
+        assertThat(pick.choice().outerDiameterM()).isEqualTo(gauges.get(best));
+        double t = mersenne.applyAsDouble(gauges.get(best));
+        assertThat(pick.choice().tensionN()).isCloseTo(t, within(t * 1e-9));
+        assertThat(pick.offFraction()).isCloseTo(t / wanted - 1, within(1e-9));
+        assertThat(pick.thinner().outerDiameterM()).isEqualTo(gauges.get(best - 1));
+        assertThat(pick.thicker().outerDiameterM()).isEqualTo(gauges.get(best + 1));
         assertThat(pick.thinner().tensionN()).isLessThan(pick.choice().tensionN());
     }
 }

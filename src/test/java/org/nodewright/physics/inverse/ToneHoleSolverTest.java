@@ -15,12 +15,14 @@ class ToneHoleSolverTest {
 
     @ParameterizedTest
     @ValueSource(booleans = {false, true})
-    void theWorkshopWhistleEndsWithinThreeCentsOfEveryNoteByTheCoresOwnModel(boolean varyDiameters) {
+    void theWorkshopWhistleEndsWithinItsToleranceOfEveryNoteByTheCoresOwnModel(boolean varyDiameters) {
         var model = DemoWhistle.model();
         var solution = new ToneHoleSolver(0.1, 400).solve(model, DemoWhistle.start(), model.lengthBeforeFootMm(),
                 DemoWhistle.fingerings(), DemoWhistle.limits(varyDiameters), SolveProgress.NONE, () -> false);
+        // Asked for 0.1 cent and reported within it: every note must be within 0.1 cent (a 3-cent
+        // window would pass a solver that stopped long before its tolerance).
         assertThat(solution.withinTolerance()).isTrue();
-        assertThat(solution.worstAbsCents()).isLessThan(3.0);
+        assertThat(solution.worstAbsCents()).isLessThanOrEqualTo(0.1);
         // Check the claim independently: re-evaluate the solved layout from the target, not the solver's guesses.
         for (int i = 0; i < solution.notes().size(); i++) {
             var f = DemoWhistle.fingerings().get(i);

@@ -30,13 +30,14 @@ class CsvReadersTest {
 
     @Test
     void fitsATableOfFrequenciesWithoutModeNumbers() {
-        // Frequencies from Fletcher's law (1964, eq. 11) with f1 = 130.81 Hz, B = 2.5e-4, partial 4 absent.
+        // Frequencies from Fletcher's law (1964, eq. 11) written here, f_n = n f1 sqrt(1 + B n^2), with
+        // f1 = 130.81 Hz, B = 2.5e-4, partial 4 absent.
         double f1 = 130.81;
         double b = 2.5e-4;
         StringBuilder csv = new StringBuilder("frequencyHz\n");
         for (int n = 1; n <= 16; n++) {
             if (n != 4) {
-                csv.append(StiffStringLaw.frequency(n, f1, b)).append('\n');
+                csv.append(n * f1 * Math.sqrt(1 + b * n * n)).append('\n');
             }
         }
         List<SpectralPeak> peaks = PartialsCsvReader.read(csv.toString()).stream()
