@@ -4,8 +4,8 @@
 import { getJson, sendJson, postJson } from './common/api.js';
 import { loadDesignText, format, localTime } from './common/design-bar.js';
 
-const DESIGNERS = { string: '/strings', 'string-set': '/string-sets', 'air-column': '/air-columns', bar: '/bars' };
-const ANALYZE = { string: '/api/v1/strings/analyze', 'string-set': '/api/v1/string-sets/analyze', 'air-column': '/api/v1/air-columns/analyze', bar: '/api/v1/bars/analyze' };
+const DESIGNERS = { string: '/strings', 'string-set': '/string-sets', 'air-column': '/air-columns', bar: '/bars', plate: '/plates' };
+const ANALYZE = { string: '/api/v1/strings/analyze', 'string-set': '/api/v1/string-sets/analyze', 'air-column': '/api/v1/air-columns/analyze', bar: '/api/v1/bars/analyze', plate: '/api/v1/plates/analyze' };
 
 const main = document.querySelector('main.library');
 let t = {};

@@ -5,6 +5,7 @@ import java.util.Arrays;
 import java.util.Optional;
 import org.nodewright.aircolumns.AirColumnRequest;
 import org.nodewright.bars.BarAnalysisRequest;
+import org.nodewright.plates.PlateAnalysisRequest;
 import org.nodewright.strings.StringAnalysisRequest;
 import org.nodewright.strings.StringSetRequest;
 
@@ -27,7 +28,10 @@ public enum DesignKind {
             "/air-columns"),
 
     @JsonProperty("bar")
-    BAR("bar", BarAnalysisRequest.class, "/api/v1/bars/analyze", "/bars");
+    BAR("bar", BarAnalysisRequest.class, "/api/v1/bars/analyze", "/bars"),
+
+    @JsonProperty("plate")
+    PLATE("plate", PlateAnalysisRequest.class, "/api/v1/plates/analyze", "/plates");
 
     private final String word;
     private final Class<?> requestClass;

@@ -31,6 +31,12 @@ class PlatesApiController {
         return PlateMaterials.all().stream().map(MaterialJson::of).toList();
     }
 
+    /** The workshop's ready-made plates (invented instruments), each a complete analysis request. */
+    @GetMapping(path = "/api/v1/plate-presets", produces = MediaType.APPLICATION_JSON_VALUE)
+    List<PlatePresets.Preset> presets() {
+        return PlatePresets.all();
+    }
+
     /** A catalogue entry as JSON (SI units, x along the grain). */
     record MaterialJson(String id, String name, double densityKgPerM3, double elasticAlongPa, double elasticAcrossPa,
                         double shearPa, double poissonAlongAcross, String source) {

@@ -1,0 +1,220 @@
+// The plate bench: outline, thickness, material, edges and braces to a request; the modes back as a
+// table, a gallery of shape maps with node lines, and a tap preview.
+import { getJson, postJson, showFieldErrors, clearFieldErrors } from '../common/api.js';
+import { mountDesignBar } from '../common/design-bar.js';
+import { drawMode } from './plate-map.js';
+
+const form = document.getElementById('plate-form');
+const braceRows = document.getElementById('brace-rows');
+const problemLine = document.getElementById('form-problem');
+let lastResponse = null;
+
+/** A typed number as a number; text that is not one is sent as typed so the server names the field. */
+function numberOrText(value) {
+  const t = String(value).trim();
+  if (t === '') return null;
+  const n = Number(t);
+  return Number.isFinite(n) ? n : t;
+}
+
+function outlineKind() {
+  return document.getElementById('outline-points-kind').checked ? 'points' : 'rectangle';
+}
+
+function showOutlineKind() {
+  const points = outlineKind() === 'points';
+  document.getElementById('points-fields').hidden = !points;
+  document.getElementById('rectangle-fields').hidden = points;
+}
+
+function parsePoints(text) {
+  const lines = text.split(/\n|;/).map((l) => l.trim()).filter((l) => l.length > 0);
+  return lines.map((l) => l.split(/[\s,]+/).filter((s) => s.length > 0).map(numberOrText));
+}
+
+function addBraceRow(b = { fromMm: [50, 150], toMm: [350, 150], widthMm: 8, heightMm: 12 }) {
+  const tr = document.createElement('tr');
+  const index = braceRows.children.length;
+  const cell = (field, value) => {
+    const td = document.createElement('td');
+    const input = document.createElement('input');
+    input.type = 'text';
+    input.inputMode = 'decimal';
+    input.value = value;
+    input.dataset.role = field;
+    td.appendChild(input);
+    return td;
+  };
+  const head = document.createElement('td');
+  head.textContent = String(index + 1);
+  tr.appendChild(head);
+  const from = cell('from', `${b.fromMm[0]}, ${b.fromMm[1]}`);
+  const to = cell('to', `${b.toMm[0]}, ${b.toMm[1]}`);
+  tr.append(from, to, cell('width', b.widthMm), cell('height', b.heightMm));
+  const rm = document.createElement('td');
+  const button = document.createElement('button');
+  button.type = 'button';
+  button.className = 'secondary remove-brace';
+  button.textContent = '\u00d7';
+  button.addEventListener('click', () => { tr.remove(); renumberBraces(); });
+  rm.appendChild(button);
+  tr.appendChild(rm);
+  braceRows.appendChild(tr);
+  renumberBraces();
+}
+
+function renumberBraces() {
+  [...braceRows.children].forEach((tr, i) => {
+    tr.children[0].textContent = String(i + 1);
+    tr.querySelector('[data-role="from"]').dataset.field = `braces[${i}].fromMm`;
+    tr.querySelector('[data-role="to"]').dataset.field = `braces[${i}].toMm`;
+    tr.querySelector('[data-role="width"]').dataset.field = `braces[${i}].widthMm`;
+    tr.querySelector('[data-role="height"]').dataset.field = `braces[${i}].heightMm`;
+    tr.querySelector('[data-role="from"]').closest('tr').dataset.field = `braces[${i}]`;
+  });
+}
+
+function getParameters() {
+  const request = {};
+  if (outlineKind() === 'rectangle') {
+    request.outline = 'rectangle';
+    request.lengthMm = numberOrText(document.getElementById('lengthMm').value);
+    request.widthMm = numberOrText(document.getElementById('widthMm').value);
+  } else {
+    request.outline = parsePoints(document.getElementById('outline-points').value);
+    if (document.getElementById('mirrorHalf').checked) request.mirrorHalf = true;
+  }
+  request.thicknessMm = numberOrText(document.getElementById('thicknessMm').value);
+  request.material = document.getElementById('material').value;
+  request.edges = document.getElementById('edges').value;
+  request.modeCount = numberOrText(document.getElementById('modeCount').value);
+  request.braces = [...braceRows.children].map((tr) => ({
+    fromMm: tr.querySelector('[data-role="from"]').value.split(/[\s,]+/).filter((s) => s).map(numberOrText),
+    toMm: tr.querySelector('[data-role="to"]').value.split(/[\s,]+/).filter((s) => s).map(numberOrText),
+    widthMm: numberOrText(tr.querySelector('[data-role="width"]').value),
+    heightMm: numberOrText(tr.querySelector('[data-role="height"]').value),
+  }));
+  return request;
+}
+
+function setParameters(p) {
+  const rect = !Array.isArray(p.outline);
+  document.getElementById('outline-rectangle').checked = rect;
+  document.getElementById('outline-points-kind').checked = !rect;
+  if (rect) {
+    document.getElementById('lengthMm').value = p.lengthMm ?? '';
+    document.getElementById('widthMm').value = p.widthMm ?? '';
+  } else {
+    document.getElementById('outline-points').value = p.outline.map((pt) => pt.join(', ')).join('\n');
+    document.getElementById('mirrorHalf').checked = !!p.mirrorHalf;
+  }
+  showOutlineKind();
+  document.getElementById('thicknessMm').value = p.thicknessMm ?? '';
+  if (p.material) document.getElementById('material').value = p.material;
+  document.getElementById('edges').value = p.edges || 'free';
+  document.getElementById('modeCount').value = p.modeCount ?? 10;
+  braceRows.replaceChildren();
+  (p.braces || []).forEach((b) => addBraceRow(b));
+}
+
+function showResults(response) {
+  lastResponse = response;
+  document.getElementById('plate-method').textContent = response.method;
+  const cautions = document.getElementById('plate-cautions');
+  cautions.replaceChildren(...(response.cautions || []).map((c) => Object.assign(document.createElement('li'), { textContent: c })));
+  const body = document.querySelector('#plate-results tbody');
+  body.replaceChildren();
+  const gallery = document.getElementById('mode-gallery');
+  gallery.replaceChildren();
+  for (const m of response.modes) {
+    const tr = document.createElement('tr');
+    tr.dataset.frequencyHz = String(m.frequencyHz);
+    const cents = m.note ? `${m.note.centsOff >= 0 ? '+' : ''}${m.note.centsOff.toFixed(1)}` : '';
+    for (const text of [m.n, m.frequencyHz.toFixed(1), m.note ? m.note.name : '', cents, m.name || `(${m.nodalLinesX}, ${m.nodalLinesY})`]) {
+      const td = document.createElement('td');
+      td.textContent = String(text);
+      tr.appendChild(td);
+    }
+    const play = document.createElement('td');
+    const button = document.createElement('button');
+    button.type = 'button';
+    button.className = 'secondary';
+    button.textContent = '\u25b6';
+    button.title = document.getElementById('tap-label').textContent;
+    button.addEventListener('click', () => tap([m]));
+    play.appendChild(button);
+    tr.appendChild(play);
+    body.appendChild(tr);
+    const figure = document.createElement('figure');
+    figure.className = 'mode-card';
+    const canvas = document.createElement('canvas');
+    canvas.id = `plate-mode-${m.n}`;
+    canvas.width = 220;
+    canvas.height = 180;
+    figure.appendChild(canvas);
+    const caption = document.createElement('figcaption');
+    caption.textContent = `${m.n}: ${m.frequencyHz.toFixed(1)} Hz ${m.name || ''}`;
+    figure.appendChild(caption);
+    gallery.appendChild(figure);
+    drawMode(canvas, m);
+  }
+  document.dispatchEvent(new CustomEvent('nodewright:plate-analyzed', { detail: { request: getParameters(), response } }));
+}
+
+/** The tap tone: the modes as decaying sines (amplitude falling with mode number), through Web Audio. */
+function tap(modes) {
+  const AudioCtx = window.AudioContext || window.webkitAudioContext;
+  if (!AudioCtx) return;
+  const ctx = new AudioCtx();
+  const now = ctx.currentTime;
+  modes.forEach((m, k) => {
+    const osc = ctx.createOscillator();
+    const gain = ctx.createGain();
+    osc.frequency.value = m.frequencyHz;
+    const decay = Math.min(1.5, 40 / m.frequencyHz + 0.2);
+    gain.gain.setValueAtTime(0.25 / (k + 1), now);
+    gain.gain.exponentialRampToValueAtTime(0.0001, now + decay);
+    osc.connect(gain).connect(ctx.destination);
+    osc.start(now);
+    osc.stop(now + decay);
+  });
+}
+
+async function analyze() {
+  clearFieldErrors(form);
+  problemLine.textContent = '';
+  const result = await postJson('/api/v1/plates/analyze', getParameters());
+  if (!result.ok) {
+    const unclaimed = showFieldErrors(form, result.problem);
+    problemLine.textContent = unclaimed.length ? unclaimed.join('; ') : (result.problem && result.problem.detail) || '';
+    return;
+  }
+  showResults(result.data);
+}
+
+async function start() {
+  const [materials, presets] = await Promise.all([getJson('/api/v1/plate-materials'), getJson('/api/v1/plate-presets')]);
+  const select = document.getElementById('material');
+  for (const m of materials.data || []) {
+    select.appendChild(Object.assign(document.createElement('option'), { value: m.id, textContent: m.name }));
+  }
+  select.value = 'spruce';
+  const presetSelect = document.getElementById('plate-preset');
+  for (const p of presets.data || []) {
+    presetSelect.appendChild(Object.assign(document.createElement('option'), { value: p.id, textContent: p.name }));
+  }
+  presetSelect.addEventListener('change', () => {
+    const p = (presets.data || []).find((x) => x.id === presetSelect.value);
+    if (p) { setParameters(p.request); analyze(); }
+  });
+  document.querySelectorAll('input[name="outline-kind"]').forEach((r) => r.addEventListener('change', showOutlineKind));
+  document.getElementById('add-brace').addEventListener('click', () => addBraceRow());
+  form.addEventListener('submit', (e) => { e.preventDefault(); analyze(); });
+  const bar = document.getElementById('design-bar');
+  if (bar) mountDesignBar(bar, { kind: 'plate', getParameters, setParameters, formRoot: form });
+  const url = new URL(window.location.href);
+  if (!url.searchParams.has('design')) analyze();
+}
+
+start();
+window.nodewrightPlates = { last: () => lastResponse, tap: () => lastResponse && tap(lastResponse.modes.slice(0, 6)) };
