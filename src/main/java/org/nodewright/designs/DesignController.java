@@ -89,6 +89,7 @@ class DesignController {
             return null;
         }
         return DesignKind.fromWord(word).orElseThrow(() -> new BadRequestException("kind",
-                "must be one of string, string-set, air-column"));
+                "must be one of " + java.util.Arrays.stream(DesignKind.values()).map(DesignKind::word)
+                        .collect(java.util.stream.Collectors.joining(", "))));
     }
 }

@@ -24,7 +24,8 @@ class LibraryPageController {
     }
 
     @GetMapping("/library")
-    String list() {
+    String list(Model model) {
+        model.addAttribute("kinds", DesignKind.values());
         return LIST_VIEW;
     }
 

@@ -1,5 +1,10 @@
 package org.nodewright.plates;
 
+import org.nodewright.web.CsvTable;
+import org.nodewright.web.DesignTable;
+import org.springframework.context.annotation.Bean;
+import org.springframework.http.ResponseEntity;
+
 import jakarta.validation.Valid;
 import java.util.List;
 import org.nodewright.physics.plates.CatalogueMaterial;
@@ -24,6 +29,28 @@ class PlatesApiController {
             produces = MediaType.APPLICATION_JSON_VALUE)
     PlateAnalysisResponse analyze(@Valid @RequestBody PlateAnalysisRequest request) {
         return analysis.analyze(request);
+    }
+
+    /** One row per mode, without the shape grid and node-line polylines (README, CSV tables). */
+    static final CsvTable<PlateAnalysisResponse.Mode> MODE_COLUMNS = CsvTable.of(
+            CsvTable.column("n", PlateAnalysisResponse.Mode::n),
+            CsvTable.column("frequencyHz", PlateAnalysisResponse.Mode::frequencyHz),
+            CsvTable.column("note", m -> m.note() == null ? null : m.note().name()),
+            CsvTable.column("noteCentsOff", m -> m.note() == null ? null : m.note().centsOff()),
+            CsvTable.column("name", PlateAnalysisResponse.Mode::name),
+            CsvTable.column("nodalLinesX", PlateAnalysisResponse.Mode::nodalLinesX),
+            CsvTable.column("nodalLinesY", PlateAnalysisResponse.Mode::nodalLinesY));
+
+    @PostMapping(path = "/api/v1/plates/modes.csv", consumes = MediaType.APPLICATION_JSON_VALUE)
+    ResponseEntity<String> modesCsv(@Valid @RequestBody PlateAnalysisRequest request) {
+        return MODE_COLUMNS.download(analysis.analyze(request).modes(), "plate-modes.csv");
+    }
+
+    /** The table of a saved plate design: the rows of {@code modes.csv}. */
+    @Bean
+    static DesignTable plateModesTable(PlateAnalysisService analysis) {
+        return DesignTable.of(PlateAnalysisRequest.class,
+                (r, name) -> MODE_COLUMNS.download(analysis.analyze(r).modes(), name));
     }
 
     @GetMapping(path = "/api/v1/plate-materials", produces = MediaType.APPLICATION_JSON_VALUE)

@@ -66,6 +66,22 @@ class PlatesApiTest {
     }
 
     @Test
+    void modesCsvHasOneRowPerModeWithTheAnswersFrequencies() throws Exception {
+        JsonNode modes = json.readTree(postBody(BASE).getContentAsString()).get("modes");
+        MockHttpServletResponse r = mvc.perform(post("/api/v1/plates/modes.csv")
+                .contentType(MediaType.APPLICATION_JSON).content(BASE)).andReturn().getResponse();
+        assertThat(r.getStatus()).isEqualTo(200);
+        String[] lines = r.getContentAsString().trim().split("\\r?\\n");
+        assertThat(lines[0]).isEqualTo("n,frequencyHz,note,noteCentsOff,name,nodalLinesX,nodalLinesY");
+        assertThat(lines).hasSize(modes.size() + 1);
+        for (int i = 0; i < modes.size(); i++) {
+            String[] cells = lines[i + 1].split(",");
+            assertThat(Integer.parseInt(cells[0])).isEqualTo(i + 1);
+            assertThat(Double.parseDouble(cells[1])).isEqualTo(modes.get(i).get("frequencyHz").doubleValue());
+        }
+    }
+
+    @Test
     void aPolygonHasNullOutsideItsOutline() throws Exception {
         StringBuilder pts = new StringBuilder();
         for (int i = 0; i < 64; i++) {
