@@ -3,6 +3,20 @@
 
 const AIR = { temperatureC: 20.0, relativeHumidityPct: 50.0, losses: true, referenceA4Hz: 440.0 };
 
+// The six-hole whistle's D-major fingering chart over two registers, shared by the idealised tube
+// and the tube as built (preset() clones a preset before the page uses it).
+const WHISTLE_FINGERINGS = [
+  { name: 'D5', closedHoles: [0, 1, 2, 3, 4, 5], targetNote: 'D5', register: 1 },
+  { name: 'E5', closedHoles: [0, 1, 2, 3, 4], targetNote: 'E5', register: 1 },
+  { name: 'F#5', closedHoles: [0, 1, 2, 3], targetNote: 'F#5', register: 1 },
+  { name: 'G5', closedHoles: [0, 1, 2], targetNote: 'G5', register: 1 },
+  { name: 'A5', closedHoles: [0, 1], targetNote: 'A5', register: 1 },
+  { name: 'B5', closedHoles: [0], targetNote: 'B5', register: 1 },
+  { name: 'C#6', closedHoles: [], targetNote: 'C#6', register: 1 },
+  { name: 'D6', closedHoles: [0, 1, 2, 3, 4, 5], targetNote: 'D6', register: 2 },
+  { name: 'E6', closedHoles: [0, 1, 2, 3, 4], targetNote: 'E6', register: 2 },
+];
+
 export const PRESETS = {
   // A stopped (gedackt) organ pipe: the stopper is the closed input end, the mouth end radiates.
   // Expect odd harmonics, f1 near c / 4(L + 0.61a) ≈ 280 Hz.
@@ -36,17 +50,7 @@ export const PRESETS = {
       { positionMm: 239.5, diameterMm: 6.5, chimneyMm: 2.5, open: true },
     ],
     ...AIR, fMinHz: 300.0, fMaxHz: 3000.0, points: 3000,
-    fingerings: [
-      { name: 'D5', closedHoles: [0, 1, 2, 3, 4, 5], targetNote: 'D5', register: 1 },
-      { name: 'E5', closedHoles: [0, 1, 2, 3, 4], targetNote: 'E5', register: 1 },
-      { name: 'F#5', closedHoles: [0, 1, 2, 3], targetNote: 'F#5', register: 1 },
-      { name: 'G5', closedHoles: [0, 1, 2], targetNote: 'G5', register: 1 },
-      { name: 'A5', closedHoles: [0, 1], targetNote: 'A5', register: 1 },
-      { name: 'B5', closedHoles: [0], targetNote: 'B5', register: 1 },
-      { name: 'C#6', closedHoles: [], targetNote: 'C#6', register: 1 },
-      { name: 'D6', closedHoles: [0, 1, 2, 3, 4, 5], targetNote: 'D6', register: 2 },
-      { name: 'E6', closedHoles: [0, 1, 2, 3, 4], targetNote: 'E6', register: 2 },
-    ],
+    fingerings: WHISTLE_FINGERINGS,
   },
   // A conical reed bore (a chanter-like cone, the diameter growing 0.03 mm per mm) closed at its
   // narrow reed end, in two sections of one taper: a nearly complete harmonic series, unlike the
@@ -78,17 +82,7 @@ export const PRESETS = {
       { positionMm: 215.2, diameterMm: 6.5, chimneyMm: 2.5, open: true },
     ],
     ...AIR, fMinHz: 300.0, fMaxHz: 3000.0, points: 3000,
-    fingerings: [
-      { name: 'D5', closedHoles: [0, 1, 2, 3, 4, 5], targetNote: 'D5', register: 1 },
-      { name: 'E5', closedHoles: [0, 1, 2, 3, 4], targetNote: 'E5', register: 1 },
-      { name: 'F#5', closedHoles: [0, 1, 2, 3], targetNote: 'F#5', register: 1 },
-      { name: 'G5', closedHoles: [0, 1, 2], targetNote: 'G5', register: 1 },
-      { name: 'A5', closedHoles: [0, 1], targetNote: 'A5', register: 1 },
-      { name: 'B5', closedHoles: [0], targetNote: 'B5', register: 1 },
-      { name: 'C#6', closedHoles: [], targetNote: 'C#6', register: 1 },
-      { name: 'D6', closedHoles: [0, 1, 2, 3, 4, 5], targetNote: 'D6', register: 2 },
-      { name: 'E6', closedHoles: [0, 1, 2, 3, 4], targetNote: 'E6', register: 2 },
-    ],
+    fingerings: WHISTLE_FINGERINGS,
   },
   // A transverse flute's head on a plain 19 mm cylinder (no keys): a 10 x 12 mm embouchure hole
   // through a 4.5 mm wall and lip plate, the stopper 17 mm above the hole's centre, a quarter of
