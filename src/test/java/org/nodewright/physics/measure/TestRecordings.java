@@ -16,6 +16,26 @@ public final class TestRecordings {
         };
     }
 
+    /**
+     * A tap: decaying sines (each {@code decaySeconds} to 1/e) at the given frequencies and amplitudes, 16-bit mono
+     * 48 kHz, with a short rise so the onset is clean.
+     */
+    public static byte[] tap(double[] hz, double[] amplitudes, double decaySeconds, double seconds) {
+        double rate = 48_000;
+        int n = (int) Math.round(seconds * rate);
+        double[] x = new double[n];
+        for (int i = 0; i < n; i++) {
+            double t = i / rate;
+            double rise = Math.min(1, t / 0.002);
+            double s = 0;
+            for (int k = 0; k < hz.length; k++) {
+                s += amplitudes[k] * Math.sin(2 * Math.PI * hz[k] * t) * Math.exp(-t / decaySeconds);
+            }
+            x[i] = 0.25 * rise * s;
+        }
+        return SyntheticPluck.wav(x, 1, 1, 16, rate);
+    }
+
     public static byte[] silence(int samples) {
         return SyntheticPluck.wav(new double[samples], 1, 1, 16, 48_000);
     }
