@@ -59,7 +59,7 @@ class PlateMeasureControllerTest {
     @Test
     void aTapRecordingGoesThroughThePeaksToTheSamplesConstants() throws Exception {
         byte[] wav = TestRecordings.tap(new double[] {112.382184, 180.941927, 290.8057, 311.315444},
-                new double[] {1.0, 0.7, 0.3, 0.5}, 0.6, 3.0);
+                new double[] {0.25, 0.18, 0.08, 0.12}, 3.0);
         String peaks = mvc.perform(multipart("/api/v1/measurements/peaks")
                 .file(new MockMultipartFile("file", "tap.wav", "audio/wav", wav)).param("maxPeaks", "6").param("minHz", "40"))
                 .andExpect(status().isOk()).andReturn().getResponse().getContentAsString();

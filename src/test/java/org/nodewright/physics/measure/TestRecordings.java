@@ -17,21 +17,22 @@ public final class TestRecordings {
     }
 
     /**
-     * A tap: decaying sines (each {@code decaySeconds} to 1/e) at the given frequencies and amplitudes, 16-bit mono
-     * 48 kHz, with a short rise so the onset is clean.
+     * A tapped bar: exponentially decaying sines at the given frequencies and amplitudes (each decaying
+     * in 0.6 s / √(f / f₁), the higher modes of a wooden bar dying first), 16-bit mono at 48 kHz,
+     * with a seeded noise floor at −66 dB.
      */
-    public static byte[] tap(double[] hz, double[] amplitudes, double decaySeconds, double seconds) {
+    public static byte[] tap(double[] hz, double[] amplitude, double seconds) {
         double rate = 48_000;
-        int n = (int) Math.round(seconds * rate);
-        double[] x = new double[n];
-        for (int i = 0; i < n; i++) {
+        double[] x = new double[(int) (seconds * rate)];
+        java.util.Random noise = new java.util.Random(11);
+        for (int i = 0; i < x.length; i++) {
             double t = i / rate;
-            double rise = Math.min(1, t / 0.002);
-            double s = 0;
+            double v = 5e-4 * noise.nextGaussian();
             for (int k = 0; k < hz.length; k++) {
-                s += amplitudes[k] * Math.sin(2 * Math.PI * hz[k] * t) * Math.exp(-t / decaySeconds);
+                double tau = 0.6 / Math.sqrt(hz[k] / hz[0]);
+                v += amplitude[k] * Math.exp(-t / tau) * Math.sin(2 * Math.PI * hz[k] * t);
             }
-            x[i] = 0.25 * rise * s;
+            x[i] = v;
         }
         return SyntheticPluck.wav(x, 1, 1, 16, rate);
     }
