@@ -183,6 +183,31 @@ class BarBenchIT extends BrowserTestBase {
         assertThat(lastAnswer().get("modes").get(0).get("frequencyHz").asDouble()).isCloseTo(model1, within(0.01 * model1 / 1000));
         assertThat(Math.abs(model1 - 172)).isLessThan(172 * 0.01);
         screenshot("bar-bench-blank");
+
+        // the same panel from a recording: a synthetic tap of this bar with every mode 5 % sharp is
+        // a blank whose moduli are 1.05² = 1.1025 times the catalogue's (f ∝ √E at fixed E/G)
+        analyzeAndWait(() -> {
+            driver.findElement(By.id("youngsGPa")).clear();
+            driver.findElement(By.id("shearGPa")).clear();
+            driver.findElement(By.id("analyze-bar")).click();
+        });
+        JsonNode plain = lastAnswer();
+        double[] hz = new double[3];
+        for (int n = 0; n < 3; n++) {
+            hz[n] = 1.05 * plain.get("modes").get(n).get("frequencyHz").asDouble();
+        }
+        java.nio.file.Path wav = java.nio.file.Files.createTempFile("nodewright-tap-", ".wav");
+        java.nio.file.Files.write(wav, org.nodewright.physics.measure.TestRecordings.tap(hz, new double[] {0.4, 0.2, 0.1}, 2.0));
+        driver.findElement(By.id("blank-file")).sendKeys(wav.toAbsolutePath().toString());
+        js("document.getElementById('blank-status').removeAttribute('data-state');");
+        driver.findElement(By.id("blank-fit-recording")).click();
+        wait.until(d -> driver.findElement(By.id("blank-status")).getDomAttribute("data-state") != null);
+        assertThat(driver.findElement(By.id("blank-status")).getDomAttribute("data-state"))
+                .as(driver.findElement(By.id("blank-problem")).getText()).isEqualTo("fitted");
+        double catalogueE = plain.get("material").get("youngsModulusPa").asDouble();
+        double fittedE = ((Number) js("return window.nodewrightBars.lastFit.youngsModulusPa;")).doubleValue();
+        assertThat(fittedE / catalogueE).isCloseTo(1.1025, within(0.01));
+        java.nio.file.Files.deleteIfExists(wav);
     }
 
     @Test

@@ -123,6 +123,15 @@ class BlankFitControllerTest {
     }
 
     @Test
+    void modeCountOutOfRangeIsNamed() throws Exception {
+        MockMultipartFile file = new MockMultipartFile("file", "tap.wav", "audio/wav", TestRecordings.silence(48_000));
+        MockMultipartFile bar = new MockMultipartFile("bar", "", MediaType.APPLICATION_JSON_VALUE,
+                BAR.getBytes(StandardCharsets.UTF_8));
+        JsonNode p = problem(multipart("/api/v1/bars/measure-blank/recording").file(file).file(bar).param("modeCount", "1"));
+        assertThat(p.get("errors").toString()).contains("modeCount");
+    }
+
+    @Test
     void unreadableRecordingIsAProblemOnFile() throws Exception {
         MockMultipartFile file = new MockMultipartFile("file", "tap.wav", "audio/wav", "not a wav".getBytes());
         MockMultipartFile bar = new MockMultipartFile("bar", "", MediaType.APPLICATION_JSON_VALUE,

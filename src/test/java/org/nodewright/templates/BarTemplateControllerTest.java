@@ -159,6 +159,21 @@ class BarTemplateControllerTest {
     }
 
     @Test
+    void cordHoleOutOfRangeIsNamed() throws Exception {
+        MockHttpServletResponse res = send("/api/v1/templates/bar-undercut.svg?cordHoleMm=0", UNIFORM);
+        assertThat(res.getStatus()).isEqualTo(400);
+        assertThat(res.getContentAsString()).contains("cordHoleMm");
+    }
+
+    @Test
+    void heldBarHasNoCordHoles() throws Exception {
+        MockHttpServletResponse res = send("/api/v1/templates/bar-undercut.svg",
+                UNIFORM.replace("free-free", "clamped-free"));
+        assertThat(res.getStatus()).isEqualTo(400);
+        assertThat(res.getContentAsString()).contains("\"field\":\"ends\"");
+    }
+
+    @Test
     void badPaperIsAProblemOnPaper() throws Exception {
         MockHttpServletResponse res = send("/api/v1/templates/bar-undercut.pdf?paper=a3", UNIFORM);
         assertThat(res.getStatus()).isEqualTo(400);
