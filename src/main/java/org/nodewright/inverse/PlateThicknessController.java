@@ -3,7 +3,6 @@ package org.nodewright.inverse;
 import io.swagger.v3.oas.annotations.Operation;
 import io.swagger.v3.oas.annotations.tags.Tag;
 import jakarta.validation.Valid;
-import java.net.URI;
 import java.util.ArrayList;
 import java.util.List;
 import org.nodewright.physics.plates.Plate;
@@ -12,9 +11,7 @@ import org.nodewright.physics.tuning.EqualTemperament;
 import org.nodewright.plates.PlateAnalysisRequest;
 import org.nodewright.plates.PlateMapping;
 import org.nodewright.strings.StringRules;
-import org.springframework.http.ProblemDetail;
 import org.springframework.http.ResponseEntity;
-import org.springframework.web.bind.annotation.ExceptionHandler;
 import org.springframework.web.bind.annotation.PostMapping;
 import org.springframework.web.bind.annotation.RequestBody;
 import org.springframework.web.bind.annotation.RestController;
@@ -78,13 +75,7 @@ class PlateThicknessController {
             };
         }
         ThicknessTuner tuner = new ThicknessTuner(request.toleranceOrDefault(), request.maxEvaluationsOrDefault());
-        SolveJob job = jobs.submit("plate-thickness", j -> PlateThicknessResult.of(tuner.solve(plate, targets, unknowns,
+        return jobs.accepted("plate-thickness", j -> PlateThicknessResult.of(tuner.solve(plate, targets, unknowns,
                 p.modeCountOrDefault(), j, j::cancelRequested), targets, unknowns, start, p));
-        return ResponseEntity.accepted().location(URI.create("/api/v1/inverse/jobs/" + job.id())).body(job.view());
-    }
-
-    @ExceptionHandler(SolveJobs.Busy.class)
-    ResponseEntity<ProblemDetail> busy(SolveJobs.Busy e) {
-        return ToneHoleSolveController.busyProblem(e);
     }
 }
