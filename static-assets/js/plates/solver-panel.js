@@ -149,7 +149,9 @@ function showResult(r) {
   targets.replaceChildren(...r.targets.map((x) => {
     const tr = document.createElement('tr');
     tr.dataset.cents = String(x.cents);
-    [x.mode, x.targetHz.toFixed(2), x.frequencyHz.toFixed(2), `${x.cents >= 0 ? '+' : ''}${x.cents.toFixed(2)}`]
+    // a mode that changed its rank while the plate changed (followed by its shape) shows both ranks
+    [x.modeNow === x.mode ? x.mode : `${x.mode} \u2192 ${x.modeNow}`, x.targetHz.toFixed(2), x.frequencyHz.toFixed(2),
+      `${x.cents >= 0 ? '+' : ''}${x.cents.toFixed(2)}`]
       .forEach((v) => cell(tr, String(v)));
     return tr;
   }));

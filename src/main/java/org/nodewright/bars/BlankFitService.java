@@ -18,6 +18,8 @@ public class BlankFitService {
     static final String CAUTION_WEIGH_THE_BLANK = "weigh-the-blank";
     /** Caution code: G could not be told from these modes and was left at its starting value. */
     static final String CAUTION_SHEAR_KEPT = "shear-kept";
+    /** Caution code: as many modes as fitted moduli, so the fit is exact by construction and checks nothing. */
+    static final String CAUTION_EXACT_FIT = "exact-fit";
 
     BlankFitResponse fit(BlankFitRequest r) {
         List<MeasuredMode> modes = r.modes().stream().map(h -> new MeasuredMode(h.n(), h.frequencyHz())).toList();
@@ -55,6 +57,9 @@ public class BlankFitService {
         cautions.add(CAUTION_WEIGH_THE_BLANK);
         if (!fit.shearFitted()) {
             cautions.add(CAUTION_SHEAR_KEPT);
+        }
+        if (fit.matches().size() == (fit.shearFitted() ? 2 : 1)) {
+            cautions.add(CAUTION_EXACT_FIT);
         }
         return new BlankFitResponse(fit.youngsModulus(), fit.shearModulus(), fit.shearFitted(), bar.density(),
                 bar.youngsModulus(), bar.shearModulus(), fit.rmsCents(),

@@ -16,7 +16,8 @@ record PlateThicknessResult(List<Target> targets, boolean converged, int evaluat
 
     private static final double MM = 1e-3;
 
-    record Target(int mode, double targetHz, double frequencyHz, double cents) {
+    /** A target: the mode as asked (its rank on the plate as it was), its rank on the solved plate, Hz, cents. */
+    record Target(int mode, int modeNow, double targetHz, double frequencyHz, double cents) {
     }
 
     /** One unknown: its kind and index (from 0), its value before and after, and the wood to remove (mm). */
@@ -31,7 +32,8 @@ record PlateThicknessResult(List<Target> targets, boolean converged, int evaluat
             List<ThicknessTuner.Unknown> unknowns, double[] startM, PlateAnalysisRequest original) {
         List<Target> t = new ArrayList<>();
         for (int i = 0; i < targets.size(); i++) {
-            t.add(new Target(targets.get(i).mode(), targets.get(i).targetHz(), s.frequencies()[i], s.cents()[i]));
+            t.add(new Target(targets.get(i).mode(), s.modesNow()[i], targets.get(i).targetHz(), s.frequencies()[i],
+                    s.cents()[i]));
         }
         List<UnknownValue> u = new ArrayList<>();
         for (int k = 0; k < unknowns.size(); k++) {

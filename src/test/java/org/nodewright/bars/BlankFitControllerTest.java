@@ -71,7 +71,7 @@ class BlankFitControllerTest {
         assertThat(r.get("matches")).hasSize(2);
         assertThat(r.get("bar").get("youngsModulusPa").asDouble()).isEqualTo(r.get("youngsModulusPa").asDouble());
         assertThat(r.get("bar").get("material").asText()).isEqualTo("maple");
-        assertThat(r.get("cautions").toString()).contains("weigh-the-blank");
+        assertThat(r.get("cautions").toString()).contains("weigh-the-blank").doesNotContain("exact-fit");
     }
 
     /**
@@ -96,6 +96,15 @@ class BlankFitControllerTest {
                     within(0.002 * hz(n, e)));
         }
         assertThat(r.get("peaks").size()).isGreaterThanOrEqualTo(4);
+        assertThat(r.get("cautions").toString()).doesNotContain("exact-fit");
+    }
+
+    @Test
+    void oneModeIsAnExactFitAndSaysSo() throws Exception {
+        String body = "{\"bar\": " + BAR + ", \"modes\": [{\"n\": 1, \"frequencyHz\": " + hz(1, 11e9) + "}]}";
+        JsonNode r = ok(post("/api/v1/bars/measure-blank").contentType(MediaType.APPLICATION_JSON).content(body));
+        assertThat(r.get("cautions").toString()).contains("exact-fit");
+        assertThat(r.get("youngsModulusPa").asDouble()).isCloseTo(11e9, within(2e-4 * 11e9));
     }
 
     @ParameterizedTest

@@ -86,8 +86,9 @@ final class BandedEigen {
             double[][] mr = new double[p][p];
             for (int i = 0; i < p; i++) {
                 for (int j = i; j < p; j++) {
-                    kr[i][j] = kr[j][i] = 0.5 * (dot(xbar[i], kx[j]) + dot(xbar[j], kx[i]));
-                    mr[i][j] = mr[j][i] = 0.5 * (dot(xbar[i], mx[j]) + dot(xbar[j], mx[i]));
+                    // K and M are symmetric: x̄ᵢᵀ K x̄ⱼ = x̄ⱼᵀ K x̄ᵢ, one product per pair
+                    kr[i][j] = kr[j][i] = dot(xbar[i], kx[j]);
+                    mr[i][j] = mr[j][i] = dot(xbar[i], mx[j]);
                 }
             }
             ritz = GeneralizedEigen.lowest(kr, mr, p);

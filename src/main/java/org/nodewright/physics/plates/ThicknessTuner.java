@@ -20,11 +20,14 @@ import org.nodewright.physics.tuning.Cents;
 /**
  * Finds the thicknesses (uniform, or chosen graduation control points) and brace heights that put chosen modes of
  * a plate on target frequencies: Levenberg–Marquardt (Hipparchus {@link LevenbergMarquardtOptimizer}, after Moré
- * 1978) on the targets' cents errors, each evaluation one Rayleigh–Ritz analysis ({@link PlateSolver#frequencies}),
+ * 1978) on the targets' cents errors, each evaluation one Rayleigh–Ritz analysis ({@link PlateSolver#shapes}),
  * with a forward-difference Jacobian and the unknowns kept inside the maker's limits by clamping. One extra row per
  * unknown, {@link #STAY_CENTS_PER_MM} cents per mm moved from the start (Tikhonov regularisation), makes the
  * problem well posed when there are more unknowns than targets: of all the carvings that reach the targets the
- * one closest to the plate as it is wins. Modes are the n-th lowest flexural mode of the plate as it changes.
+ * one closest to the plate as it is wins. A target names the n-th lowest flexural mode of the plate as it is; while
+ * the plate changes, each target follows the mode whose shape is most like that mode's shape at the start (the modal
+ * assurance criterion of the shape grids, Allemang &amp; Brown 1982), so that two modes swapping order do not swap
+ * targets.
  * After the solve, the sensitivities: how many Hz each target mode moves when 0.1 mm is removed from each unknown
  * (and from the whole plate at once), by a one-sided difference at the solution.
  */
@@ -74,9 +77,10 @@ public final class ThicknessTuner {
      * @param frequencies  each target mode's frequency, Hz
      * @param cents        each target's error, cents (positive: sharp of the target)
      * @param hzPerTenthMm per target, per unknown, then the whole plate last: Hz moved when 0.1 mm is removed
+     * @param modesNow     each target's mode rank (from 1) on the solved plate
      */
     public record Solution(Plate plate, double[] values, double[] frequencies, double[] cents, double worstCents,
-            int evaluations, boolean converged, double[][] hzPerTenthMm) {
+            int evaluations, boolean converged, double[][] hzPerTenthMm, int[] modesNow) {
     }
 
     private final PlateSolver solver = new PlateSolver();
@@ -103,7 +107,8 @@ public final class ThicknessTuner {
         for (Unknown u : unknowns) {
             check(plate, u);
         }
-        Run run = new Run(plate, targets, unknowns, count, progress, cancelled);
+        Tracker tracker = new Tracker(solver.shapes(plate, count), targets);
+        Run run = new Run(plate, targets, unknowns, count, tracker, progress, cancelled);
         LeastSquaresProblem problem = new LeastSquaresBuilder()
                 .model(run::valueAndJacobian)
                 .target(new double[targets.size() + unknowns.size()])
@@ -127,10 +132,11 @@ public final class ThicknessTuner {
         for (int i = 0; i < cents.length; i++) {
             cents[i] = Cents.between(run.bestFrequencies[i], targets.get(i).targetHz());
         }
+        int[] modesNow = tracker.match(solver.shapes(solved, count)).ranks();
         double[][] sensitivity = sensitivities(solved, targets, unknowns, run.best, count, run.bestFrequencies,
-                cancelled);
+                tracker, cancelled);
         return new Solution(solved, run.best.clone(), run.bestFrequencies.clone(), cents, run.bestWorst,
-                run.evaluations, run.bestWorst <= toleranceCents, sensitivity);
+                run.evaluations, run.bestWorst <= toleranceCents, sensitivity, modesNow);
     }
 
     /**
@@ -138,7 +144,7 @@ public final class ThicknessTuner {
      * turned), and for the whole plate's thickness (every control point, or the uniform thickness) at once.
      */
     private double[][] sensitivities(Plate solved, List<Target> targets, List<Unknown> unknowns, double[] values,
-            int count, double[] base, BooleanSupplier cancelled) {
+            int count, double[] base, Tracker tracker, BooleanSupplier cancelled) {
         double[][] out = new double[targets.size()][unknowns.size() + 1];
         for (int j = 0; j <= unknowns.size(); j++) {
             if (cancelled.getAsBoolean()) {
@@ -150,15 +156,15 @@ public final class ThicknessTuner {
                 q[j] -= TENTH_MM;
                 if (q[j] <= 0) {
                     q[j] = values[j] + 2 * TENTH_MM;
-                    f = targetFrequencies(apply(solved, List.of(unknowns.get(j)), new double[] {q[j]}), targets, count);
+                    f = tracker.frequencies(apply(solved, List.of(unknowns.get(j)), new double[] {q[j]}), count);
                     for (int i = 0; i < targets.size(); i++) {
                         out[i][j] = -(f[i] - base[i]) / 2;
                     }
                     continue;
                 }
-                f = targetFrequencies(apply(solved, List.of(unknowns.get(j)), new double[] {q[j]}), targets, count);
+                f = tracker.frequencies(apply(solved, List.of(unknowns.get(j)), new double[] {q[j]}), count);
             } else {
-                f = targetFrequencies(thinnedEverywhere(solved, TENTH_MM), targets, count);
+                f = tracker.frequencies(thinnedEverywhere(solved, TENTH_MM), count);
             }
             for (int i = 0; i < targets.size(); i++) {
                 out[i][j] = f[i] - base[i];
@@ -181,18 +187,80 @@ public final class ThicknessTuner {
         return new Plate(plate.outline(), plate.material(), thinner, plate.edges(), plate.braces());
     }
 
-    private double[] targetFrequencies(Plate plate, List<Target> targets, int count) {
-        double[] all = solver.frequencies(plate, count);
-        double[] f = new double[targets.size()];
-        for (int i = 0; i < f.length; i++) {
-            int m = targets.get(i).mode();
-            if (m > all.length) {
-                throw new IllegalArgumentException("the plate has only " + all.length + " modes in its basis, mode "
-                        + m + " was asked for");
-            }
-            f[i] = all[m - 1];
+    /** Follows each target's mode by its shape: the start's shape grids, matched to each analysis by MAC. */
+    private final class Tracker {
+        final double[][][] reference;
+
+        record Match(double[] frequencies, int[] ranks) {
         }
-        return f;
+
+        Tracker(PlateAnalysis start, List<Target> targets) {
+            reference = new double[targets.size()][][];
+            for (int i = 0; i < targets.size(); i++) {
+                int m = targets.get(i).mode();
+                if (m > start.modes().size()) {
+                    throw new IllegalArgumentException("the plate has only " + start.modes().size()
+                            + " modes in its basis, mode " + m + " was asked for");
+                }
+                reference[i] = start.modes().get(m - 1).shape().w();
+            }
+        }
+
+        double[] frequencies(Plate plate, int count) {
+            return match(solver.shapes(plate, count)).frequencies();
+        }
+
+        /** Greedy: the best (target, mode) pair first, each mode to one target. */
+        Match match(PlateAnalysis a) {
+            List<PlateMode> modes = a.modes();
+            int t = reference.length;
+            double[][] mac = new double[t][modes.size()];
+            for (int i = 0; i < t; i++) {
+                for (int j = 0; j < modes.size(); j++) {
+                    mac[i][j] = mac(reference[i], modes.get(j).shape().w());
+                }
+            }
+            double[] f = new double[t];
+            int[] ranks = new int[t];
+            boolean[] targetDone = new boolean[t];
+            boolean[] modeTaken = new boolean[modes.size()];
+            for (int round = 0; round < t; round++) {
+                int bi = -1;
+                int bj = -1;
+                for (int i = 0; i < t; i++) {
+                    for (int j = 0; j < modes.size(); j++) {
+                        if (!targetDone[i] && !modeTaken[j] && (bi < 0 || mac[i][j] > mac[bi][bj])) {
+                            bi = i;
+                            bj = j;
+                        }
+                    }
+                }
+                targetDone[bi] = true;
+                modeTaken[bj] = true;
+                f[bi] = modes.get(bj).frequencyHz();
+                ranks[bi] = bj + 1;
+            }
+            return new Match(f, ranks);
+        }
+    }
+
+    /** Modal assurance criterion of two shape grids over their common finite nodes: (a·b)² / ((a·a)(b·b)). */
+    static double mac(double[][] a, double[][] b) {
+        double ab = 0;
+        double aa = 0;
+        double bb = 0;
+        for (int i = 0; i < a.length; i++) {
+            for (int j = 0; j < a[i].length; j++) {
+                double x = a[i][j];
+                double y = b[i][j];
+                if (Double.isFinite(x) && Double.isFinite(y)) {
+                    ab += x * y;
+                    aa += x * x;
+                    bb += y * y;
+                }
+            }
+        }
+        return aa == 0 || bb == 0 ? 0 : ab * ab / (aa * bb);
     }
 
     private static void check(Plate plate, Unknown u) {
@@ -269,6 +337,7 @@ public final class ThicknessTuner {
         final List<Target> targets;
         final List<Unknown> unknowns;
         final int count;
+        final Tracker tracker;
         final SolveProgress progress;
         final BooleanSupplier cancelled;
         final double[] start;
@@ -277,9 +346,10 @@ public final class ThicknessTuner {
         double bestWorst = Double.POSITIVE_INFINITY;
         double[] bestFrequencies;
 
-        Run(Plate plate, List<Target> targets, List<Unknown> unknowns, int count, SolveProgress progress,
-                BooleanSupplier cancelled) {
+        Run(Plate plate, List<Target> targets, List<Unknown> unknowns, int count, Tracker tracker,
+                SolveProgress progress, BooleanSupplier cancelled) {
             this.plate = plate;
+            this.tracker = tracker;
             this.targets = targets;
             this.unknowns = unknowns;
             this.count = count;
@@ -308,7 +378,7 @@ public final class ThicknessTuner {
                 throw new CapReached();
             }
             evaluations++;
-            double[] f = targetFrequencies(apply(plate, unknowns, p), targets, count);
+            double[] f = tracker.frequencies(apply(plate, unknowns, p), count);
             double[] r = new double[targets.size() + unknowns.size()];
             double worst = 0;
             for (int i = 0; i < targets.size(); i++) {

@@ -116,4 +116,48 @@ class ThicknessTunerTest {
                 List.of(new ThicknessTuner.Unknown(ThicknessTuner.Kind.THICKNESS, 0, 4e-3, 6e-3)), 4,
                 SolveProgress.NONE, () -> false)).hasMessageContaining("outside its limits");
     }
+
+    /**
+     * A cross-grain brace on the spruce test plate stiffens its cross-grain bending mode (0, 2) past two others: the
+     * mode that is the second at a 1 mm brace is the fourth at 6 mm. The target follows that mode by its shape, so
+     * the solved plate's mode at the target is still the one with no node line across x and two across y.
+     */
+    @Test
+    void aTargetFollowsItsModeByShapeWhenModesSwapOrder() {
+        PlateMaterial spruce = PlateMaterials.byId("spruce").orElseThrow().material();
+        Plate plate = new Plate(Outline.rectangle(0.4, 0.3), spruce, ThicknessField.uniform(0.003), EdgeCondition.FREE,
+                List.of(new Brace(0.2, 0.02, 0.2, 0.28, 0.008, 0.001)));
+        PlateMode before = new PlateSolver().analyze(plate, 6).modes().get(1);
+        assertThat(new int[] {before.nodalLinesX(), before.nodalLinesY()}).containsExactly(0, 2);
+        ThicknessTuner.Solution s = new ThicknessTuner(0.5, 80).solve(plate,
+                List.of(new ThicknessTuner.Target(2, 1.8 * before.frequencyHz())),
+                List.of(new ThicknessTuner.Unknown(ThicknessTuner.Kind.BRACE_HEIGHT, 0, 0.0005, 0.015)), 6,
+                SolveProgress.NONE, () -> false);
+        assertThat(s.converged()).isTrue();
+        assertThat(s.modesNow()[0]).isGreaterThan(2);
+        PlateMode after = new PlateSolver().analyze(s.plate(), 6).modes().get(s.modesNow()[0] - 1);
+        assertThat(new int[] {after.nodalLinesX(), after.nodalLinesY()}).containsExactly(0, 2);
+        assertThat(after.frequencyHz()).isCloseTo(1.8 * before.frequencyHz(), within(0.01 * before.frequencyHz()));
+    }
+
+    // The modal assurance criterion (Allemang & Brown 1982), (a·b)² / ((a·a)(b·b)), written out on small grids:
+    // a shape against itself scaled by -2 is 1; sin(πx) against cos(πx) sampled symmetrically on [0, 1] is 0; NaN
+    // nodes (outside an outline) are left out of both.
+    @Test
+    void macIsOneForTheSameShapeAndZeroForOrthogonalOnes() {
+        double[][] a = new double[9][3];
+        double[][] b = new double[9][3];
+        double[][] c = new double[9][3];
+        for (int i = 0; i < 9; i++) {
+            for (int j = 0; j < 3; j++) {
+                double x = i / 8.0;
+                a[i][j] = Math.sin(Math.PI * x);
+                b[i][j] = -2 * a[i][j];
+                c[i][j] = Math.cos(Math.PI * x);
+            }
+        }
+        a[4][1] = Double.NaN;
+        assertThat(ThicknessTuner.mac(a, b)).isCloseTo(1.0, within(1e-12));
+        assertThat(ThicknessTuner.mac(b, c)).isCloseTo(0.0, within(1e-12));
+    }
 }
