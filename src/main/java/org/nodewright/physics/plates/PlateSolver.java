@@ -55,6 +55,40 @@ public final class PlateSolver {
     }
 
     public PlateAnalysis analyze(Plate plate, int modeCount) {
+        Solved solved = solve(plate, modeCount);
+        List<PlateMode> modes = modes(plate, solved.basis(), solved.pairs(), solved.rigid(), modeCount, true);
+        return new PlateAnalysis(modes, solved.method(), solved.basis().size());
+    }
+
+    /**
+     * As {@link #analyze(Plate, int)} but the modes carry only their frequency and shape grid: no node lines, counts
+     * or names (for solvers that follow modes by their shapes over many analyses).
+     */
+    public PlateAnalysis shapes(Plate plate, int modeCount) {
+        Solved solved = solve(plate, modeCount);
+        List<PlateMode> modes = modes(plate, solved.basis(), solved.pairs(), solved.rigid(), modeCount, false);
+        return new PlateAnalysis(modes, solved.method(), solved.basis().size());
+    }
+
+    /**
+     * The lowest {@code modeCount} flexural frequencies only (Hz, ascending), without shapes or node lines: the
+     * same basis and eigenproblem as {@link #analyze(Plate, int)}, for solvers that analyse a plate many times.
+     */
+    public double[] frequencies(Plate plate, int modeCount) {
+        Solved solved = solve(plate, modeCount);
+        double[] lambda = solved.pairs().values();
+        int count = Math.max(0, Math.min(modeCount, lambda.length - solved.rigid()));
+        double[] f = new double[count];
+        for (int e = 0; e < count; e++) {
+            f[e] = Math.sqrt(Math.max(lambda[solved.rigid() + e], 0)) / (2 * Math.PI);
+        }
+        return f;
+    }
+
+    private record Solved(RitzBasis basis, SymmetricEigen.Pairs pairs, int rigid, String method) {
+    }
+
+    private Solved solve(Plate plate, int modeCount) {
         if (modeCount < 1 || modeCount > MAX_MODES) {
             throw new IllegalArgumentException("modeCount must be 1.." + MAX_MODES + ", got " + modeCount);
         }
@@ -109,8 +143,7 @@ public final class PlateSolver {
                     + ", Gauss-Green cubature (Sommariva & Vianello 2007)"
                     + (plate.edges() == EdgeCondition.FREE ? "" : ", edge springs (penalty method)");
         }
-        List<PlateMode> modes = modes(plate, basis, pairs, rigid, modeCount);
-        return new PlateAnalysis(modes, method, basis.size());
+        return new Solved(basis, pairs, rigid, method);
     }
 
     private static void addBraces(RitzSystem system, Plate plate, int points) {
@@ -289,7 +322,7 @@ public final class PlateSolver {
     }
 
     private static List<PlateMode> modes(Plate plate, RitzBasis basis, SymmetricEigen.Pairs pairs, int rigid,
-                                         int modeCount) {
+                                         int modeCount, boolean withLines) {
         Outline outline = plate.outline();
         double[] b = outline.bounds();
         double lx = b[2] - b[0];
@@ -346,18 +379,22 @@ public final class PlateSolver {
                     row[j] *= scale;
                 }
             }
-            double[][] contour = plate.edges() == EdgeCondition.FREE ? grid : supportedContour(grid, inside, outline);
-            List<double[][]> lines = NodalLines.trace(xs, ys, contour, inside, outline);
             double[][] shown = new double[gx][gy];
             for (int i = 0; i < gx; i++) {
                 for (int j = 0; j < gy; j++) {
                     shown[i][j] = inside[i][j] ? Math.max(-1, Math.min(1, grid[i][j])) : Double.NaN;
                 }
             }
+            Note note = f > 0 ? et.nearest(f) : null;
+            if (!withLines) {
+                modes.add(new PlateMode(modes.size() + 1, f, note, 0, 0, "", new ModeShape(xs, ys, shown, List.of())));
+                continue;
+            }
+            double[][] contour = plate.edges() == EdgeCondition.FREE ? grid : supportedContour(grid, inside, outline);
+            List<double[][]> lines = NodalLines.trace(xs, ys, contour, inside, outline);
             int[] counts = ModeNames.nodalLineCounts(shown);
             boolean ring = ModeNames.hasRing(lines, outline);
             String name = ModeNames.name(plate.edges(), outline.isRectangle(), counts[0], counts[1], ring);
-            Note note = f > 0 ? et.nearest(f) : null;
             modes.add(new PlateMode(modes.size() + 1, f, note, counts[0], counts[1], name,
                     new ModeShape(xs, ys, shown, lines)));
         }
