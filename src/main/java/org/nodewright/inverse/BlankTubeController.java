@@ -3,11 +3,8 @@ package org.nodewright.inverse;
 import io.swagger.v3.oas.annotations.Operation;
 import io.swagger.v3.oas.annotations.tags.Tag;
 import jakarta.validation.Valid;
-import java.net.URI;
 import org.nodewright.physics.inverse.BlankTubeSolver;
-import org.springframework.http.ProblemDetail;
 import org.springframework.http.ResponseEntity;
-import org.springframework.web.bind.annotation.ExceptionHandler;
 import org.springframework.web.bind.annotation.GetMapping;
 import org.springframework.web.bind.annotation.PostMapping;
 import org.springframework.web.bind.annotation.RequestBody;
@@ -35,20 +32,14 @@ class BlankTubeController {
         BlankTubeSetup setup = BlankTubeSetup.of(request);
         double tolerance = request.toleranceOrDefault();
         int cap = request.evaluationsOrDefault();
-        SolveJob job = jobs.submit("blank-tube", j -> BlankTubeResult.of(new BlankTubeSolver(tolerance, cap).solve(
+        return jobs.accepted("blank-tube", j -> BlankTubeResult.of(new BlankTubeSolver(tolerance, cap).solve(
                 setup.model(), setup.tube(), setup.chimneysMm(), setup.model().lengthBeforeFootMm(), setup.fingerings(),
                 setup.limits(), setup.startDiametersMm(), j, j::cancelRequested), setup.tube(), tolerance, setup.bore()));
-        return ResponseEntity.accepted().location(URI.create("/api/v1/inverse/jobs/" + job.id())).body(job.view());
     }
 
     @GetMapping("/api/v1/inverse/blank-tube/demo")
     @Operation(summary = "The workshop's blank for a six-hole D whistle (13 x 280 mm, window) with its two-register chart")
     BlankTubeRequest demo() {
         return DemoRequests.blankWhistle();
-    }
-
-    @ExceptionHandler(SolveJobs.Busy.class)
-    ResponseEntity<ProblemDetail> busy(SolveJobs.Busy e) {
-        return ToneHoleSolveController.busyProblem(e);
     }
 }

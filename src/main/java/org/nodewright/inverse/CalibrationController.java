@@ -3,13 +3,10 @@ package org.nodewright.inverse;
 import io.swagger.v3.oas.annotations.Operation;
 import io.swagger.v3.oas.annotations.tags.Tag;
 import jakarta.validation.Valid;
-import java.net.URI;
 import java.util.List;
 import org.nodewright.physics.aircolumn.Fingering;
 import org.nodewright.physics.inverse.Calibrator;
-import org.springframework.http.ProblemDetail;
 import org.springframework.http.ResponseEntity;
-import org.springframework.web.bind.annotation.ExceptionHandler;
 import org.springframework.web.bind.annotation.PostMapping;
 import org.springframework.web.bind.annotation.RequestBody;
 import org.springframework.web.bind.annotation.RestController;
@@ -40,7 +37,7 @@ class CalibrationController {
         double[] lower = ps.stream().mapToDouble(CalibrationSetup.Parameter::lower).toArray();
         double[] upper = ps.stream().mapToDouble(CalibrationSetup.Parameter::upper).toArray();
         Calibrator.Family family = CalibrationSetup.family(request.bore(), ps);
-        SolveJob job = jobs.submit("calibration", j -> {
+        return jobs.accepted("calibration", j -> {
             int[] n = {0};
             Calibrator.Family watched = (x, f, g) -> {
                 if (j.cancelRequested()) {
@@ -52,11 +49,5 @@ class CalibrationController {
             return CalibrationResult.of(new Calibrator(MAX_EVALUATIONS).fit(watched, start, lower, upper, measured), ps,
                     measured, request.bore());
         });
-        return ResponseEntity.accepted().location(URI.create("/api/v1/inverse/jobs/" + job.id())).body(job.view());
-    }
-
-    @ExceptionHandler(SolveJobs.Busy.class)
-    ResponseEntity<ProblemDetail> busy(SolveJobs.Busy e) {
-        return ToneHoleSolveController.busyProblem(e);
     }
 }
