@@ -2,11 +2,15 @@
 # Start-up time of the packaged jar, from `java` to /actuator/health UP, several times, with the
 # machine's load beside each figure, and where the time went (from the log's timestamps).
 #
-#   bash src/benchmarks/startup.sh [runs] [mode]     mode: plain (default) | cds
+#   bash src/benchmarks/startup.sh [runs] [mode]     mode: plain (default) | cds | aot
 #
 # plain: java -jar target/nodewright-0.1.0.jar, as the contract starts it.
 # cds:   the jar extracted by Spring Boot's jar tools and started with a class-data-sharing archive
 #        made by one training run (see README, Speed); built under target/cds on first use.
+# aot:   the same extracted jar on a Java 25 runtime with an ahead-of-time cache (JEP 483/514/515:
+#        classes loaded and linked, and method profiles, from one training run); built under
+#        target/aot on first use. JAVA25=/path/to/java picks the runtime (default: the first
+#        Java 25 under /usr/lib/jvm).
 # EXTRA_ARGS=... adds application arguments (e.g. --spring.main.lazy-initialization=true).
 # Loopback only; each run gets its own port and data directory and is stopped after it is UP.
 set -euo pipefail
@@ -24,6 +28,17 @@ if [ "$MODE" = cds ]; then
       -jar target/cds/nodewright-0.1.0.jar --server.port=0 --app.data-dir="$(mktemp -d)" >/dev/null 2>&1 || true
   fi
   CMD=(java -XX:SharedArchiveFile=target/cds/nodewright.jsa -jar target/cds/nodewright-0.1.0.jar)
+fi
+if [ "$MODE" = aot ]; then
+  J25=${JAVA25:-$(ls -d /usr/lib/jvm/*25*/bin/java 2>/dev/null | head -1)}
+  [ -x "$J25" ] || { echo "aot mode needs a Java 25 runtime: set JAVA25=/path/to/java" >&2; exit 1; }
+  if [ ! -f target/aot/nodewright.aot ] || [ "$JAR" -nt target/aot/nodewright.aot ]; then
+    rm -rf target/aot
+    "$J25" -Djarmode=tools -jar "$JAR" extract --destination target/aot >/dev/null
+    "$J25" -XX:AOTCacheOutput=target/aot/nodewright.aot -Dspring.context.exit=onRefresh \
+      -jar target/aot/nodewright-0.1.0.jar --server.port=0 --app.data-dir="$(mktemp -d)" >/dev/null 2>&1 || true
+  fi
+  CMD=("$J25" -XX:AOTCache=target/aot/nodewright.aot -jar target/aot/nodewright-0.1.0.jar)
 fi
 stamp() { grep -m1 -E "$1" "$2" | sed 's/^[0-9-]*T\([0-9:.]*\)Z.*/\1/'; }
 secs() { python3 -c "import sys;t=sys.argv[1].split(':');print(float(t[0])*3600+float(t[1])*60+float(t[2]) if len(t)==3 else 'nan')" "$1"; }

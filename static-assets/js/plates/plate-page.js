@@ -3,11 +3,17 @@
 import { getJson, postJson, showFieldErrors, clearFieldErrors } from '../common/api.js';
 import { mountDesignBar } from '../common/design-bar.js';
 import { drawMode } from './plate-map.js';
+import { mountSolver } from './solver-panel.js';
+import { mountMeasure } from './measure-panel.js';
 
 const form = document.getElementById('plate-form');
 const braceRows = document.getElementById('brace-rows');
 const problemLine = document.getElementById('form-problem');
 let lastResponse = null;
+/** Constants fitted on the measure panel (the material choice "measured"), or null. */
+let measuredMaterial = null;
+const MEASURED = 'measured';
+const CONSTANTS = ['densityKgPerM3', 'elasticAlongPa', 'elasticAcrossPa', 'shearPa', 'poissonAlongAcross'];
 
 /** A typed number as a number; text that is not one is sent as typed so the server names the field. */
 function numberOrText(value) {
@@ -84,8 +90,18 @@ function getParameters() {
     request.outline = parsePoints(document.getElementById('outline-points').value);
     if (document.getElementById('mirrorHalf').checked) request.mirrorHalf = true;
   }
-  request.thicknessMm = numberOrText(document.getElementById('thicknessMm').value);
-  request.material = document.getElementById('material').value;
+  const points = parsePoints(document.getElementById('thickness-points').value);
+  if (points.length > 0) {
+    request.thicknessPoints = points.map(([xMm, yMm, thicknessMm]) => ({ xMm, yMm, thicknessMm }));
+  } else {
+    request.thicknessMm = numberOrText(document.getElementById('thicknessMm').value);
+  }
+  const material = document.getElementById('material').value;
+  if (material === MEASURED && measuredMaterial) {
+    CONSTANTS.forEach((k) => { request[k] = measuredMaterial[k]; });
+  } else {
+    request.material = material;
+  }
   request.edges = document.getElementById('edges').value;
   request.modeCount = numberOrText(document.getElementById('modeCount').value);
   request.braces = [...braceRows.children].map((tr) => ({
@@ -110,11 +126,33 @@ function setParameters(p) {
   }
   showOutlineKind();
   document.getElementById('thicknessMm').value = p.thicknessMm ?? '';
-  if (p.material) document.getElementById('material').value = p.material;
+  document.getElementById('thickness-points').value = (p.thicknessPoints || [])
+    .map((q) => `${q.xMm}, ${q.yMm}, ${q.thicknessMm}`).join('\n');
+  if (p.material) {
+    document.getElementById('material').value = p.material;
+  } else if (p.elasticAlongPa != null) {
+    useMaterialConstants(Object.fromEntries(CONSTANTS.map((k) => [k, p[k]])));
+  }
   document.getElementById('edges').value = p.edges || 'free';
   document.getElementById('modeCount').value = p.modeCount ?? 10;
   braceRows.replaceChildren();
   (p.braces || []).forEach((b) => addBraceRow(b));
+}
+
+/** Puts fitted constants in the material choice as "measured" and selects it. */
+function useMaterialConstants(constants) {
+  measuredMaterial = constants;
+  const select = document.getElementById('material');
+  let option = select.querySelector(`option[value="${MEASURED}"]`);
+  if (!option) {
+    option = document.createElement('option');
+    option.value = MEASURED;
+    select.appendChild(option);
+  }
+  const gpa = (pa) => (pa / 1e9).toFixed(2);
+  option.textContent = `${document.querySelector('#plate-text [data-k="plates.js.measured"]').textContent}: `
+    + `${gpa(constants.elasticAlongPa)} / ${gpa(constants.elasticAcrossPa)} / ${gpa(constants.shearPa)} GPa`;
+  select.value = MEASURED;
 }
 
 function showResults(response) {
@@ -187,9 +225,10 @@ async function analyze() {
   if (!result.ok) {
     const unclaimed = showFieldErrors(form, result.problem);
     problemLine.textContent = unclaimed.length ? unclaimed.join('; ') : (result.problem && result.problem.detail) || '';
-    return;
+    return false;
   }
   showResults(result.data);
+  return true;
 }
 
 async function start() {
@@ -212,9 +251,13 @@ async function start() {
   form.addEventListener('submit', (e) => { e.preventDefault(); analyze(); });
   const bar = document.getElementById('design-bar');
   if (bar) mountDesignBar(bar, { kind: 'plate', getParameters, setParameters, formRoot: form });
+  const api = { getParameters, setParameters, analyze, last: () => lastResponse, useMaterialConstants };
+  mountSolver(api);
+  mountMeasure(api);
   const url = new URL(window.location.href);
   if (!url.searchParams.has('design')) analyze();
 }
 
 start();
-window.nodewrightPlates = { last: () => lastResponse, tap: () => lastResponse && tap(lastResponse.modes.slice(0, 6)) };
+window.nodewrightPlates = { last: () => lastResponse, parameters: () => getParameters(),
+  tap: () => lastResponse && tap(lastResponse.modes.slice(0, 6)) };

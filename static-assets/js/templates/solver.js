@@ -8,7 +8,7 @@ import { $, t, num, hz as typedHz, postForBlob, showProblem, say, showImage, dow
 
 
 const POLL_MS = 200;
-const state = { job: null, result: null, timer: null, limits: {} };
+const state = { job: null, result: null, timer: null, polls: 0, limits: {} };
 
 const borePanel = $('bore-panel');
 
@@ -148,7 +148,10 @@ async function startSolve() {
 
 async function poll() {
   if (!state.job) return;
+  clearTimeout(state.timer);
+  const ticket = ++state.polls;
   const answer = await getJson(`/api/v1/inverse/jobs/${encodeURIComponent(state.job)}`);
+  if (ticket !== state.polls || !state.job) return; // a later poll (after a cancel) speaks instead
   if (!answer.ok) {
     setRunning(false);
     $('solve-state').textContent = t('error', answer.status);
@@ -210,9 +213,12 @@ function finish(job) {
 async function cancelSolve() {
   if (!state.job) return;
   clearTimeout(state.timer);
-  const answer = await sendJson('DELETE', `/api/v1/inverse/jobs/${encodeURIComponent(state.job)}`);
-  // A running job stops at its next evaluation: keep polling until it says so.
-  if (answer.ok) poll();
+  const answer = await sendJson('DELETE', `/api/v1/inverse/jobs/${encodeURIComponent(state.job)}`)
+    .catch((error) => ({ ok: false, status: String(error) }));
+  // A queued job is cancelled at once, a running one at its next evaluation: poll until the job
+  // says so. A refused or lost cancel is said on the page, and the job is still followed.
+  if (!answer.ok) $('solve-state').textContent = t('error', answer.status);
+  poll();
 }
 
 function applyResult() {

@@ -1,10 +1,11 @@
 package org.nodewright.e2e;
 
 import java.io.IOException;
-import java.io.UncheckedIOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.Duration;
+import java.util.ArrayList;
+import java.util.List;
 import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.BeforeEach;
 import org.openqa.selenium.By;
@@ -18,32 +19,26 @@ import org.openqa.selenium.chrome.ChromeDriverService;
 import org.openqa.selenium.chrome.ChromeOptions;
 import org.openqa.selenium.support.ui.ExpectedConditions;
 import org.openqa.selenium.support.ui.WebDriverWait;
+import org.nodewright.TemporaryDataDirectory;
+import org.nodewright.TestProperties;
 import org.springframework.boot.test.context.SpringBootTest;
 import org.springframework.boot.test.web.server.LocalServerPort;
-import org.springframework.test.context.DynamicPropertyRegistry;
-import org.springframework.test.context.DynamicPropertySource;
+import org.springframework.test.context.ContextConfiguration;
 
 /**
- * Runs the whole app on a random port with a throw-away data directory and drives it with the
- * Debian Chromium in headless mode (no driver download: /usr/bin/chromedriver is used).
+ * Runs the whole app on a random port and drives it with the Debian Chromium in headless mode (no
+ * driver download: /usr/bin/chromedriver is used). Each application context gets its own data
+ * directory from {@link TemporaryDataDirectory}, deleted when the context closes (the LAN-mode
+ * classes, whose properties differ, get one of their own); the solver's warm-up is off as in every
+ * other test context. Each browser's profile folder is deleted after the test that made it.
  */
-@SpringBootTest(webEnvironment = SpringBootTest.WebEnvironment.RANDOM_PORT)
+@SpringBootTest(webEnvironment = SpringBootTest.WebEnvironment.RANDOM_PORT, properties = {
+    TestProperties.NO_WARM_UP, TestProperties.NO_BANNER})
+@ContextConfiguration(initializers = TemporaryDataDirectory.class)
 public abstract class BrowserTestBase {
 
-    private static final Path DATA_DIR;
-
-    static {
-        try {
-            DATA_DIR = Files.createTempDirectory("nodewright-e2e-");
-        } catch (IOException e) {
-            throw new UncheckedIOException(e);
-        }
-    }
-
-    @DynamicPropertySource
-    static void dataDir(DynamicPropertyRegistry registry) {
-        registry.add("app.data-dir", DATA_DIR::toString);
-    }
+    /** Profile folders of the browsers started by the running test, deleted after it. */
+    private static final List<Path> PROFILES = new ArrayList<>();
 
     @LocalServerPort
     protected int port;
@@ -58,9 +53,33 @@ public abstract class BrowserTestBase {
     }
 
     @AfterEach
-    void stopBrowser() {
+    void stopBrowser() throws IOException {
         if (driver != null) {
             driver.quit();
+        }
+        List<Path> made;
+        synchronized (PROFILES) {
+            made = new ArrayList<>(PROFILES);
+            PROFILES.clear();
+        }
+        for (Path profile : made) {
+            deleteTree(profile);
+        }
+    }
+
+    /** Deletes a folder and all below it (a browser profile, a test's own scratch folder). */
+    protected static void deleteTree(Path dir) throws IOException {
+        if (!Files.exists(dir)) {
+            return;
+        }
+        try (var all = Files.walk(dir)) {
+            for (Path p : all.sorted(java.util.Comparator.reverseOrder()).toList()) {
+                try {
+                    Files.deleteIfExists(p);
+                } catch (java.nio.file.DirectoryNotEmptyException e) {
+                    // a quitting browser may still write a last file; the next pass would take it
+                }
+            }
         }
     }
 
@@ -85,12 +104,16 @@ public abstract class BrowserTestBase {
                 .usingDriverExecutable(Path.of(chromedriver).toFile())
                 .usingAnyFreePort()
                 .build();
+        Path profile = Files.createTempDirectory("nodewright-chromium-");
+        synchronized (PROFILES) {
+            PROFILES.add(profile);
+        }
         ChromeOptions options = new ChromeOptions();
         options.setBinary(chromium);
         options.addArguments("--headless", "--no-sandbox", "--disable-gpu", "--disable-dev-shm-usage",
                 "--disable-quic", "--no-first-run", "--disable-background-networking",
                 "--disable-component-update", "--disable-sync", "--window-size=1280,900",
-                "--user-data-dir=" + Files.createTempDirectory("nodewright-chromium-"));
+                "--user-data-dir=" + profile);
         if (acceptSelfSigned) {
             options.addArguments("--ignore-certificate-errors");
             options.setAcceptInsecureCerts(true);

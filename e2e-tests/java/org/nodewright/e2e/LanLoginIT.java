@@ -2,15 +2,11 @@ package org.nodewright.e2e;
 
 import static org.assertj.core.api.Assertions.assertThat;
 
-import java.nio.file.Files;
-import java.nio.file.Path;
 import org.junit.jupiter.api.Test;
 import org.openqa.selenium.By;
 import org.openqa.selenium.JavascriptExecutor;
 import org.openqa.selenium.support.ui.ExpectedConditions;
 import org.openqa.selenium.support.ui.Select;
-import org.springframework.test.context.DynamicPropertyRegistry;
-import org.springframework.test.context.DynamicPropertySource;
 import org.springframework.test.context.TestPropertySource;
 
 /** LAN mode in a real browser: sign in, manage accounts on the admin page, sign out. */
@@ -22,12 +18,6 @@ class LanLoginIT extends BrowserTestBase {
     @Override
     protected boolean https() {
         return true;
-    }
-
-    @DynamicPropertySource
-    static void ownDatabase(DynamicPropertyRegistry registry) throws Exception {
-        Path dir = Files.createTempDirectory("nodewright-lan-e2e-");
-        registry.add("spring.datasource.url", () -> "jdbc:h2:file:" + dir.toString().replace('\\', '/') + "/nodewright");
     }
 
     private void signIn(String username, String password) {

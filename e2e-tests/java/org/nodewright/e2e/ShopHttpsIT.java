@@ -2,16 +2,12 @@ package org.nodewright.e2e;
 
 import static org.assertj.core.api.Assertions.assertThat;
 
-import java.nio.file.Files;
-import java.nio.file.Path;
 import java.util.List;
 import org.junit.jupiter.api.Test;
 import org.openqa.selenium.By;
 import org.openqa.selenium.WebElement;
 import org.openqa.selenium.support.ui.ExpectedConditions;
 import org.openqa.selenium.support.ui.Select;
-import org.springframework.test.context.DynamicPropertyRegistry;
-import org.springframework.test.context.DynamicPropertySource;
 import org.springframework.test.context.TestPropertySource;
 
 /**
@@ -24,12 +20,6 @@ class ShopHttpsIT extends BrowserTestBase {
 
     static final String ADMIN_PW = "harrowgate-https-1";
     static final String NEW_PW = "spokeshave-and-plane";
-
-    @DynamicPropertySource
-    static void ownDatabase(DynamicPropertyRegistry registry) throws Exception {
-        Path dir = Files.createTempDirectory("nodewright-https-e2e-");
-        registry.add("spring.datasource.url", () -> "jdbc:h2:file:" + dir.toString().replace('\\', '/') + "/nodewright");
-    }
 
     @Override
     protected boolean https() {

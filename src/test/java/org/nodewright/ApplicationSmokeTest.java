@@ -54,7 +54,8 @@ class ApplicationSmokeTest {
                 .andReturn().getResponse().getContentAsString();
         assertThat(docs).contains("/api/v1/frets.svg", "/api/v1/frets.pdf", "/api/v1/templates/tone-holes.svg",
                 "/api/v1/templates/compensation", "/api/v1/inverse/gauges", "/api/v1/inverse/tone-holes",
-                "/api/v1/inverse/jobs/{id}", "Inverse design");
+                "/api/v1/inverse/jobs/{id}", "Inverse design", "/api/v1/templates/bar-undercut.svg",
+                "/api/v1/templates/bar-undercut.pdf", "/api/v1/bars/measure-blank", "/api/v1/bars/measure-blank/recording");
     }
 
     @Test

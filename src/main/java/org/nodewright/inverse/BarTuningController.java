@@ -3,7 +3,6 @@ package org.nodewright.inverse;
 import io.swagger.v3.oas.annotations.Operation;
 import io.swagger.v3.oas.annotations.tags.Tag;
 import jakarta.validation.Valid;
-import java.net.URI;
 import org.nodewright.bars.BarAnalysisRequest;
 import org.nodewright.bars.BarMapper;
 import org.nodewright.physics.bars.Bar;
@@ -11,9 +10,7 @@ import org.nodewright.physics.bars.TuningLimits;
 import org.nodewright.physics.bars.TuningTargets;
 import org.nodewright.physics.bars.UndercutTuner;
 import org.nodewright.strings.StringRules;
-import org.springframework.http.ProblemDetail;
 import org.springframework.http.ResponseEntity;
-import org.springframework.web.bind.annotation.ExceptionHandler;
 import org.springframework.web.bind.annotation.PostMapping;
 import org.springframework.web.bind.annotation.RequestBody;
 import org.springframework.web.bind.annotation.RestController;
@@ -50,14 +47,8 @@ class BarTuningController {
         double tolerance = request.toleranceCents() == null ? BarTuningRequest.DEFAULT_TOLERANCE_CENTS
                 : request.toleranceCents();
         int cap = request.maxEvaluations() == null ? BarTuningRequest.DEFAULT_MAX_EVALUATIONS : request.maxEvaluations();
-        SolveJob job = jobs.submit("bar-tuning", j -> BarTuningResult.of(new UndercutTuner(tolerance, cap).solve(
+        return jobs.accepted("bar-tuning", j -> BarTuningResult.of(new UndercutTuner(tolerance, cap).solve(
                 blank, barRequest.theoryOrDefault(), targets, limits, null, j, j::cancelRequested), targets,
                 barRequest.theoryOrDefault(), barRequest));
-        return ResponseEntity.accepted().location(URI.create("/api/v1/inverse/jobs/" + job.id())).body(job.view());
-    }
-
-    @ExceptionHandler(SolveJobs.Busy.class)
-    ResponseEntity<ProblemDetail> busy(SolveJobs.Busy e) {
-        return ToneHoleSolveController.busyProblem(e);
     }
 }

@@ -1,6 +1,7 @@
 package org.nodewright.inverse;
 
 import jakarta.annotation.PreDestroy;
+import java.net.URI;
 import java.time.Clock;
 import java.time.Instant;
 import java.util.ArrayList;
@@ -16,6 +17,7 @@ import java.util.function.Function;
 import org.nodewright.physics.inverse.SolveCancelledException;
 import org.slf4j.Logger;
 import org.slf4j.LoggerFactory;
+import org.springframework.http.ResponseEntity;
 import org.springframework.stereotype.Component;
 
 /**
@@ -47,6 +49,18 @@ class SolveJobs {
         Busy() {
             super("too many solves are waiting; try again when one has finished");
         }
+    }
+
+    /** Where a job is polled and cancelled (GET and DELETE), followed by its id. */
+    static final String JOB_PATH = "/api/v1/inverse/jobs/";
+
+    /**
+     * Queues a solve and answers as every solve endpoint does: 202 with the job and its
+     * {@code Location}. A full queue throws {@link Busy}, answered 429 by {@link SolveJobsAdvice}.
+     */
+    ResponseEntity<SolveJob.View> accepted(String kind, Function<SolveJob, Object> work) {
+        SolveJob job = submit(kind, work);
+        return ResponseEntity.accepted().location(URI.create(JOB_PATH + job.id())).body(job.view());
     }
 
     /** Queues a solve; the work reads the job for its cancel flag and reports progress into it. */

@@ -3,7 +3,6 @@ package org.nodewright.inverse;
 import io.swagger.v3.oas.annotations.Operation;
 import io.swagger.v3.oas.annotations.tags.Tag;
 import jakarta.validation.Valid;
-import java.net.URI;
 import java.util.List;
 import org.nodewright.physics.inverse.ToneHoleSolver;
 import org.springframework.http.HttpStatus;
@@ -11,7 +10,6 @@ import org.springframework.http.MediaType;
 import org.springframework.http.ProblemDetail;
 import org.springframework.http.ResponseEntity;
 import org.springframework.web.bind.annotation.DeleteMapping;
-import org.springframework.web.bind.annotation.ExceptionHandler;
 import org.springframework.web.bind.annotation.GetMapping;
 import org.springframework.web.bind.annotation.PathVariable;
 import org.springframework.web.bind.annotation.PostMapping;
@@ -40,10 +38,9 @@ class ToneHoleSolveController {
         ToneHoleSolveSetup setup = ToneHoleSolveSetup.of(request);
         double tolerance = request.toleranceOrDefault();
         int cap = request.maxEvaluationsOrDefault();
-        SolveJob job = jobs.submit("tone-holes", j -> ToneHoleResult.of(new ToneHoleSolver(tolerance, cap).solve(
+        return jobs.accepted("tone-holes", j -> ToneHoleResult.of(new ToneHoleSolver(tolerance, cap).solve(
                 setup.model(), setup.start(), setup.model().lengthBeforeFootMm(), setup.fingerings(), setup.limits(),
                 j, j::cancelRequested), tolerance, setup.bore()));
-        return ResponseEntity.accepted().location(URI.create("/api/v1/inverse/jobs/" + job.id())).body(job.view());
     }
 
     @GetMapping("/api/v1/inverse/jobs/{id}")
@@ -63,18 +60,6 @@ class ToneHoleSolveController {
     @Operation(summary = "The workshop's six-hole whistle as a ready solve request")
     ToneHoleSolveRequest demo() {
         return DemoRequests.whistle();
-    }
-
-    @ExceptionHandler(SolveJobs.Busy.class)
-    ResponseEntity<ProblemDetail> busy(SolveJobs.Busy e) {
-        return busyProblem(e);
-    }
-
-    /** The 429 problem document of a full solve queue (every solve controller answers with it). */
-    static ResponseEntity<ProblemDetail> busyProblem(SolveJobs.Busy e) {
-        ProblemDetail pd = ProblemDetail.forStatusAndDetail(HttpStatus.TOO_MANY_REQUESTS, e.getMessage());
-        pd.setTitle("Solver busy");
-        return ResponseEntity.status(HttpStatus.TOO_MANY_REQUESTS).contentType(MediaType.APPLICATION_PROBLEM_JSON).body(pd);
     }
 
     private static ResponseEntity<ProblemDetail> notFound(String id) {

@@ -19,6 +19,7 @@ import org.nodewright.physics.measure.MonoRecording;
 import org.nodewright.physics.measure.PartialAnalyzer;
 import org.nodewright.physics.measure.PartialFit;
 import org.nodewright.physics.measure.PartialsCsvReader;
+import org.nodewright.physics.measure.PeakFinder;
 import org.nodewright.physics.measure.SpectralPeak;
 import org.nodewright.physics.measure.StiffStringFit;
 import org.nodewright.physics.measure.UnreadableInputException;
@@ -53,6 +54,30 @@ class MeasurementsController {
         MonoRecording recording = readFile(() -> WavReader.read(bytes(file)));
         PartialFit fit = readFile(() -> PartialAnalyzer.analyze(recording, expectedF1Hz, partialsOrDefault(maxPartials)));
         return PartialsResponse.of(recording.sampleRateHz(), recording.durationSeconds(), "wav", fit, true);
+    }
+
+    /**
+     * The strongest spectral peaks of a WAV recording (the first step of the partials analysis, {@link PeakFinder}),
+     * unnamed and in ascending frequency: for sounds that are no harmonic series, like a tapped plate.
+     */
+    @PostMapping(path = "/peaks", consumes = MediaType.MULTIPART_FORM_DATA_VALUE)
+    PeaksResponse peaks(@RequestPart("file") MultipartFile file,
+            @RequestParam(required = false) @Min(1) @Max(200) Integer maxPeaks,
+            @RequestParam(required = false) @Finite @Positive @DecimalMax("20000") Double minHz,
+            @RequestParam(required = false) @Finite @Positive @DecimalMax("24000") Double maxHz) {
+        MonoRecording recording = readFile(() -> WavReader.read(bytes(file)));
+        int count = maxPeaks == null ? PeaksResponse.DEFAULT_PEAKS : maxPeaks;
+        double lo = minHz == null ? 0 : minHz;
+        double hi = maxHz == null ? Double.POSITIVE_INFINITY : maxHz;
+        List<SpectralPeak> all = readFile(() -> PeakFinder.find(recording, PeaksResponse.SEARCHED));
+        List<PeaksResponse.Peak> kept = all.stream()
+                .filter(p -> p.frequencyHz() >= lo && p.frequencyHz() <= hi)
+                .sorted(java.util.Comparator.comparingDouble(SpectralPeak::levelDb).reversed())
+                .limit(count)
+                .sorted(java.util.Comparator.comparingDouble(SpectralPeak::frequencyHz))
+                .map(p -> new PeaksResponse.Peak(p.frequencyHz(), p.levelDb()))
+                .toList();
+        return new PeaksResponse(recording.sampleRateHz(), recording.durationSeconds(), kept);
     }
 
     @PostMapping(path = "/partials-csv", consumes = MediaType.MULTIPART_FORM_DATA_VALUE)

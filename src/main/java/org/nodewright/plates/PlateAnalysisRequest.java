@@ -71,6 +71,13 @@ public record PlateAnalysisRequest(
             @DecimalMax(value = "200", message = "must be at most 200 mm") Double thicknessMm) {
     }
 
+    /** The same plate with other thicknesses and braces (the thickness solver's answer), everything else kept. */
+    public PlateAnalysisRequest withThicknessAndBraces(Double newThicknessMm, List<ThicknessPoint> newPoints,
+            List<BraceJson> newBraces) {
+        return new PlateAnalysisRequest(outline, mirrorHalf, lengthMm, widthMm, newThicknessMm, newPoints, material,
+                densityKgPerM3, elasticAlongPa, elasticAcrossPa, shearPa, poissonAlongAcross, edges, newBraces, modeCount);
+    }
+
     public int modeCountOrDefault() {
         return modeCount == null ? DEFAULT_MODE_COUNT : modeCount;
     }

@@ -17,7 +17,7 @@ import tools.jackson.databind.JsonNode;
  * The one mapper between the plate request (mm, JSON words) and the core's {@link Plate} (metres, enums),
  * and the request's cross-field rules, which need the same parsing (the outline, the material choice).
  */
-final class PlateMapping {
+public final class PlateMapping {
 
     static final String RECTANGLE = "rectangle";
     private static final double MM = 1e-3;
@@ -203,7 +203,7 @@ final class PlateMapping {
     }
 
     /** The core plate of a valid request. */
-    static Plate toPlate(PlateAnalysisRequest r) {
+    public static Plate toPlate(PlateAnalysisRequest r) {
         List<FieldProblem> ignored = new ArrayList<>();
         Outline outline = outline(r, ignored).orElseThrow(() -> new IllegalArgumentException("invalid outline"));
         ThicknessField thickness;

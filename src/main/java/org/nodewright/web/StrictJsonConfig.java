@@ -1,5 +1,6 @@
 package org.nodewright.web;
 
+import java.util.function.Consumer;
 import org.springframework.boot.jackson.autoconfigure.JsonMapperBuilderCustomizer;
 import org.springframework.context.annotation.Bean;
 import org.springframework.context.annotation.Configuration;
@@ -7,6 +8,7 @@ import tools.jackson.databind.DeserializationFeature;
 import tools.jackson.databind.cfg.CoercionAction;
 import tools.jackson.databind.cfg.CoercionInputShape;
 import tools.jackson.databind.cfg.EnumFeature;
+import tools.jackson.databind.cfg.MutableCoercionConfig;
 import tools.jackson.databind.type.LogicalType;
 
 /**
@@ -17,6 +19,12 @@ import tools.jackson.databind.type.LogicalType;
 @Configuration(proxyBeanMethods = false)
 class StrictJsonConfig {
 
+    private static final CoercionInputShape STRING = CoercionInputShape.String;
+    private static final CoercionInputShape EMPTY = CoercionInputShape.EmptyString;
+    private static final CoercionInputShape INTEGER = CoercionInputShape.Integer;
+    private static final CoercionInputShape FLOAT = CoercionInputShape.Float;
+    private static final CoercionInputShape BOOLEAN = CoercionInputShape.Boolean;
+
     @Bean
     JsonMapperBuilderCustomizer strictCoercion() {
         return builder -> builder
@@ -25,26 +33,19 @@ class StrictJsonConfig {
                 .enable(DeserializationFeature.FAIL_ON_UNKNOWN_PROPERTIES)
                 .enable(DeserializationFeature.FAIL_ON_NULL_FOR_PRIMITIVES)
                 .enable(DeserializationFeature.FAIL_ON_TRAILING_TOKENS)
-                .withCoercionConfig(LogicalType.Float, c -> c
-                        .setCoercion(CoercionInputShape.String, CoercionAction.Fail)
-                        .setCoercion(CoercionInputShape.EmptyString, CoercionAction.Fail)
-                        .setCoercion(CoercionInputShape.Boolean, CoercionAction.Fail))
-                .withCoercionConfig(LogicalType.Integer, c -> c
-                        .setCoercion(CoercionInputShape.String, CoercionAction.Fail)
-                        .setCoercion(CoercionInputShape.EmptyString, CoercionAction.Fail)
-                        .setCoercion(CoercionInputShape.Float, CoercionAction.Fail)
-                        .setCoercion(CoercionInputShape.Boolean, CoercionAction.Fail))
-                .withCoercionConfig(LogicalType.Boolean, c -> c
-                        .setCoercion(CoercionInputShape.String, CoercionAction.Fail)
-                        .setCoercion(CoercionInputShape.EmptyString, CoercionAction.Fail)
-                        .setCoercion(CoercionInputShape.Integer, CoercionAction.Fail)
-                        .setCoercion(CoercionInputShape.Float, CoercionAction.Fail))
-                .withCoercionConfig(LogicalType.Textual, c -> c
-                        .setCoercion(CoercionInputShape.Integer, CoercionAction.Fail)
-                        .setCoercion(CoercionInputShape.Float, CoercionAction.Fail)
-                        .setCoercion(CoercionInputShape.Boolean, CoercionAction.Fail))
-                .withCoercionConfig(LogicalType.Enum, c -> c
-                        .setCoercion(CoercionInputShape.Integer, CoercionAction.Fail)
-                        .setCoercion(CoercionInputShape.EmptyString, CoercionAction.Fail));
+                .withCoercionConfig(LogicalType.Float, refuse(STRING, EMPTY, BOOLEAN))
+                .withCoercionConfig(LogicalType.Integer, refuse(STRING, EMPTY, FLOAT, BOOLEAN))
+                .withCoercionConfig(LogicalType.Boolean, refuse(STRING, EMPTY, INTEGER, FLOAT))
+                .withCoercionConfig(LogicalType.Textual, refuse(INTEGER, FLOAT, BOOLEAN))
+                .withCoercionConfig(LogicalType.Enum, refuse(INTEGER, EMPTY));
+    }
+
+    /** A coercion rule that fails on each of the given input shapes. */
+    private static Consumer<MutableCoercionConfig> refuse(CoercionInputShape... shapes) {
+        return c -> {
+            for (CoercionInputShape shape : shapes) {
+                c.setCoercion(shape, CoercionAction.Fail);
+            }
+        };
     }
 }

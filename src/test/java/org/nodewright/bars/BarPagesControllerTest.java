@@ -20,7 +20,10 @@ class BarPagesControllerTest {
     void barBenchRendersWithItsTextsAndCanvases() throws Exception {
         String html = mvc.perform(get("/bars")).andExpect(status().isOk()).andReturn().getResponse()
                 .getContentAsString();
-        assertThat(html).contains("id=\"mode-shapes-chart\"", "id=\"profile-chart\"", "id=\"sensitivity-chart\"",
-                "/js/bars/page.js", "Bar bench", "Kalimba tine", "dust extraction").doesNotContain("??");
+        assertThat(html).contains("id=\"bar-shapes-chart\"", "id=\"bar-side-chart\"", "id=\"bar-sensitivity-chart\"",
+                "id=\"bar-ratios-chart\"", "id=\"bar-blank\"", "id=\"bar-listen\"", "id=\"template-pdf\"",
+                "/js/bars/page.js", "Bar bench", "Kalimba tine", "dust extraction").doesNotContain("??")
+                // the string and bore benches own these ids (DEVELOPERS.md, page hooks)
+                .doesNotContain("id=\"mode-shapes-chart\"", "id=\"profile-chart\"");
     }
 }

@@ -344,6 +344,39 @@ abstract class DesignApiContract {
     }
 
     /**
+     * Import rules the library promises (README, shop library): a file is imported into an existing
+     * design only as a design of the same kind, only one design at a time, and a history whose older
+     * revision does not validate is refused whole, naming that revision; nothing is written then.
+     */
+    @Test
+    void importRefusesAnotherKindTwoDesignsAndABadRevisionAndWritesNothing() throws Exception {
+        long id = create("Top E", "string", STRING_PARAMS, "[]").get("id").asLong();
+        String bore = "{\"name\": \"Bore\", \"kind\": \"air-column\", \"parameters\": " + BORE_PARAMS + "}";
+        String string = "{\"name\": \"Other E\", \"kind\": \"string\", \"parameters\": " + STRING_PARAMS + "}";
+        String head = "{\"format\": \"nodewright-library\", \"formatVersion\": 1, \"designs\": [";
+        mvc.perform(post("/api/v1/designs/" + id + "/import").contentType(MediaType.APPLICATION_JSON)
+                        .content("{\"version\": 1, \"document\": " + head + bore + "]}}"))
+                .andExpect(status().isBadRequest())
+                .andExpect(jsonPath("$.errors[0].field").value("document.designs[0].kind"));
+        mvc.perform(post("/api/v1/designs/" + id + "/import").contentType(MediaType.APPLICATION_JSON)
+                        .content("{\"version\": 1, \"document\": " + head + string + ", " + string + "]}}"))
+                .andExpect(status().isBadRequest())
+                .andExpect(jsonPath("$.errors[0].field").value("document.designs"));
+        // A two-revision history whose first revision has a negative scale length.
+        String history = "{\"name\": \"Top E again\", \"kind\": \"string\", \"parameters\": " + STRING_PARAMS
+                + ", \"version\": 2, \"revisions\": [{\"version\": 1, \"name\": \"first\", \"parameters\": "
+                + STRING_PARAMS.replace("650.0", "-650.0") + "}, {\"version\": 2, \"name\": \"second\", \"parameters\": "
+                + STRING_PARAMS + "}]}";
+        mvc.perform(post("/api/v1/designs/import").contentType(MediaType.APPLICATION_JSON).content(head + history + "]}"))
+                .andExpect(status().isBadRequest())
+                .andExpect(jsonPath("$.errors[0].field").value("designs[0].revisions[0].parameters.lengthMm"));
+        mvc.perform(get("/api/v1/designs")).andExpect(jsonPath("$.length()").value(1));
+        mvc.perform(get("/api/v1/designs/" + id)).andExpect(jsonPath("$.version").value(1))
+                .andExpect(jsonPath("$.kind").value("string"));
+        mvc.perform(get("/api/v1/designs/" + id + "/revisions")).andExpect(jsonPath("$.length()").value(1));
+    }
+
+    /**
      * Eight writers race to save over the same design, each retrying on a stale version until its
      * save lands. Every save must be kept as exactly one revision, and the versions must run 1..n
      * with no gap and no save lost.

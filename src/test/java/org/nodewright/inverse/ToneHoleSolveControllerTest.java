@@ -174,4 +174,45 @@ class ToneHoleSolveControllerTest {
                 .andExpect(content().contentTypeCompatibleWith("application/problem+json"))
                 .andExpect(jsonPath("$.errors[0].field").value(field));
     }
+
+    /**
+     * A full queue (SolveJobs.MAX_WAITING jobs not finished) is answered 429 with a problem document by
+     * every solve endpoint alike, and nothing more is queued; the jobs already queued are untouched.
+     */
+    @Test
+    void aFullQueueIsAnswered429ByEverySolveEndpoint() throws Exception {
+        CountDownLatch release = new CountDownLatch(1);
+        List<SolveJob> held = new java.util.ArrayList<>();
+        try {
+            for (int i = 0; i < SolveJobs.MAX_WAITING; i++) {
+                held.add(jobs.submit("test-hold", j -> {
+                    try {
+                        release.await(60, TimeUnit.SECONDS);
+                    } catch (InterruptedException e) {
+                        Thread.currentThread().interrupt();
+                    }
+                    return "released";
+                }));
+            }
+            String bar = "{\"bar\": {\"lengthMm\": 440, \"section\": \"rectangle\", \"widthMm\": 60, \"thicknessMm\": 22,"
+                    + " \"material\": \"rosewood\"}, \"note\": \"F3\"}";
+            String plate = "{\"plate\": {\"outline\": \"rectangle\", \"lengthMm\": 400, \"widthMm\": 300,"
+                    + " \"thicknessMm\": 3.0, \"material\": \"spruce\"}, \"targets\": [{\"mode\": 1, \"targetHz\": 110}],"
+                    + " \"unknowns\": {\"thickness\": true}}";
+            for (String[] call : new String[][] {{"/api/v1/inverse/tone-holes", demo()},
+                {"/api/v1/inverse/bar-tuning", bar}, {"/api/v1/inverse/plate-thickness", plate}}) {
+                mvc.perform(post(call[0]).contentType(MediaType.APPLICATION_JSON).content(call[1]))
+                        .andExpect(status().isTooManyRequests())
+                        .andExpect(content().contentTypeCompatibleWith(MediaType.APPLICATION_PROBLEM_JSON))
+                        .andExpect(jsonPath("$.status").value(429))
+                        .andExpect(jsonPath("$.title").value("Solver busy"));
+            }
+            assertThat(held).allSatisfy(j -> assertThat(j.status().finished()).isFalse());
+        } finally {
+            release.countDown();
+        }
+        for (SolveJob j : held) {
+            waitFor(j.id());
+        }
+    }
 }

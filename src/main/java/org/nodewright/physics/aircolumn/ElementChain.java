@@ -24,6 +24,9 @@ final class ElementChain {
     private final Duct[] ducts;
     private final double length;
     private final LocalAir outputAir;
+    /** Element index of each duct, in chain order, and the ducts' upstream ends (ascending). */
+    private final int[] ductElement;
+    private final double[] ductStart;
 
     private ElementChain(List<ChainElement> elements, double length, LocalAir outputAir) {
         this.elements = elements.toArray(new ChainElement[0]);
@@ -32,6 +35,17 @@ final class ElementChain {
         this.outputAir = outputAir;
         if (ducts.length == 0) {
             throw new IllegalStateException("no duct element");
+        }
+        ductElement = new int[ducts.length];
+        ductStart = new double[ducts.length];
+        for (int e = 0, i = 0; e < this.elements.length; e++) {
+            if (this.elements[e] instanceof Duct d) {
+                if (i > 0 && d.start < ductStart[i - 1]) {
+                    throw new IllegalStateException("ducts out of order at element " + e);
+                }
+                ductElement[i] = e;
+                ductStart[i++] = d.start;
+            }
         }
     }
 
@@ -161,19 +175,21 @@ final class ElementChain {
      * before it).
      */
     int ductIndexAt(double x) {
-        int best = -1;
-        int first = -1;
-        for (int e = 0; e < elements.length; e++) {
-            if (elements[e] instanceof Duct d) {
-                if (first < 0) {
-                    first = e;
-                }
-                if (d.start <= x) {
-                    best = e;
-                }
+        // Binary search (the profiles ask once per sample point): the last start <= x.
+        int lo = 0;
+        int hi = ductStart.length - 1;
+        if (!(ductStart[0] <= x)) {
+            return ductElement[0];
+        }
+        while (lo < hi) {
+            int mid = (lo + hi + 1) >>> 1;
+            if (ductStart[mid] <= x) {
+                lo = mid;
+            } else {
+                hi = mid - 1;
             }
         }
-        return best < 0 ? first : best;
+        return ductElement[lo];
     }
 
     /** Upstream ends of the ducts and the bore's end, m (for sampling profiles). */

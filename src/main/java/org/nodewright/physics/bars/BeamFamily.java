@@ -150,7 +150,7 @@ final class BeamFamily {
         hold(held, kind.endDisplacement(ne, true), bar.ends().finish());
         int[] free = freeIndices(held);
         int rigid = bar.ends().rigidBendingModes();
-        GeneralizedEigen eig = GeneralizedEigen.lowest(reduce(k, free), reduce(m, free), rigid + modes);
+        GeneralizedEigen eig = BandedEigen.lowest(reduce(k, free), reduce(m, free), rigid + modes);
         int got = Math.max(0, eig.values.length - rigid);
         double[] values = new double[got];
         double[][] vectors = new double[got][];

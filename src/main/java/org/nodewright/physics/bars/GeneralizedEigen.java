@@ -29,6 +29,10 @@ final class GeneralizedEigen {
         this.vectors = vectors;
     }
 
+    static GeneralizedEigen of(double[] values, double[][] vectors) {
+        return new GeneralizedEigen(values, vectors);
+    }
+
     /**
      * @param k     stiffness, symmetric
      * @param m     mass, symmetric positive definite

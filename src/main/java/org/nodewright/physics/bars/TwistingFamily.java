@@ -71,7 +71,7 @@ final class TwistingFamily {
         held[dof - 1] = bar.ends().finish() != BarEnds.End.FREE;
         int[] free = BeamFamily.freeIndices(held);
         int rigid = bar.ends().rigidTwistingModes();
-        GeneralizedEigen eig = GeneralizedEigen.lowest(BeamFamily.reduce(k, free), BeamFamily.reduce(m, free),
+        GeneralizedEigen eig = BandedEigen.lowest(BeamFamily.reduce(k, free), BeamFamily.reduce(m, free),
                 rigid + count);
         List<BarMode> out = new ArrayList<>();
         for (int q = rigid; q < eig.values.length; q++) {

@@ -55,6 +55,30 @@ public final class PlateSolver {
     }
 
     public PlateAnalysis analyze(Plate plate, int modeCount) {
+        Solved solved = solve(plate, modeCount);
+        List<PlateMode> modes = modes(plate, solved.basis(), solved.pairs(), solved.rigid(), modeCount);
+        return new PlateAnalysis(modes, solved.method(), solved.basis().size());
+    }
+
+    /**
+     * The lowest {@code modeCount} flexural frequencies only (Hz, ascending), without shapes or node lines: the
+     * same basis and eigenproblem as {@link #analyze(Plate, int)}, for solvers that analyse a plate many times.
+     */
+    public double[] frequencies(Plate plate, int modeCount) {
+        Solved solved = solve(plate, modeCount);
+        double[] lambda = solved.pairs().values();
+        int count = Math.max(0, Math.min(modeCount, lambda.length - solved.rigid()));
+        double[] f = new double[count];
+        for (int e = 0; e < count; e++) {
+            f[e] = Math.sqrt(Math.max(lambda[solved.rigid() + e], 0)) / (2 * Math.PI);
+        }
+        return f;
+    }
+
+    private record Solved(RitzBasis basis, SymmetricEigen.Pairs pairs, int rigid, String method) {
+    }
+
+    private Solved solve(Plate plate, int modeCount) {
         if (modeCount < 1 || modeCount > MAX_MODES) {
             throw new IllegalArgumentException("modeCount must be 1.." + MAX_MODES + ", got " + modeCount);
         }
@@ -109,8 +133,7 @@ public final class PlateSolver {
                     + ", Gauss-Green cubature (Sommariva & Vianello 2007)"
                     + (plate.edges() == EdgeCondition.FREE ? "" : ", edge springs (penalty method)");
         }
-        List<PlateMode> modes = modes(plate, basis, pairs, rigid, modeCount);
-        return new PlateAnalysis(modes, method, basis.size());
+        return new Solved(basis, pairs, rigid, method);
     }
 
     private static void addBraces(RitzSystem system, Plate plate, int points) {

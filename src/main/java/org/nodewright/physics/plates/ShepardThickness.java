@@ -57,4 +57,13 @@ final class ShepardThickness implements ThicknessField {
     public double minimum() {
         return min;
     }
+
+    @Override
+    public List<ThicknessPoint> controlPoints() {
+        List<ThicknessPoint> out = new java.util.ArrayList<>(h.length);
+        for (int i = 0; i < h.length; i++) {
+            out.add(new ThicknessPoint(px[i], py[i], h[i]));
+        }
+        return out;
+    }
 }

@@ -13,6 +13,11 @@ public interface ThicknessField {
     /** The thinnest value anywhere. */
     double minimum();
 
+    /** The graduation's control points (metres), empty for a uniform plate. */
+    default List<ThicknessPoint> controlPoints() {
+        return List.of();
+    }
+
     static ThicknessField uniform(double thicknessM) {
         if (!(thicknessM > 0) || Double.isInfinite(thicknessM)) {
             throw new IllegalArgumentException("thickness must be positive and finite, got " + thicknessM);

@@ -10,7 +10,8 @@ import org.nodewright.physics.Require;
 public sealed interface Mark permits Mark.Stroke, Mark.Ring, Mark.Caption {
 
     /** What a mark is for; renderers may style by role and tests find marks by it. */
-    enum Role { FRET, NUT, SADDLE, POSITION, OUTLINE, RULER, RULER_TICK, HOLE, CENTRE, DIMENSION, TEXT, ALIGNMENT }
+    enum Role { FRET, NUT, SADDLE, POSITION, OUTLINE, RULER, RULER_TICK, HOLE, CENTRE, DIMENSION, TEXT, ALIGNMENT,
+        CONTOUR, BRACE }
 
     Role role();
 

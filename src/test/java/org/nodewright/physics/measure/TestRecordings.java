@@ -16,6 +16,27 @@ public final class TestRecordings {
         };
     }
 
+    /**
+     * A tapped bar: exponentially decaying sines at the given frequencies and amplitudes (each decaying
+     * in 0.6 s / √(f / f₁), the higher modes of a wooden bar dying first), 16-bit mono at 48 kHz,
+     * with a seeded noise floor at −66 dB.
+     */
+    public static byte[] tap(double[] hz, double[] amplitude, double seconds) {
+        double rate = 48_000;
+        double[] x = new double[(int) (seconds * rate)];
+        java.util.Random noise = new java.util.Random(11);
+        for (int i = 0; i < x.length; i++) {
+            double t = i / rate;
+            double v = 5e-4 * noise.nextGaussian();
+            for (int k = 0; k < hz.length; k++) {
+                double tau = 0.6 / Math.sqrt(hz[k] / hz[0]);
+                v += amplitude[k] * Math.exp(-t / tau) * Math.sin(2 * Math.PI * hz[k] * t);
+            }
+            x[i] = v;
+        }
+        return SyntheticPluck.wav(x, 1, 1, 16, rate);
+    }
+
     public static byte[] silence(int samples) {
         return SyntheticPluck.wav(new double[samples], 1, 1, 16, 48_000);
     }
