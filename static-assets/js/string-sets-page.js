@@ -7,6 +7,7 @@ import { drawChart, baseOptions } from './common/charts.js';
 import { createRequestLoop, formView } from './common/request-loop.js';
 import { pageText } from './common/text.js';
 import { showPanelFailure } from './common/panels.js';
+import { pitchHz } from './common/notes.js';
 
 const form = document.getElementById('set-form');
 const $ = (id) => document.getElementById(id);
@@ -59,6 +60,9 @@ function addRow(spec) {
   cell(null).className = 'row-number';
   const target = textInput('target');
   target.value = spec.target != null ? String(spec.target) : '';
+  // A saved label that is not a pitch ("1 E4") rides with the row until the pitch is retyped.
+  if (spec.label != null) tr.dataset.label = spec.label;
+  target.addEventListener('input', () => { delete tr.dataset.label; });
   cell(target, 'narrow');
   const material = materialSelect('material');
   if (spec.material) material.value = spec.material;
@@ -121,7 +125,7 @@ function buildRequest() {
       const hz = c.check(target, readPitch(target, $('setA4')), t('notANote'));
       if (text === '') c.add(target.dataset.field, t('pitchNeeded'));
       return {
-        label: text === '' ? null : text,
+        label: tr.dataset.label ?? (text === '' ? null : text),
         targetHz: hz,
         material: tr.querySelector('.material').value,
         diameterMm: length(tr.querySelector('.gauge')),
@@ -139,7 +143,11 @@ function fillForm(p) {
   $('setA4').value = p.referenceA4Hz != null ? String(p.referenceA4Hz) : '440';
   $('set-rows').replaceChildren();
   for (const s of p.strings || []) {
-    addRow({ target: s.label || s.targetHz, material: s.material, diameterMm: s.diameterMm, wrapMaterial: s.wrapMaterial,
+    // The one input holds the pitch: the label when it reads as one (as this page saves it), else
+    // the saved frequency, the label kept beside it.
+    const labelIsPitch = s.label != null && pitchHz(String(s.label)) !== null;
+    addRow({ target: labelIsPitch || s.targetHz == null ? s.label : s.targetHz,
+      label: labelIsPitch ? undefined : s.label ?? undefined, material: s.material, diameterMm: s.diameterMm, wrapMaterial: s.wrapMaterial,
       wrapDiameterMm: s.wrapDiameterMm, lengthMm: s.lengthMm });
   }
 }

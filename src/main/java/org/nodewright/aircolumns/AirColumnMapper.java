@@ -1,5 +1,7 @@
 package org.nodewright.aircolumns;
 
+import static org.nodewright.physics.Units.MM;
+
 import java.util.ArrayList;
 import java.util.HashSet;
 import java.util.List;
@@ -26,8 +28,6 @@ import org.nodewright.web.EnumWords;
  * template) maps it here; a new request field gets its default and its mapping here too.
  */
 public final class AirColumnMapper {
-
-    private static final double MM = 1e-3;
 
     private AirColumnMapper() {
     }

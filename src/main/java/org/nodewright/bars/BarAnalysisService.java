@@ -1,5 +1,7 @@
 package org.nodewright.bars;
 
+import static org.nodewright.physics.Units.MM;
+
 import java.util.ArrayList;
 import java.util.List;
 import org.nodewright.physics.bars.Bar;
@@ -59,14 +61,14 @@ public class BarAnalysisService {
     /** Cord holes at the nodes of the first bending mode (free bars only: a held bar has no cords). */
     static List<Double> cordHoles(BarAnalysis a) {
         BarMode first = a.bending().get(0);
-        return first.nodes().stream().map(x -> x / BarMapper.MM).toList();
+        return first.nodes().stream().map(x -> x / MM).toList();
     }
 
     static BarAnalysisResponse.ModeJson mode(BarMode m, double f1, EqualTemperament et) {
         Note note = et.nearest(m.frequencyHz());
         double[] xs = m.shapeX().clone();
         for (int i = 0; i < xs.length; i++) {
-            xs[i] /= BarMapper.MM;
+            xs[i] /= MM;
         }
         ModeFamily kind = m.family();
         return new BarAnalysisResponse.ModeJson(m.n(), kind, m.frequencyHz(), m.frequencyHz() / f1,
@@ -75,6 +77,6 @@ public class BarAnalysisService {
     }
 
     private static List<Double> mm(List<Double> metres) {
-        return metres.stream().map(x -> x / BarMapper.MM).toList();
+        return metres.stream().map(x -> x / MM).toList();
     }
 }

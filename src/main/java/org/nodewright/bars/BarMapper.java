@@ -1,5 +1,7 @@
 package org.nodewright.bars;
 
+import static org.nodewright.physics.Units.MM;
+
 import java.util.List;
 import org.nodewright.physics.bars.Bar;
 import org.nodewright.physics.bars.BarMaterial;
@@ -12,8 +14,6 @@ import org.nodewright.physics.bars.TubeSection;
 
 /** The one mapping from a validated bar request (mm) to the core's {@link Bar} (SI). */
 public final class BarMapper {
-
-    static final double MM = 1e-3;
 
     private BarMapper() {
     }

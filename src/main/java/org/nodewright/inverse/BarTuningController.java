@@ -1,5 +1,7 @@
 package org.nodewright.inverse;
 
+import static org.nodewright.physics.Units.MM;
+
 import io.swagger.v3.oas.annotations.Operation;
 import io.swagger.v3.oas.annotations.tags.Tag;
 import jakarta.validation.Valid;
@@ -19,8 +21,6 @@ import org.springframework.web.bind.annotation.RestController;
 @RestController
 @Tag(name = "Inverse design")
 class BarTuningController {
-
-    private static final double MM = 1e-3;
 
     private final SolveJobs jobs;
 

@@ -1,5 +1,7 @@
 package org.nodewright.inverse;
 
+import static org.nodewright.physics.Units.MM;
+
 import java.util.ArrayList;
 import java.util.List;
 import org.nodewright.bars.BarAnalysisRequest;
@@ -19,8 +21,6 @@ import org.nodewright.physics.bars.UndercutSolution;
  */
 record BarTuningResult(double lengthMm, Undercut undercut, List<Target> targets, boolean converged,
         int evaluations, double worstCents, List<Double> cordHolesMm, Sensitivity sensitivity, BarAnalysisRequest bar) {
-
-    private static final double MM = 1e-3;
 
     record Undercut(double depthMm, double halfLengthMm, double shape, double minimumThicknessMm) {
     }

@@ -1,5 +1,7 @@
 package org.nodewright.inverse;
 
+import static org.nodewright.physics.Units.MM_PER_INCH;
+
 import io.swagger.v3.oas.annotations.Operation;
 import io.swagger.v3.oas.annotations.tags.Tag;
 import jakarta.validation.Valid;
@@ -20,8 +22,6 @@ import org.springframework.web.bind.annotation.RestController;
 @RestController
 @Tag(name = "Inverse design", description = "Gauges for target tensions; tone-hole positions for target notes")
 class GaugeController {
-
-    private static final double INCH_MM = 25.4;
 
     private final StressWording wording;
 
@@ -83,7 +83,7 @@ class GaugeController {
                 double outerMm = p.choice().outerDiameterM() * 1e3;
                 boolean wound = p.target().wound();
                 return new StringPick(p.target().frequencyHz(), p.target().tensionN(), wound,
-                        wound ? null : outerMm, wound ? null : outerMm / INCH_MM, outerMm, outerMm / INCH_MM,
+                        wound ? null : outerMm, wound ? null : outerMm / MM_PER_INCH, outerMm, outerMm / MM_PER_INCH,
                         wound ? c.coreDiameterM() * 1e3 : null, wound ? c.wrapDiameterM() * 1e3 : null,
                         c.linearDensityKgPerM(), p.choice().tensionN(), 100 * p.offFraction(),
                         p.exactDiameterM() * 1e3, p.stress().stressPa(), 100 * p.stress().fractionOfStrength(),

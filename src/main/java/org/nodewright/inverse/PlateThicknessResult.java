@@ -1,5 +1,7 @@
 package org.nodewright.inverse;
 
+import static org.nodewright.physics.Units.MM;
+
 import java.util.ArrayList;
 import java.util.List;
 import org.nodewright.physics.plates.ThicknessTuner;
@@ -13,8 +15,6 @@ import org.nodewright.plates.PlateAnalysisRequest;
  */
 record PlateThicknessResult(List<Target> targets, boolean converged, int evaluations, double worstCents,
         List<UnknownValue> unknowns, List<Sensitivity> sensitivities, PlateAnalysisRequest plate) {
-
-    private static final double MM = 1e-3;
 
     /** A target: the mode as asked (its rank on the plate as it was), its rank on the solved plate, Hz, cents. */
     record Target(int mode, int modeNow, double targetHz, double frequencyHz, double cents) {

@@ -1,5 +1,7 @@
 package org.nodewright.plates;
 
+import static org.nodewright.physics.Units.MM;
+
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
@@ -20,7 +22,6 @@ import tools.jackson.databind.JsonNode;
 public final class PlateMapping {
 
     static final String RECTANGLE = "rectangle";
-    private static final double MM = 1e-3;
 
     private PlateMapping() {
     }

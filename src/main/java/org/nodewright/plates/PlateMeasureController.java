@@ -1,5 +1,7 @@
 package org.nodewright.plates;
 
+import static org.nodewright.physics.Units.MM;
+
 import io.swagger.v3.oas.annotations.Operation;
 import io.swagger.v3.oas.annotations.tags.Tag;
 import jakarta.validation.Valid;
@@ -25,7 +27,6 @@ class PlateMeasureController {
             + " modes of the free rectangle; closed-form estimates (free-free beam, Rayleigh w = xy), then E along,"
             + " E across and G fitted by Levenberg-Marquardt to the Rayleigh-Ritz model of the same plate";
 
-    private static final double MM = 1e-3;
 
     private final UserTexts texts;
 

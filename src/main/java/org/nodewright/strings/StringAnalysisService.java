@@ -1,5 +1,7 @@
 package org.nodewright.strings;
 
+import static org.nodewright.physics.Units.MM;
+
 import java.util.ArrayList;
 import java.util.List;
 import org.nodewright.physics.strings.EndCondition;
@@ -22,8 +24,6 @@ import org.springframework.stereotype.Service;
 /** Maps a validated request (mm) to the core (SI) and the result back (mm). */
 @Service
 class StringAnalysisService {
-
-    private static final double MM = 1e-3;
 
     private final StressWording wording;
 

@@ -1,5 +1,7 @@
 package org.nodewright.strings;
 
+import static org.nodewright.physics.Units.MM;
+
 import jakarta.validation.Valid;
 import java.util.List;
 import org.nodewright.physics.strings.GaugeSolver;
@@ -19,8 +21,6 @@ import org.springframework.web.bind.annotation.RestController;
 /** The gauge (diameter) that gives a wanted tension at a wanted pitch. */
 @RestController
 class StringGaugeController {
-
-    private static final double MM = 1e-3;
 
     private final StressWording wording;
 

@@ -6,18 +6,16 @@ import static org.springframework.test.web.servlet.request.MockMvcRequestBuilder
 import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.jsonPath;
 import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.status;
 
-import java.nio.file.Files;
-import java.nio.file.Path;
 import java.util.HashSet;
 import java.util.List;
 import java.util.Set;
 import org.junit.jupiter.api.Test;
+import org.nodewright.TemporaryDataDirectory;
 import org.nodewright.TestProperties;
 import org.springframework.beans.factory.annotation.Autowired;
 import org.springframework.boot.test.context.SpringBootTest;
 import org.springframework.boot.webmvc.test.autoconfigure.AutoConfigureMockMvc;
-import org.springframework.test.context.DynamicPropertyRegistry;
-import org.springframework.test.context.DynamicPropertySource;
+import org.springframework.test.context.ContextConfiguration;
 import org.springframework.test.web.servlet.MockMvc;
 import tools.jackson.databind.JsonNode;
 import tools.jackson.databind.json.JsonMapper;
@@ -28,14 +26,8 @@ import tools.jackson.databind.json.JsonMapper;
  */
 @SpringBootTest(properties = {TestProperties.NO_WARM_UP, TestProperties.NO_BANNER, "app.demo=true"})
 @AutoConfigureMockMvc
+@ContextConfiguration(initializers = TemporaryDataDirectory.class)
 class DemoLibraryTest {
-
-    @DynamicPropertySource
-    static void dataDir(DynamicPropertyRegistry registry) throws Exception {
-        Path dir = Files.createTempDirectory("nodewright-demo-");
-        registry.add("app.data-dir", dir::toString);
-        registry.add("spring.datasource.url", () -> "jdbc:h2:file:" + dir.toString().replace('\\', '/') + "/nodewright");
-    }
 
     @Autowired
     MockMvc mvc;

@@ -71,6 +71,10 @@ class PlateMeasureControllerTest {
                 .content("{" + SAMPLE + ", \"peaksHz\": [" + list + "]}"))
                 .andExpect(status().isOk()).andReturn().getResponse().getContentAsString();
         assertTheSample(res);
+        // the caution sentences read as written (no MessageFormat quoting left in them)
+        List<String> cautions = JsonPath.read(res, "$.cautions");
+        assertThat(cautions).allSatisfy(c -> assertThat(c).doesNotContain("''"))
+                .anySatisfy(c -> assertThat(c).contains("start material's prediction"));
         List<Integer> picked = JsonPath.read(res, "$.modes[*].peakIndex");
         assertThat(picked).hasSize(3).doesNotHaveDuplicates();
         List<Number> across = JsonPath.read(res, "$.modes[?(@.kind == 'across')].measuredHz");

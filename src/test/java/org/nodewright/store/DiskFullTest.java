@@ -6,30 +6,22 @@ import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.
 import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.jsonPath;
 import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.status;
 
-import java.nio.file.Files;
-import java.nio.file.Path;
 import org.junit.jupiter.api.Test;
+import org.nodewright.TemporaryDataDirectory;
 import org.nodewright.TestProperties;
 import org.springframework.beans.factory.annotation.Autowired;
 import org.springframework.boot.test.context.SpringBootTest;
 import org.springframework.boot.webmvc.test.autoconfigure.AutoConfigureMockMvc;
 import org.springframework.http.MediaType;
-import org.springframework.test.context.DynamicPropertyRegistry;
-import org.springframework.test.context.DynamicPropertySource;
+import org.springframework.test.context.ContextConfiguration;
 import org.springframework.test.web.servlet.MockMvc;
 
 /** A disk with less room than the kept margin: writes are refused with a 507 problem, reads go on. */
 @SpringBootTest(properties = {TestProperties.NO_WARM_UP, TestProperties.NO_BANNER,
         "app.store.min-free-space=1000000TB", "app.demo=false"})
 @AutoConfigureMockMvc
+@ContextConfiguration(initializers = TemporaryDataDirectory.class)
 class DiskFullTest {
-
-    @DynamicPropertySource
-    static void dataDir(DynamicPropertyRegistry registry) throws Exception {
-        Path dir = Files.createTempDirectory("nodewright-full-");
-        registry.add("app.data-dir", dir::toString);
-        registry.add("spring.datasource.url", () -> "jdbc:h2:file:" + dir.toString().replace('\\', '/') + "/nodewright");
-    }
 
     @Autowired
     MockMvc mvc;

@@ -165,4 +165,38 @@ class PlateTemplateControllerTest {
         List<String> fields = JsonPath.read(res, "$.errors[*].field");
         assertThat(fields).as(res).contains("thicknessPoints[1].thicknessMm");
     }
+
+    /**
+     * A mirrored half outline (an invented workshop body, 400 x 200 mm) with a graduation: every contour lies inside
+     * the outline drawn on the same sheet, as java.awt.geom.Path2D (the JDK's own point-in-polygon) sees it, within
+     * 0.05 mm.
+     */
+    @Test
+    void contoursOfAnOutlineStayInsideIt() throws Exception {
+        String body = """
+                {"outline": [[0, 0], [50, 80], [200, 100], [350, 80], [400, 0]], "mirrorHalf": true, "material": "spruce",
+                 "thicknessPoints": [{"xMm": 100, "yMm": 0, "thicknessMm": 3.0}, {"xMm": 300, "yMm": 0, "thicknessMm": 2.4},
+                                     {"xMm": 200, "yMm": 60, "thicknessMm": 2.8}]}""";
+        Document doc = svg("?stepMm=0.1", body);
+        List<Element> outline = lines(doc, "outline");
+        assertThat(outline).hasSize(8);
+        java.awt.geom.Path2D.Double path = new java.awt.geom.Path2D.Double();
+        path.moveTo(d(outline.get(0), "x1"), d(outline.get(0), "y1"));
+        for (Element e : outline) {
+            path.lineTo(d(e, "x2"), d(e, "y2"));
+        }
+        path.closePath();
+        List<Element> contours = lines(doc, "contour");
+        assertThat(contours).hasSizeGreaterThan(20);
+        for (Element e : contours) {
+            for (String end : new String[] {"1", "2"}) {
+                double x = d(e, "x" + end);
+                double y = d(e, "y" + end);
+                assertThat(path.intersects(x - 0.05, y - 0.05, 0.1, 0.1)).as(x + ", " + y).isTrue();
+            }
+        }
+        // levels strictly between the thinnest and thickest control points, every 0.1 mm
+        List<String> levels = contours.stream().map(e -> e.getAttribute("data-level-mm")).distinct().sorted().toList();
+        assertThat(levels).containsExactly("2.5", "2.6", "2.7", "2.8", "2.9");
+    }
 }

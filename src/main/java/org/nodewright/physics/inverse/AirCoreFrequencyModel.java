@@ -1,5 +1,7 @@
 package org.nodewright.physics.inverse;
 
+import static org.nodewright.physics.Units.MM;
+
 import java.util.ArrayList;
 import java.util.List;
 import org.hipparchus.optim.MaxEval;
@@ -34,7 +36,6 @@ public final class AirCoreFrequencyModel implements PlayingFrequencyModel {
     static final double STEP_RATIO = 1.0025;
     /** Give up beyond a factor 1.4 (about 580 cents) from the guess. */
     static final double MAX_RATIO = 1.4;
-    private static final double MM = 1e-3;
 
     private final List<BoreSegment> segments;
     private final double[] chimneysMm;

@@ -1,5 +1,7 @@
 package org.nodewright.physics.inverse;
 
+import static org.nodewright.physics.Units.INCH;
+
 import java.util.ArrayList;
 import java.util.List;
 import org.nodewright.physics.strings.Material;
@@ -12,9 +14,6 @@ import org.nodewright.physics.strings.Material;
  */
 public final class GaugeStock {
 
-    /** 1 in = 25.4 mm exactly (international inch, 1959). */
-    static final double INCH_M = 0.0254;
-
     private GaugeStock() {
     }
 
@@ -26,14 +25,14 @@ public final class GaugeStock {
             }
         } else if (wound) {
             for (int mils = 17; mils <= 80; mils++) {
-                out.add(mils * 1e-3 * INCH_M);
+                out.add(mils * 1e-3 * INCH);
             }
         } else {
             for (int halfMils = 14; halfMils <= 40; halfMils++) {
-                out.add(halfMils * 0.5e-3 * INCH_M);
+                out.add(halfMils * 0.5e-3 * INCH);
             }
             for (int mils = 21; mils <= 26; mils++) {
-                out.add(mils * 1e-3 * INCH_M);
+                out.add(mils * 1e-3 * INCH);
             }
         }
         return List.copyOf(out);

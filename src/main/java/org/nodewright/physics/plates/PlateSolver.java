@@ -56,7 +56,17 @@ public final class PlateSolver {
 
     public PlateAnalysis analyze(Plate plate, int modeCount) {
         Solved solved = solve(plate, modeCount);
-        List<PlateMode> modes = modes(plate, solved.basis(), solved.pairs(), solved.rigid(), modeCount);
+        List<PlateMode> modes = modes(plate, solved.basis(), solved.pairs(), solved.rigid(), modeCount, true);
+        return new PlateAnalysis(modes, solved.method(), solved.basis().size());
+    }
+
+    /**
+     * As {@link #analyze(Plate, int)} but the modes carry only their frequency and shape grid: no node lines, counts
+     * or names (for solvers that follow modes by their shapes over many analyses).
+     */
+    public PlateAnalysis shapes(Plate plate, int modeCount) {
+        Solved solved = solve(plate, modeCount);
+        List<PlateMode> modes = modes(plate, solved.basis(), solved.pairs(), solved.rigid(), modeCount, false);
         return new PlateAnalysis(modes, solved.method(), solved.basis().size());
     }
 
@@ -312,7 +322,7 @@ public final class PlateSolver {
     }
 
     private static List<PlateMode> modes(Plate plate, RitzBasis basis, SymmetricEigen.Pairs pairs, int rigid,
-                                         int modeCount) {
+                                         int modeCount, boolean withLines) {
         Outline outline = plate.outline();
         double[] b = outline.bounds();
         double lx = b[2] - b[0];
@@ -369,18 +379,22 @@ public final class PlateSolver {
                     row[j] *= scale;
                 }
             }
-            double[][] contour = plate.edges() == EdgeCondition.FREE ? grid : supportedContour(grid, inside, outline);
-            List<double[][]> lines = NodalLines.trace(xs, ys, contour, inside, outline);
             double[][] shown = new double[gx][gy];
             for (int i = 0; i < gx; i++) {
                 for (int j = 0; j < gy; j++) {
                     shown[i][j] = inside[i][j] ? Math.max(-1, Math.min(1, grid[i][j])) : Double.NaN;
                 }
             }
+            Note note = f > 0 ? et.nearest(f) : null;
+            if (!withLines) {
+                modes.add(new PlateMode(modes.size() + 1, f, note, 0, 0, "", new ModeShape(xs, ys, shown, List.of())));
+                continue;
+            }
+            double[][] contour = plate.edges() == EdgeCondition.FREE ? grid : supportedContour(grid, inside, outline);
+            List<double[][]> lines = NodalLines.trace(xs, ys, contour, inside, outline);
             int[] counts = ModeNames.nodalLineCounts(shown);
             boolean ring = ModeNames.hasRing(lines, outline);
             String name = ModeNames.name(plate.edges(), outline.isRectangle(), counts[0], counts[1], ring);
-            Note note = f > 0 ? et.nearest(f) : null;
             modes.add(new PlateMode(modes.size() + 1, f, note, counts[0], counts[1], name,
                     new ModeShape(xs, ys, shown, lines)));
         }

@@ -20,7 +20,7 @@ import org.nodewright.physics.tuning.Cents;
 /**
  * Finds the thicknesses (uniform, or chosen graduation control points) and brace heights that put chosen modes of
  * a plate on target frequencies: Levenberg–Marquardt (Hipparchus {@link LevenbergMarquardtOptimizer}, after Moré
- * 1978) on the targets' cents errors, each evaluation one Rayleigh–Ritz analysis ({@link PlateSolver#frequencies}),
+ * 1978) on the targets' cents errors, each evaluation one Rayleigh–Ritz analysis ({@link PlateSolver#shapes}),
  * with a forward-difference Jacobian and the unknowns kept inside the maker's limits by clamping. One extra row per
  * unknown, {@link #STAY_CENTS_PER_MM} cents per mm moved from the start (Tikhonov regularisation), makes the
  * problem well posed when there are more unknowns than targets: of all the carvings that reach the targets the
@@ -107,7 +107,7 @@ public final class ThicknessTuner {
         for (Unknown u : unknowns) {
             check(plate, u);
         }
-        Tracker tracker = new Tracker(solver.analyze(plate, count), targets);
+        Tracker tracker = new Tracker(solver.shapes(plate, count), targets);
         Run run = new Run(plate, targets, unknowns, count, tracker, progress, cancelled);
         LeastSquaresProblem problem = new LeastSquaresBuilder()
                 .model(run::valueAndJacobian)
@@ -132,7 +132,7 @@ public final class ThicknessTuner {
         for (int i = 0; i < cents.length; i++) {
             cents[i] = Cents.between(run.bestFrequencies[i], targets.get(i).targetHz());
         }
-        int[] modesNow = tracker.match(solver.analyze(solved, count)).ranks();
+        int[] modesNow = tracker.match(solver.shapes(solved, count)).ranks();
         double[][] sensitivity = sensitivities(solved, targets, unknowns, run.best, count, run.bestFrequencies,
                 tracker, cancelled);
         return new Solution(solved, run.best.clone(), run.bestFrequencies.clone(), cents, run.bestWorst,
@@ -207,7 +207,7 @@ public final class ThicknessTuner {
         }
 
         double[] frequencies(Plate plate, int count) {
-            return match(solver.analyze(plate, count)).frequencies();
+            return match(solver.shapes(plate, count)).frequencies();
         }
 
         /** Greedy: the best (target, mode) pair first, each mode to one target. */
