@@ -1,14 +1,14 @@
 package org.nodewright.strings;
 
+import static org.nodewright.physics.Units.MM;
+
 import org.springframework.http.ResponseEntity;
 import org.nodewright.web.CsvTable;
-import jakarta.validation.constraints.DecimalMax;
-import jakarta.validation.constraints.DecimalMin;
 import jakarta.validation.constraints.Max;
 import jakarta.validation.constraints.Min;
 import java.util.List;
 import org.nodewright.physics.strings.Frets;
-import org.nodewright.web.Finite;
+import org.nodewright.web.LengthMm;
 import org.springframework.http.MediaType;
 import org.springframework.web.bind.annotation.GetMapping;
 import org.springframework.web.bind.annotation.RequestParam;
@@ -29,8 +29,7 @@ class FretsController {
 
     @GetMapping(path = "/api/v1/frets.csv")
     ResponseEntity<String> fretsCsv(
-            @RequestParam @Finite @DecimalMin(value = "1", message = "must be at least 1 mm")
-            @DecimalMax(value = "100000", message = "must be at most 100000 mm") double scaleLengthMm,
+            @RequestParam @LengthMm double scaleLengthMm,
             @RequestParam(defaultValue = "24") @Min(1) @Max(MAX_COUNT) int count,
             @RequestParam(defaultValue = "12") @Min(1) @Max(MAX_DIVISIONS) int divisionsPerOctave) {
         return FRET_COLUMNS.download(frets(scaleLengthMm, count, divisionsPerOctave), "frets.csv");
@@ -38,11 +37,10 @@ class FretsController {
 
     @GetMapping(path = "/api/v1/frets", produces = MediaType.APPLICATION_JSON_VALUE)
     List<FretJson> frets(
-            @RequestParam @Finite @DecimalMin(value = "1", message = "must be at least 1 mm")
-            @DecimalMax(value = "100000", message = "must be at most 100000 mm") double scaleLengthMm,
+            @RequestParam @LengthMm double scaleLengthMm,
             @RequestParam(defaultValue = "24") @Min(1) @Max(MAX_COUNT) int count,
             @RequestParam(defaultValue = "12") @Min(1) @Max(MAX_DIVISIONS) int divisionsPerOctave) {
-        return Frets.equalDivisions(scaleLengthMm * 1e-3, count, divisionsPerOctave).stream()
+        return Frets.equalDivisions(scaleLengthMm * MM, count, divisionsPerOctave).stream()
                 .map(f -> new FretJson(f.fret(), f.fromNutM() * 1e3, f.fromPreviousM() * 1e3))
                 .toList();
     }

@@ -20,6 +20,7 @@ import org.nodewright.physics.tuning.EqualTemperament;
 import org.nodewright.web.CrossFieldChecked;
 import org.nodewright.web.FieldProblem;
 import org.nodewright.web.Finite;
+import org.nodewright.web.LengthMm;
 
 /**
  * Body of {@code POST /api/v1/strings/analyze}. Lengths in mm, tension in N, SI otherwise.
@@ -30,8 +31,7 @@ import org.nodewright.web.Finite;
  */
 @CrossFieldChecked
 public record StringAnalysisRequest(
-        @NotNull @Finite @DecimalMin(value = "1", message = "must be at least 1 mm")
-        @DecimalMax(value = "100000", message = "must be at most 100000 mm") Double lengthMm,
+        @NotNull @LengthMm Double lengthMm,
         @Finite @DecimalMin(value = "0.001", message = "must be at least 0.001 N")
         @DecimalMax(value = "100000", message = "must be at most 100000 N") Double tensionN,
         @Finite @DecimalMin(value = "0.01", message = "must be at least 0.01 Hz")

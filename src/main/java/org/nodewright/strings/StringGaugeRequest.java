@@ -10,6 +10,7 @@ import org.nodewright.physics.strings.EndCondition;
 import org.nodewright.web.CrossFieldChecked;
 import org.nodewright.web.FieldProblem;
 import org.nodewright.web.Finite;
+import org.nodewright.web.LengthMm;
 
 /**
  * Body of {@code POST /api/v1/strings/gauge}: the diameter that gives {@code tensionN} at
@@ -18,8 +19,7 @@ import org.nodewright.web.Finite;
  */
 @CrossFieldChecked
 public record StringGaugeRequest(
-        @NotNull @Finite @DecimalMin(value = "1", message = "must be at least 1 mm")
-        @DecimalMax(value = "100000", message = "must be at most 100000 mm") Double lengthMm,
+        @NotNull @LengthMm Double lengthMm,
         @NotNull @Finite @DecimalMin(value = "0.01", message = "must be at least 0.01 Hz")
         @DecimalMax(value = "100000", message = "must be at most 100000 Hz") Double targetHz,
         @NotNull @Finite @DecimalMin(value = "0.001", message = "must be at least 0.001 N")

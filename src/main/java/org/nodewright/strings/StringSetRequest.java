@@ -12,6 +12,7 @@ import org.nodewright.physics.strings.EndCondition;
 import org.nodewright.web.CrossFieldChecked;
 import org.nodewright.web.FieldProblem;
 import org.nodewright.web.Finite;
+import org.nodewright.web.LengthMm;
 
 /**
  * Body of {@code POST /api/v1/string-sets/analyze}: a set length (mm) that each string may override
@@ -20,8 +21,7 @@ import org.nodewright.web.Finite;
  */
 @CrossFieldChecked
 public record StringSetRequest(
-        @Finite @DecimalMin(value = "1", message = "must be at least 1 mm")
-        @DecimalMax(value = "100000", message = "must be at most 100000 mm") Double lengthMm,
+        @LengthMm Double lengthMm,
         @Finite @DecimalMin(value = "100", message = "must be at least 100 Hz")
         @DecimalMax(value = "1000", message = "must be at most 1000 Hz") Double referenceA4Hz,
         Boolean stiffness,
@@ -39,8 +39,7 @@ public record StringSetRequest(
             @Size(max = StringRules.MATERIAL_ID_MAX) String wrapMaterial,
             @Finite @DecimalMin(value = "0.001", message = "must be at least 0.001 mm")
             @DecimalMax(value = "100", message = "must be at most 100 mm") Double wrapDiameterMm,
-            @Finite @DecimalMin(value = "1", message = "must be at least 1 mm")
-            @DecimalMax(value = "100000", message = "must be at most 100000 mm") Double lengthMm) {
+            @LengthMm Double lengthMm) {
     }
 
     /** What an omitted top-level field means (see {@link StringAnalysisRequest#DEFAULTS}). */
