@@ -43,9 +43,6 @@ final class TemplateResponses {
     }
 
     static Paper paper(String word) {
-        if (word == null) {
-            return Paper.A4;
-        }
-        return Paper.fromWord(word).orElseThrow(() -> new BadRequestException("paper", "must be a4 or letter"));
+        return Paper.ofRequest(word);
     }
 }

@@ -32,6 +32,14 @@ public enum Paper {
         return Optional.empty();
     }
 
+    /** The paper a request's {@code paper} parameter asks for: a4 when absent, a 400 naming the field when unknown. */
+    public static Paper ofRequest(String word) {
+        if (word == null) {
+            return A4;
+        }
+        return fromWord(word).orElseThrow(() -> new org.nodewright.web.BadRequestException("paper", "must be a4 or letter"));
+    }
+
     public double shortMm() {
         return shortMm;
     }

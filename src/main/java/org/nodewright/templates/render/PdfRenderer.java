@@ -25,7 +25,7 @@ import org.nodewright.physics.templates.Sheet;
 public final class PdfRenderer {
 
     /** PostScript points per millimetre: 1 pt = 1/72 in, 1 in = 25.4 mm (exact). */
-    public static final double PT_PER_MM = 72.0 / 25.4;
+    public static final double PT_PER_MM = PdfMarks.PT_PER_MM;
     /** Half the length of an alignment cross's arms. */
     public static final double CROSS_MM = 4.0;
 
@@ -89,19 +89,19 @@ public final class PdfRenderer {
     }
 
     static float pt(double mm) {
-        return (float) (mm * PT_PER_MM);
+        return PdfMarks.pt(mm);
     }
 
     /** Draws onto one page; page coordinates in mm from the top-left corner, flipped to PDF's bottom-left. */
     private static final class Page {
         private final PDPageContentStream cs;
-        private final PDType1Font font;
+        private final PdfMarks pen;
         private final TilePlan plan;
         private final TilePlan.Tile tile;
 
         Page(PDPageContentStream cs, PDType1Font font, TilePlan plan, TilePlan.Tile tile) {
             this.cs = cs;
-            this.font = font;
+            this.pen = new PdfMarks(cs, font, plan.pageHeightMm());
             this.plan = plan;
             this.tile = tile;
         }
@@ -144,9 +144,7 @@ public final class PdfRenderer {
         void footer(String title) throws IOException {
             double top = plan.pageHeightMm() - TilePlan.MARGIN_MM - TilePlan.FOOTER_MM;
             double rulerBase = top + 12;
-            for (Mark m : CalibrationRuler.at(TilePlan.MARGIN_MM, rulerBase, "100 mm: measure before cutting")) {
-                draw(m, 0, 0);
-            }
+            pen.ruler(TilePlan.MARGIN_MM, rulerBase, "100 mm: measure before cutting");
             String label = String.format(Locale.ROOT, "Page %d of %d (row %d, column %d; sheet x %.1f-%.1f mm)",
                     tile.index() + 1, plan.pageCount(), tile.row() + 1, tile.column() + 1, tile.originXMm(),
                     Math.min(tile.originXMm() + plan.windowWidthMm(), plan.sheetWidthMm()));
@@ -158,60 +156,12 @@ public final class PdfRenderer {
         }
 
         private void draw(Mark m, double dx, double dy) throws IOException {
-            if (m instanceof Mark.Stroke s) {
-                cs.setLineWidth(pt(s.widthMm()));
-                cs.moveTo(x(s.x1() + dx), y(s.y1() + dy));
-                cs.lineTo(x(s.x2() + dx), y(s.y2() + dy));
-                cs.stroke();
-            } else if (m instanceof Mark.Ring r) {
-                circle(r.cx() + dx, r.cy() + dy, r.radiusMm(), r.widthMm());
-            } else if (m instanceof Mark.Caption c) {
-                text(c.x() + dx, c.y() + dy, c.text(), c.sizeMm(), c.anchor());
-            }
-        }
-
-        /** A circle as four cubic Béziers, control distance 0.5523 r (the usual quarter-arc fit). */
-        private void circle(double cx, double cy, double r, double width) throws IOException {
-            final double k = 0.552284749831;
-            cs.setLineWidth(pt(width));
-            cs.moveTo(x(cx + r), y(cy));
-            cs.curveTo(x(cx + r), y(cy + k * r), x(cx + k * r), y(cy + r), x(cx), y(cy + r));
-            cs.curveTo(x(cx - k * r), y(cy + r), x(cx - r), y(cy + k * r), x(cx - r), y(cy));
-            cs.curveTo(x(cx - r), y(cy - k * r), x(cx - k * r), y(cy - r), x(cx), y(cy - r));
-            cs.curveTo(x(cx + k * r), y(cy - r), x(cx + r), y(cy - k * r), x(cx + r), y(cy));
-            cs.closeAndStroke();
+            pen.draw(m, dx, dy);
         }
 
         private void text(double xMm, double yMm, String text, double sizeMm, Mark.Caption.Anchor anchor)
                 throws IOException {
-            String safe = encodable(text);
-            float size = pt(sizeMm);
-            float width = font.getStringWidth(safe) / 1000f * size;
-            float shift = switch (anchor) {
-                case START -> 0f;
-                case MIDDLE -> width / 2;
-                case END -> width;
-            };
-            cs.beginText();
-            cs.setFont(font, size);
-            cs.newLineAtOffset(x(xMm) - shift, y(yMm));
-            cs.showText(safe);
-            cs.endText();
-        }
-
-        /** Characters the standard Helvetica (WinAnsi) cannot show become '?'. */
-        private String encodable(String text) {
-            StringBuilder sb = new StringBuilder(text.length());
-            for (int i = 0; i < text.length(); i++) {
-                char ch = text.charAt(i);
-                try {
-                    font.encode(String.valueOf(ch));
-                    sb.append(ch);
-                } catch (IllegalArgumentException | IOException e) {
-                    sb.append('?');
-                }
-            }
-            return sb.toString();
+            pen.text(xMm, yMm, text, sizeMm, anchor);
         }
 
         private float x(double mm) {
