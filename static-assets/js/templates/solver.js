@@ -22,7 +22,7 @@ function readBore() {
 
 /** Fingerings as text lines; holes shown from 1 (the API counts closedHoles from 0). */
 function fingeringLines(fingerings) {
-  return fingerings.map((f) => `${f.name}, ${f.targetNote ?? f.targetHz}, ${(f.closedHoles || []).map((h) => h + 1).join(' ')}`).join('\n');
+  return fingerings.map((f) => `${f.name}, ${f.targetNote ?? f.targetHz}, ${(f.closedHoles || []).map((h) => h + 1).join(' ')}${(f.register ?? 1) > 1 ? `, ${f.register}` : ''}`).join('\n');
 }
 
 /** The fingering lines as the API's fingerings (closedHoles from 0). */
@@ -33,14 +33,16 @@ function readFingerings() {
     if (!line.trim()) return;
     const parts = line.split(',').map((s) => s.trim());
     const closed = (parts[2] ?? '').split(/\s+/).filter(Boolean).map(Number);
-    if (parts.length < 2 || !parts[0] || !parts[1] || closed.some((n) => !Number.isInteger(n) || n < 1)) {
+    const register = parts[3] ? Number(parts[3]) : 1;
+    if (parts.length < 2 || !parts[0] || !parts[1] || closed.some((n) => !Number.isInteger(n) || n < 1)
+      || !Number.isInteger(register) || register < 1) {
       problems.push({ field: 'fingerings', message: t('badLine', i + 1) });
       return;
     }
     const hz = typedHz(parts[1]);
     rows.push({
       name: parts[0], closedHoles: closed.map((n) => n - 1),
-      ...(Number.isFinite(hz) ? { targetHz: hz } : { targetNote: parts[1] }), register: 1,
+      ...(Number.isFinite(hz) ? { targetHz: hz } : { targetNote: parts[1] }), register,
     });
   });
   return { rows, problems };
@@ -133,17 +135,7 @@ async function startSolve() {
     showProblem(borePanel, $('bore-message'), { errors: [...(problem ? problem.errors : []), ...f.problems] });
     return;
   }
-  const answer = await postJson('/api/v1/inverse/tone-holes', { bore: { ...bore, fingerings: f.rows }, limits: limits() });
-  if (!answer.ok) {
-    showProblem(borePanel, $('bore-message'), answer.problem);
-    return;
-  }
-  say($('bore-message'), '');
-  $('solve-result').hidden = true;
-  state.job = answer.data.id;
-  setRunning(true);
-  $('solve-progress').value = 0;
-  poll();
+  startJob('/api/v1/inverse/tone-holes', { bore: { ...bore, fingerings: f.rows }, limits: limits() });
 }
 
 async function poll() {
@@ -184,7 +176,16 @@ function finish(job) {
     $('solve-state').textContent = t('failed', job.error);
     return;
   }
-  const r = job.result;
+  if (job.kind === 'calibration') {
+    showCalibration(job.result);
+    $('solve-state').textContent = '';
+    return;
+  }
+  const r = job.kind === 'blank-tube' ? job.result.solution : job.result;
+  if (job.kind === 'blank-tube') {
+    $('blank-first').textContent = t('firstLayout', fmt(job.result.firstLayout.worstCents, 1),
+      job.result.chosenStart + 1, job.result.starts.length);
+  }
   state.result = r;
   $('solve-state').textContent = r.withinTolerance ? t('succeeded', fmt(job.elapsedSeconds, 2), fmt(r.toleranceCents, 2))
     : t('notConverged', fmt(job.elapsedSeconds, 2), fmt(r.worstCents, 2));
@@ -237,6 +238,112 @@ function openInBench() {
   window.location.assign('/air-columns#from-templates');
 }
 
+/** Starts a job and polls it with the same status line, progress bar and cancel button as the solve. */
+async function startJob(url, body) {
+  const answer = await postJson(url, body);
+  if (!answer.ok) {
+    showProblem(borePanel, $('bore-message'), answer.problem);
+    return;
+  }
+  say($('bore-message'), '');
+  $('solve-result').hidden = true;
+  state.job = answer.data.id;
+  setRunning(true);
+  $('solve-progress').value = 0;
+  poll();
+}
+
+async function loadBlank() {
+  const answer = await getJson('/api/v1/inverse/blank-tube/demo').catch((error) => ({ ok: false, problem: { detail: String(error) } }));
+  if (!answer.ok) {
+    showProblem(borePanel, $('bore-message'), { detail: t('demoFailed', answer.problem?.detail ?? answer.status) });
+    return;
+  }
+  const d = answer.data;
+  showBore({ ...d.bore, fingerings: d.fingerings });
+  $('blank-count').value = d.holeCount;
+  $('blank-chimney').value = d.chimneyMm;
+  const l = d.limits || {};
+  state.limits = { minPositionMm: l.minPositionMm, endMarginMm: l.endMarginMm, minFootMm: l.minFootMm, maxFootMm: l.maxFootMm };
+  $('min-diameter').value = l.minDiameterMm;
+  $('max-diameter').value = l.maxDiameterMm;
+  $('min-wall').value = l.minWallMm;
+  $('vary-foot').checked = l.varyFoot !== false;
+  $('vary-diameters').checked = l.varyDiameters !== false;
+}
+
+function solveBlank() {
+  clearFieldErrors(borePanel);
+  const { bore, problem } = readBore();
+  const f = readFingerings();
+  const count = num($('blank-count').value);
+  const chimney = num($('blank-chimney').value);
+  if (problem || f.problems.length) {
+    showProblem(borePanel, $('bore-message'), { errors: [...(problem ? problem.errors : []), ...f.problems] });
+    return;
+  }
+  const blank = { ...bore };
+  delete blank.holes;
+  startJob('/api/v1/inverse/blank-tube', { bore: blank, holeCount: count, chimneyMm: chimney, fingerings: f.rows, limits: limits() });
+}
+
+/** Measured lines "name, pitch" as the API's measured list (the pitch in Hz or as a note). */
+function readMeasured() {
+  const rows = [];
+  const problems = [];
+  $('measured-lines').value.split('\n').forEach((line, i) => {
+    if (!line.trim()) return;
+    const parts = line.split(',').map((s) => s.trim());
+    const hz = parts[1] ? typedHz(parts[1]) : NaN;
+    if (!parts[0] || !Number.isFinite(hz)) {
+      problems.push({ field: 'measured', message: t('badLine', i + 1) });
+      return;
+    }
+    rows.push({ fingering: parts[0], measuredHz: hz });
+  });
+  return { rows, problems };
+}
+
+function calibrate() {
+  clearFieldErrors(borePanel);
+  const { bore, problem } = readBore();
+  const f = readFingerings();
+  const m = readMeasured();
+  if (problem || f.problems.length || m.problems.length) {
+    showProblem(borePanel, $('bore-message'), { errors: [...(problem ? problem.errors : []), ...f.problems, ...m.problems] });
+    return;
+  }
+  startJob('/api/v1/inverse/calibration', { bore: { ...bore, fingerings: f.rows }, measured: m.rows, fit: [$('calib-fit').value] });
+}
+
+function showCalibration(r) {
+  state.calibration = r;
+  const p = r.parameters[0];
+  $('calib-values').textContent = t('calibrated', p.field, fmt(p.fittedValue, 3), p.unit, fmt(p.startValue, 3),
+    fmt(r.rmsCentsBefore, 2), fmt(r.rmsCentsAfter, 2));
+  const rows = $('calib-rows');
+  rows.replaceChildren();
+  r.notes.forEach((n) => {
+    const tr = document.createElement('tr');
+    tr.dataset.cents = n.centsAfter;
+    [n.fingering, fmt(n.measuredHz, 2), fmt(n.centsBefore, 2), fmt(n.centsAfter, 2)].forEach((text) => {
+      const td = document.createElement('td'); td.textContent = text; tr.appendChild(td);
+    });
+    rows.appendChild(tr);
+  });
+  $('calib-result').hidden = false;
+}
+
+function applyCalibration() {
+  if (!state.calibration) return;
+  showBore(state.calibration.bore);
+  say($('bore-message'), t('calibApplied'));
+}
+
+$('blank-demo').addEventListener('click', loadBlank);
+$('blank-solve').addEventListener('click', solveBlank);
+$('calib-start').addEventListener('click', calibrate);
+$('calib-apply').addEventListener('click', applyCalibration);
 $('bore-demo').addEventListener('click', loadDemo);
 $('bore-from-bench').addEventListener('click', fromBench);
 $('bore-preview').addEventListener('click', () => boreTemplate('preview'));

@@ -15,7 +15,8 @@ class TemplatesPageController {
     static final List<String> JS_KEYS = List.of("tpl.js.notNumber", "tpl.js.badLine", "tpl.js.badJson",
             "tpl.js.queued", "tpl.js.running", "tpl.js.succeeded", "tpl.js.notConverged", "tpl.js.failed",
             "tpl.js.cancelled", "tpl.js.applied", "tpl.js.foot", "tpl.js.downloaded", "tpl.js.noBench",
-            "tpl.js.fromBench", "tpl.js.error", "tpl.js.solvedName", "tpl.js.demoFailed", "tpl.js.notWhole");
+            "tpl.js.fromBench", "tpl.js.error", "tpl.js.solvedName", "tpl.js.demoFailed", "tpl.js.notWhole",
+            "tpl.js.firstLayout", "tpl.js.calibrated", "tpl.js.calibApplied");
 
     @GetMapping("/templates")
     String page(Model model) {
