@@ -14,7 +14,7 @@ import org.nodewright.web.FieldProblem;
  * mouth's rules ({@link MouthRules}). Fields
  * that are missing are left to their own constraints.
  */
-final class AirColumnRules {
+public final class AirColumnRules {
 
     /** Upper bound of the work one request may ask for (element-frequency evaluations). */
     static final double MAX_WORK = 1e8;
@@ -65,18 +65,26 @@ final class AirColumnRules {
         List<AirColumnRequest.FingeringSpec> fs = r.fingerings();
         if (fs != null) {
             int holeCount = holes == null ? 0 : holes.size();
-            for (int i = 0; i < fs.size(); i++) {
-                fingering(out, fs.get(i), i, holeCount);
-            }
+            fingerings(out, "", fs, holeCount);
         }
         return out;
     }
 
-    private static void fingering(List<FieldProblem> out, AirColumnRequest.FingeringSpec f, int i, int holeCount) {
+    /**
+     * The rules of a fingering chart for a bore of holeCount holes (closed holes that exist, the
+     * target given once and readable), fields named from prefix ("" for the bore's own chart).
+     */
+    public static void fingerings(List<FieldProblem> out, String prefix, List<AirColumnRequest.FingeringSpec> fs,
+            int holeCount) {
+        for (int i = 0; i < fs.size(); i++) {
+            fingering(out, fs.get(i), prefix + "fingerings[" + i + "]", holeCount);
+        }
+    }
+
+    private static void fingering(List<FieldProblem> out, AirColumnRequest.FingeringSpec f, String base, int holeCount) {
         if (f == null) {
             return;
         }
-        String base = "fingerings[" + i + "]";
         if (f.closedHoles() != null) {
             for (int j = 0; j < f.closedHoles().size(); j++) {
                 Integer idx = f.closedHoles().get(j);

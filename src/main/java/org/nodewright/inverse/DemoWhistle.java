@@ -33,6 +33,13 @@ public final class DemoWhistle {
     public static final List<Double> DIAMETERS_MM = List.of(6.5, 7.0, 7.0, 6.0, 7.5, 6.5);
     /** The scale the fingerings play, all holes closed first. */
     public static final List<String> NOTES = List.of("D5", "E5", "F#5", "G5", "A5", "B5", "C#6");
+    /** The second register the same fingerings overblow to (C#7 is left out, as on most whistles' charts). */
+    public static final List<String> SECOND_REGISTER = List.of("D6", "E6", "F#6", "G6", "A6", "B6");
+    /** The blank the workshop cuts a whistle from: 13 mm bore, 280 mm long, a 4 x 8 mm window through 1.5 mm of wall. */
+    public static final double BLANK_LENGTH_MM = 280.0;
+    public static final double WINDOW_LENGTH_MM = 4.0;
+    public static final double WINDOW_WIDTH_MM = 8.0;
+    public static final double WINDOW_WALL_MM = 1.5;
     public static final double TEMPERATURE_C = 20.0;
     public static final double HUMIDITY_PCT = 50.0;
 
@@ -60,6 +67,20 @@ public final class DemoWhistle {
             }
             out.add(new Fingering(NOTES.get(step), closed,
                     NoteNames.frequencyHz(NOTES.get(step), EqualTemperament.ISO_16_A4_HZ), 1));
+        }
+        return out;
+    }
+
+    /**
+     * Both registers: the seven first-register fingerings, then the same fingerings from all
+     * closed to one hole closed overblown to D6..B6 (register 2).
+     */
+    public static List<Fingering> twoRegisterFingerings() {
+        List<Fingering> out = new ArrayList<>(fingerings());
+        for (int step = 0; step < SECOND_REGISTER.size(); step++) {
+            Fingering low = out.get(step);
+            String note = SECOND_REGISTER.get(step);
+            out.add(new Fingering(note, low.closedHoles(), NoteNames.frequencyHz(note, EqualTemperament.ISO_16_A4_HZ), 2));
         }
         return out;
     }

@@ -1,0 +1,161 @@
+package org.nodewright.inverse;
+
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.List;
+import org.nodewright.aircolumns.AirColumnMapper;
+import org.nodewright.aircolumns.AirColumnRequest;
+import org.nodewright.physics.aircolumn.Fingering;
+import org.nodewright.physics.aircolumn.InputEnd;
+import org.nodewright.physics.aircolumn.OutputEnd;
+import org.nodewright.physics.inverse.AirCoreFrequencyModel;
+import org.nodewright.physics.inverse.FirstLayout;
+import org.nodewright.physics.inverse.HoleLayout;
+import org.nodewright.physics.inverse.SolverLimits;
+import org.nodewright.web.BadRequestException;
+import org.nodewright.web.FieldProblem;
+
+/**
+ * A validated blank-tube request turned into the solver's inputs: the bore with placeholder holes
+ * (so that the one mapper, {@link AirColumnMapper}, builds the model and reads the chart), the
+ * blank as the closed form sees it, the limits and the starting diameters.
+ */
+record BlankTubeSetup(AirColumnRequest bore, AirCoreFrequencyModel model, FirstLayout.Tube tube, double[] chimneysMm,
+        List<Fingering> fingerings, SolverLimits limits, double[] startDiametersMm) {
+
+    /** Levine &amp; Schwinger 1948: end correction 0.6133 a of an unflanged pipe at low ka. */
+    static final double UNFLANGED_END = 0.6133;
+    /** Norris &amp; Sheng 1989: 0.8216 a in an infinite flange. */
+    static final double FLANGED_END = 0.8216;
+
+    /** The blank's limits: the tone-hole defaults, but diameters vary and the foot may only be cut. */
+    static ToneHoleSolveSetup.Bounds bounds(BlankTubeRequest r) {
+        ToneHoleSolveRequest.Limits l = r.limitsOrNone();
+        ToneHoleSolveSetup.Bounds b = ToneHoleSolveSetup.Bounds.of(r.bore(), l);
+        return new ToneHoleSolveSetup.Bounds(b.minPositionMm(), b.endMarginMm(), b.minWallMm(), b.minDiameterMm(),
+                b.maxDiameterMm(), l.varyDiameters() == null || l.varyDiameters(), l.varyFoot() == null || l.varyFoot(),
+                b.minFootMm(), l.maxFootMm() == null ? b.footMm() : l.maxFootMm(), b.footMm());
+    }
+
+    static void problems(List<FieldProblem> out, BlankTubeRequest r) {
+        if (!usable(r.bore())) {
+            return;
+        }
+        ToneHoleSolveSetup.Bounds b = bounds(r);
+        if (b.maxDiameterMm() < b.minDiameterMm()) {
+            out.add(new FieldProblem("limits.maxDiameterMm", "must not be below minDiameterMm (" + b.minDiameterMm() + ")"));
+        }
+        if (b.maxFootMm() < b.minFootMm()) {
+            out.add(new FieldProblem("limits.maxFootMm", "must not be below minFootMm (" + b.minFootMm() + ")"));
+        }
+        if (b.varyFoot() && (b.footMm() < b.minFootMm() || b.footMm() > b.maxFootMm())) {
+            out.add(new FieldProblem("limits.minFootMm", "the blank's last section (" + b.footMm()
+                    + " mm) must lie within minFootMm..maxFootMm"));
+        }
+        if (b.minPositionMm() >= BoreMapping.lengthMm(r.bore()) - b.endMarginMm()) {
+            out.add(new FieldProblem("limits.minPositionMm", "leaves no room for holes on a "
+                    + BoreMapping.lengthMm(r.bore()) + " mm tube"));
+        }
+        List<Double> starts = r.startDiametersMm();
+        if (starts != null) {
+            for (int i = 0; i < starts.size(); i++) {
+                Double d = starts.get(i);
+                if (d != null && Double.isFinite(d) && (d < b.minDiameterMm() || d > b.maxDiameterMm())) {
+                    out.add(new FieldProblem("startDiametersMm[" + i + "]", "must lie within the diameter limits ("
+                            + b.minDiameterMm() + ".." + b.maxDiameterMm() + " mm)"));
+                }
+            }
+        }
+    }
+
+    private static boolean usable(AirColumnRequest bore) {
+        if (bore.segments() == null || bore.segments().isEmpty()) {
+            return false;
+        }
+        for (AirColumnRequest.Segment s : bore.segments()) {
+            if (s == null || !finite(s.lengthMm()) || !finite(s.inputDiameterMm()) || !finite(s.outputDiameterMm())
+                    || s.lengthMm() <= 0 || s.inputDiameterMm() <= 0 || s.outputDiameterMm() <= 0) {
+                return false;
+            }
+        }
+        return true;
+    }
+
+    private static boolean finite(Double v) {
+        return v != null && Double.isFinite(v);
+    }
+
+    /** Length-weighted mean diameter of the bore, mm (the closed form's cylinder). */
+    static double meanDiameterMm(AirColumnRequest bore) {
+        double sum = 0;
+        double length = 0;
+        for (AirColumnRequest.Segment s : bore.segments()) {
+            sum += s.lengthMm() * (s.inputDiameterMm() + s.outputDiameterMm()) / 2;
+            length += s.lengthMm();
+        }
+        return sum / length;
+    }
+
+    /** The solver's inputs for a request that passed validation. */
+    static BlankTubeSetup of(BlankTubeRequest r) {
+        AirColumnRequest blank = r.bore();
+        int n = r.holeCount();
+        double length = BoreMapping.lengthMm(blank);
+        double diameter = meanDiameterMm(blank);
+        ToneHoleSolveSetup.Bounds b = bounds(r);
+        // placeholder holes, evenly spread; the first layout replaces them before any solve
+        List<AirColumnRequest.Hole> holes = new ArrayList<>();
+        for (int h = 0; h < n; h++) {
+            double x = b.minPositionMm() + (length - b.endMarginMm() - b.minPositionMm()) * (h + 0.5) / n;
+            holes.add(new AirColumnRequest.Hole(x, Math.min(b.maxDiameterMm(), Math.max(b.minDiameterMm(), diameter / 2)),
+                    r.chimneyMm(), true));
+        }
+        AirColumnRequest bore = new AirColumnRequest(blank.segments(), blank.inputEnd(), blank.outputEnd(), holes,
+                blank.temperatureC(), blank.relativeHumidityPct(), blank.losses(), blank.fMinHz(), blank.fMaxHz(),
+                blank.points(), blank.referenceA4Hz(), blank.profileSamples(), r.fingerings(), blank.mouth(),
+                blank.breath());
+        List<Fingering> fingerings = new ArrayList<>();
+        for (Fingering f : AirColumnMapper.fingerings(bore)) {
+            String name = f.name() == null || f.name().isBlank() ? "fingering " + (fingerings.size() + 1) : f.name();
+            fingerings.add(new Fingering(name, f.closedHoles(), f.targetHz(), f.register()));
+        }
+        double[] chimneys = new double[n];
+        Arrays.fill(chimneys, r.chimneyMm());
+        double[] starts = r.startDiametersMm() != null
+                ? r.startDiametersMm().stream().mapToDouble(Double::doubleValue).toArray()
+                : Arrays.stream(BlankTubeRequest.DEFAULT_START_FRACTIONS)
+                        .map(f -> Math.min(b.maxDiameterMm(), Math.max(b.minDiameterMm(), f * diameter))).toArray();
+        return new BlankTubeSetup(bore, BoreMapping.model(bore), tube(blank, length, diameter), chimneys, fingerings,
+                b.toCore(), starts);
+    }
+
+    /**
+     * The blank as the closed form sees it; its input end correction is what the model's own blank
+     * tube says: the lowest resonance f0 of the tube without holes gives the effective length
+     * c / 2f0 (or c / 4f0), less the tube and its output end correction.
+     */
+    static FirstLayout.Tube tube(AirColumnRequest blank, double lengthMm, double diameterMm) {
+        boolean conical = blank.segments().stream().anyMatch(s -> !s.inputDiameterMm().equals(s.outputDiameterMm()));
+        boolean quarter = !conical && ((blank.inputEnd() == InputEnd.CLOSED) != (blank.outputEnd() == OutputEnd.CLOSED));
+        double a = blank.segments().get(blank.segments().size() - 1).outputDiameterMm() / 2;
+        double outCorrection = switch (blank.outputEnd()) {
+            case OPEN_UNFLANGED -> UNFLANGED_END * a;
+            case OPEN_FLANGED -> FLANGED_END * a;
+            default -> 0.0;
+        };
+        double c = AirColumnMapper.air(blank).speedOfSound();
+        double waves = quarter ? 4 : 2;
+        // a first guess with an input correction of 1.5 diameters (common practice for a flue mouth)
+        double guess = c * 1e3 / (waves * (lengthMm + outCorrection + 1.5 * diameterMm));
+        AirCoreFrequencyModel bare = BoreMapping.model(blank);
+        double f0 = bare.soundingHz(new HoleLayout(new double[0], new double[0],
+                blank.segments().get(blank.segments().size() - 1).lengthMm()),
+                new Fingering("blank", java.util.Set.of(), guess, 1), guess);
+        if (!Double.isFinite(f0)) {
+            throw new BadRequestException("bore", "the blank tube has no playing resonance near " + Math.round(guess)
+                    + " Hz; check its ends and mouth");
+        }
+        double inCorrection = c * 1e3 / (waves * f0) - lengthMm - outCorrection;
+        return new FirstLayout.Tube(lengthMm, diameterMm, c, inCorrection, outCorrection, quarter);
+    }
+}

@@ -1,0 +1,43 @@
+package org.nodewright.inverse;
+
+import java.util.ArrayList;
+import java.util.List;
+import org.nodewright.aircolumns.AirColumnRequest;
+import org.nodewright.physics.aircolumn.Fingering;
+import org.nodewright.physics.inverse.CalibrationParameter;
+import org.nodewright.physics.inverse.Calibrator;
+
+/**
+ * A finished calibration: each parameter's start and fitted value, each measured fingering's model
+ * pitch before and after with its cents from the measurement, the residuals' rms, and the bore with
+ * the fitted values (to re-solve the holes with, or to open in the bore bench).
+ */
+record CalibrationResult(List<Value> parameters, List<Note> notes, double rmsCentsBefore, double rmsCentsAfter,
+        double worstCentsAfter, int evaluations, AirColumnRequest bore) {
+
+    record Value(CalibrationParameter parameter, String field, String unit, double startValue, double fittedValue,
+            double lower, double upper) {
+    }
+
+    record Note(String fingering, double measuredHz, double modelBeforeHz, double centsBefore, double modelAfterHz,
+            double centsAfter) {
+    }
+
+    static CalibrationResult of(Calibrator.Fit fit, List<CalibrationSetup.Parameter> ps, List<Fingering> measured,
+            AirColumnRequest bore) {
+        List<Value> values = new ArrayList<>();
+        for (int i = 0; i < ps.size(); i++) {
+            CalibrationSetup.Parameter p = ps.get(i);
+            values.add(new Value(p.kind(), p.field(), p.unit(), p.start(), fit.fitted()[i], p.lower(), p.upper()));
+        }
+        List<Note> notes = new ArrayList<>();
+        double worst = 0;
+        for (int i = 0; i < measured.size(); i++) {
+            notes.add(new Note(measured.get(i).name(), measured.get(i).targetHz(), fit.modelBeforeHz()[i],
+                    fit.before()[i], fit.modelAfterHz()[i], fit.after()[i]));
+            worst = Math.max(worst, Math.abs(fit.after()[i]));
+        }
+        return new CalibrationResult(values, notes, fit.rmsBefore(), fit.rmsAfter(), worst, fit.evaluations(),
+                CalibrationSetup.with(bore, ps, fit.fitted()));
+    }
+}

@@ -1,0 +1,113 @@
+package org.nodewright.inverse;
+
+import java.util.ArrayList;
+import java.util.List;
+import org.nodewright.aircolumns.AirColumnMapper;
+import org.nodewright.aircolumns.AirColumnRequest;
+import org.nodewright.physics.aircolumn.Fingering;
+import org.nodewright.physics.inverse.CalibrationParameter;
+import org.nodewright.physics.inverse.Calibrator;
+
+/**
+ * The calibration's parameters as request fields: each one's field path, start, bounds, and how a
+ * value goes into the bore request (then mapped, as every bore, by {@link AirColumnMapper}).
+ */
+final class CalibrationSetup {
+
+    /** Air temperature inside the instrument, C: the range a played instrument sees (common practice). */
+    static final double MIN_TEMPERATURE_C = -10;
+    static final double MAX_TEMPERATURE_C = 45;
+    /** A breath's temperatures may be shifted by up to this much, C. */
+    static final double MAX_BREATH_SHIFT_C = 15;
+
+    record Parameter(CalibrationParameter kind, String field, String unit, double start, double lower, double upper) {
+    }
+
+    private CalibrationSetup() {
+    }
+
+    static List<Parameter> parameters(CalibrationRequest r) {
+        AirColumnRequest b = r.bore();
+        List<Parameter> out = new ArrayList<>();
+        for (CalibrationParameter p : r.fitOrDefault()) {
+            if (p == CalibrationParameter.AIR_TEMPERATURE) {
+                if (b.breath() != null) {
+                    out.add(new Parameter(p, "breath.inputTemperatureC+outputTemperatureC (shift)", "C", 0,
+                            -MAX_BREATH_SHIFT_C, MAX_BREATH_SHIFT_C));
+                } else {
+                    out.add(new Parameter(p, "temperatureC", "C", b.temperatureOrDefault(), MIN_TEMPERATURE_C,
+                            MAX_TEMPERATURE_C));
+                }
+                continue;
+            }
+            AirColumnRequest.MouthSpec m = b.mouth();
+            out.add(switch (m.kind()) {
+                case WINDOW -> new Parameter(p, "mouth.windowLengthMm", "mm", m.windowLengthMm(),
+                        0.25 * m.windowLengthMm(), Math.min(500, 3 * m.windowLengthMm()));
+                case EMBOUCHURE -> new Parameter(p, "mouth.lipCoveragePct", "%",
+                        m.lipCoveragePct() == null ? 0 : m.lipCoveragePct(), 0, 80);
+                case REED -> new Parameter(p, "mouth.equivalentVolumeMm3", "mm3", m.equivalentVolumeMm3(),
+                        0.1 * m.equivalentVolumeMm3(), 10 * m.equivalentVolumeMm3());
+                case CUP -> new Parameter(p, "mouth.cupVolumeMm3", "mm3", m.cupVolumeMm3(), 0.25 * m.cupVolumeMm3(),
+                        4 * m.cupVolumeMm3());
+            });
+        }
+        return out;
+    }
+
+    /** The bore with the parameters' values put in. */
+    static AirColumnRequest with(AirColumnRequest b, List<Parameter> ps, double[] x) {
+        AirColumnRequest.MouthSpec m = b.mouth();
+        AirColumnRequest.BreathSpec breath = b.breath();
+        Double temperature = b.temperatureC();
+        for (int i = 0; i < ps.size(); i++) {
+            double v = x[i];
+            switch (ps.get(i).field()) {
+                case "temperatureC" -> temperature = v;
+                case "mouth.windowLengthMm" -> m = new AirColumnRequest.MouthSpec(m.kind(), m.holeDiameterMm(),
+                        m.holeLengthMm(), m.holeWidthMm(), m.wallMm(), m.headspaceMm(), m.lipCoveragePct(), v,
+                        m.windowWidthMm(), m.equivalentVolumeMm3(), m.cupVolumeMm3(), m.throatDiameterMm(),
+                        m.throatLengthMm());
+                case "mouth.lipCoveragePct" -> m = new AirColumnRequest.MouthSpec(m.kind(), m.holeDiameterMm(),
+                        m.holeLengthMm(), m.holeWidthMm(), m.wallMm(), m.headspaceMm(), v, m.windowLengthMm(),
+                        m.windowWidthMm(), m.equivalentVolumeMm3(), m.cupVolumeMm3(), m.throatDiameterMm(),
+                        m.throatLengthMm());
+                case "mouth.equivalentVolumeMm3" -> m = new AirColumnRequest.MouthSpec(m.kind(), m.holeDiameterMm(),
+                        m.holeLengthMm(), m.holeWidthMm(), m.wallMm(), m.headspaceMm(), m.lipCoveragePct(),
+                        m.windowLengthMm(), m.windowWidthMm(), v, m.cupVolumeMm3(), m.throatDiameterMm(),
+                        m.throatLengthMm());
+                case "mouth.cupVolumeMm3" -> m = new AirColumnRequest.MouthSpec(m.kind(), m.holeDiameterMm(),
+                        m.holeLengthMm(), m.holeWidthMm(), m.wallMm(), m.headspaceMm(), m.lipCoveragePct(),
+                        m.windowLengthMm(), m.windowWidthMm(), m.equivalentVolumeMm3(), v, m.throatDiameterMm(),
+                        m.throatLengthMm());
+                default -> breath = new AirColumnRequest.BreathSpec(breath.co2Pct(), breath.relativeHumidityPct(),
+                        breath.inputTemperatureC() + v, breath.outputTemperatureC() + v);
+            }
+        }
+        return new AirColumnRequest(b.segments(), b.inputEnd(), b.outputEnd(), b.holes(), temperature,
+                b.relativeHumidityPct(), b.losses(), b.fMinHz(), b.fMaxHz(), b.points(), b.referenceA4Hz(),
+                b.profileSamples(), b.fingerings(), m, breath);
+    }
+
+    /** The family of models: the bore with the values put in, mapped and asked for the fingering's pitch. */
+    static Calibrator.Family family(AirColumnRequest b, List<Parameter> ps) {
+        return (x, f, guess) -> BoreMapping.model(with(b, ps, x)).soundingHz(BoreMapping.layout(b), f, guess);
+    }
+
+    /** The measured fingerings, each with its measured pitch as the target the model is tracked from. */
+    static List<Fingering> measured(CalibrationRequest r) {
+        List<Fingering> chart = AirColumnMapper.fingerings(r.bore());
+        List<AirColumnRequest.FingeringSpec> specs = r.bore().fingeringsOrEmpty();
+        List<Fingering> out = new ArrayList<>();
+        for (CalibrationRequest.Measured m : r.measured()) {
+            for (int i = 0; i < specs.size(); i++) {
+                if (m.fingering().equals(specs.get(i).name())) {
+                    Fingering f = chart.get(i);
+                    out.add(new Fingering(m.fingering(), f.closedHoles(), m.measuredHz(), f.register()));
+                    break;
+                }
+            }
+        }
+        return out;
+    }
+}
