@@ -11,6 +11,7 @@
 //                    with each design it saves and put back when that design is opened
 // Returns { current(), load(id) }.
 import { getJson, sendJson, showFieldErrors, clearFieldErrors } from './api.js';
+import { mountBenchSheet } from './bench-sheet.js';
 
 const POLL_MS = 20000;
 const WHO_KEY = 'nodewright.who';
@@ -73,6 +74,13 @@ export async function mountDesignBar(element, { kind, getParameters, setParamete
   const actions = el('div', { class: 'design-actions' });
   actions.append(saveButton, saveAsButton, versionLabel, historyLink);
   element.append(fields, actions, status, errors, conflict, notice);
+  mountBenchSheet(actions, t, {
+    kind,
+    heading: document.querySelector('main h1')?.textContent?.trim(),
+    state: () => ({ id: state.id, version: state.version, name: nameInput.value.trim() || state.name, savedAt: state.savedAt }),
+    getParameters,
+    status: (message, tone) => setStatus(message, tone),
+  });
 
   whoInput.value = localStorage.getItem(WHO_KEY) || '';
   // The name is kept in this browser as it is typed (not only on a change event that a click may beat).
@@ -108,6 +116,7 @@ export async function mountDesignBar(element, { kind, getParameters, setParamete
   function showDesign(design) {
     state.id = design.id;
     state.version = design.version;
+    state.savedAt = design.updatedAt;
     state.name = design.name;
     nameInput.value = design.name;
     tagsInput.value = (design.tags || []).join(', ');
