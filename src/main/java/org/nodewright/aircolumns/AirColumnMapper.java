@@ -101,7 +101,7 @@ public final class AirColumnMapper {
         List<Fingering> out = new ArrayList<>();
         for (AirColumnRequest.FingeringSpec f : r.fingeringsOrEmpty()) {
             double target = f.targetHz() != null ? f.targetHz()
-                    : NoteNames.frequencyHz(f.targetNote(), r.referenceA4OrDefault());
+                    : NoteNames.pitchHz(f.targetNote(), r.referenceA4OrDefault());
             out.add(new Fingering(f.name(), new HashSet<>(f.closedHoles()), target,
                     f.register() == null ? 1 : f.register()));
         }

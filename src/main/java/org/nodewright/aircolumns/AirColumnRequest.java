@@ -91,7 +91,7 @@ public record AirColumnRequest(
     public record FingeringSpec(
             @Size(max = 80) String name,
             @NotNull @Size(max = MAX_HOLES) List<@NotNull @Min(0) Integer> closedHoles,
-            @Size(max = 8) String targetNote,
+            @Size(max = 16) String targetNote,
             @Finite @Positive @DecimalMax("20000") Double targetHz,
             @Min(1) @Max(16) Integer register) {
     }

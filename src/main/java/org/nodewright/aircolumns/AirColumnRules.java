@@ -100,8 +100,9 @@ public final class AirColumnRules {
         if (hasNote == hasHz) {
             out.add(new FieldProblem(base + ".targetHz", hasNote ? "give the target pitch once: as a note or in Hz, not both"
                     : "enter the target pitch: a note such as D5, or a frequency in Hz"));
-        } else if (hasNote && !NoteNames.isNoteName(f.targetNote())) {
-            out.add(new FieldProblem(base + ".targetNote", "must be a note name such as " + NoteNames.EXAMPLES));
+        } else if (hasNote && !NoteNames.isPitch(f.targetNote())) {
+            out.add(new FieldProblem(base + ".targetNote", "must be a note name such as " + NoteNames.EXAMPLES
+                    + ", or a frequency such as 329.63 Hz"));
         }
     }
 

@@ -78,6 +78,23 @@ class AirColumnApiTest {
                 org.assertj.core.data.Offset.offset(0.01));
     }
 
+    @Test
+    void aTargetNoteTypedAsHertzWithItsUnitIsTakenAsWritten() throws Exception {
+        String body = """
+                {"segments": [{"lengthMm": 300.0, "inputDiameterMm": 15.0, "outputDiameterMm": 15.0}],
+                 "inputEnd": "open", "outputEnd": "open-unflanged", "fMinHz": 100.0, "fMaxHz": 3000.0, "points": 500,
+                 "fingerings": [{"name": "typed", "closedHoles": [], "targetNote": "329.63 Hz"},
+                                {"name": "comma", "closedHoles": [], "targetNote": "329,63"}]}""";
+        MvcResult r = analyze(body);
+        assertThat(r.getResponse().getStatus()).as(r.getResponse().getContentAsString()).isEqualTo(200);
+        String json = r.getResponse().getContentAsString();
+        assertThat((Double) JsonPath.read(json, "$.fingerings[0].targetHz")).isEqualTo(329.63);
+        assertThat((Double) JsonPath.read(json, "$.fingerings[1].targetHz")).isEqualTo(329.63);
+        MvcResult bad = analyze(body.replace("329,63", "329.63 kHz"));
+        assertThat(bad.getResponse().getStatus()).isEqualTo(400);
+        assertThat(bad.getResponse().getContentAsString()).contains("fingerings[1].targetNote");
+    }
+
     // The server reads fingering targets with the one note grammar (src/test/resources/tuning/note-names.csv):
     // flats and sharps as letters or as the signs U+266D/U+266F, doubled, across the octave boundary
     // (Cb4 = B3, B#3 = C4), two-digit and negative octaves. Frequencies: 440 * 2^((midi - 69)/12) at

@@ -56,4 +56,44 @@ public final class NoteNames {
     public static double frequencyHz(String text, double a4Hz) {
         return new EqualTemperament(a4Hz).frequencyOf(parse(text));
     }
+
+    /** A frequency written as text: digits with a decimal point or comma, optionally followed by "Hz". */
+    private static final Pattern HERTZ = Pattern.compile("([0-9]+(?:[.,][0-9]*)?|[.,][0-9]+)\\s*(?:[Hh][Zz])?");
+
+    /** The highest frequency a pitch written in hertz may have (the benches' own bound on targetHz). */
+    public static final double MAX_PITCH_HZ = 100000.0;
+
+    /** True when {@code text} is a note name, or a frequency in hertz ("329.63", "329,63 Hz") above 0 and at most 100 kHz. */
+    public static boolean isPitch(String text) {
+        if (isNoteName(text)) {
+            return true;
+        }
+        double hz = hertz(text);
+        return hz > 0 && hz <= MAX_PITCH_HZ;
+    }
+
+    /**
+     * The frequency a pitch text names: a note name at the given A4, or the hertz written.
+     *
+     * @throws IllegalArgumentException when {@code text} is neither
+     */
+    public static double pitchHz(String text, double a4Hz) {
+        if (isNoteName(text)) {
+            return frequencyHz(text, a4Hz);
+        }
+        double hz = hertz(text);
+        if (!(hz > 0 && hz <= MAX_PITCH_HZ)) {
+            throw new IllegalArgumentException("not a note name (like " + EXAMPLES + ") or a frequency in Hz: " + text);
+        }
+        return hz;
+    }
+
+    /** The hertz of "329.63", "329,63 Hz", "440hz"; NaN when the text is not written so. */
+    private static double hertz(String text) {
+        if (text == null) {
+            return Double.NaN;
+        }
+        Matcher m = HERTZ.matcher(text.strip());
+        return m.matches() ? Double.parseDouble(m.group(1).replace(',', '.')) : Double.NaN;
+    }
 }

@@ -105,4 +105,26 @@ class NoteNamesTest {
         assertThat(NoteNames.frequencyHz("A3", 415)).isCloseTo(207.5, within(1e-12));
         assertThatThrownBy(() -> NoteNames.frequencyHz("A4", 0)).isInstanceOf(IllegalArgumentException.class);
     }
+
+    // A pitch typed with its unit (issue 16): "329.63 Hz" is 329.63 Hz as written; a note name is its
+    // equal-tempered frequency at A4 = 440 Hz (ISO 16:1975): E4 = 440·2^(-5/12) = 329.6276 Hz (common practice).
+    @org.junit.jupiter.params.ParameterizedTest
+    @org.junit.jupiter.params.provider.CsvSource(delimiter = ';', value = {
+        "329.63 Hz; 329.63",
+        "329,63 Hz; 329.63",
+        "329.63; 329.63",
+        "440hz; 440.0",
+        "E4; 329.6275569",
+    })
+    void aPitchIsANoteNameOrHertzWithOrWithoutItsUnit(String text, double hz) {
+        assertThat(NoteNames.isPitch(text)).isTrue();
+        assertThat(NoteNames.pitchHz(text, 440.0)).isCloseTo(hz, within(1e-6));
+    }
+
+    @org.junit.jupiter.params.ParameterizedTest
+    @org.junit.jupiter.params.provider.ValueSource(strings = {"", "Hz", "-3 Hz", "0 Hz", "329.63 kHz", "abc", "200000 Hz"})
+    void anythingElseIsNoPitch(String text) {
+        assertThat(NoteNames.isPitch(text)).isFalse();
+        assertThatThrownBy(() -> NoteNames.pitchHz(text, 440.0)).isInstanceOf(IllegalArgumentException.class);
+    }
 }
