@@ -37,6 +37,7 @@ const mouthEditor = new MouthEditor({
 });
 const fingerings = new FingeringTable({
   body: $('fingering-rows'),
+  cards: $('fingering-cards'),
   onChange: () => changed(),
   onApply: (closedHoles) => editor.setClosedHoles(closedHoles),
 });
@@ -305,8 +306,12 @@ function drawCurrentBore() {
     outputEnd: $('output-end').value,
     nodesMm: current ? state.response.resonances?.[i]?.pressureNodesMm ?? [] : [],
     onHoleClick: (k) => editor.toggleHole(k),
+    // Edited on the drawing: the rows take the value, and the change is analysed as if typed.
+    onEdit: ({ targets, valueMm }) => editor.setValues(targets, valueMm),
+    onEditEnd: () => drawCurrentBore(),
     mouth,
   });
+  fingerings.setBore(segments, holes);
 }
 
 /** Fills the editor from an analyze request (mm), fingerings included, and analyses it. */
