@@ -373,6 +373,10 @@ $('cents-tolerance').addEventListener('input', () => {
 });
 $('reference-a4').addEventListener('input', changed);
 window.addEventListener('resize', () => drawCurrentBore());
+// On paper the folded fingering table is printed open, and folded again afterwards as it was.
+let tableWasOpen = null;
+window.addEventListener('beforeprint', () => { tableWasOpen = $('fingering-table-view').open; $('fingering-table-view').open = true; });
+window.addEventListener('afterprint', () => { if (tableWasOpen !== null) $('fingering-table-view').open = tableWasOpen; tableWasOpen = null; });
 
 /** A bore handed over by the bench templates' solver (unsaved), else the workshop whistle. */
 function openFirstBore() {

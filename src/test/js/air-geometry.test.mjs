@@ -69,9 +69,9 @@ test('a fingering drawing is to scale along the bore and in proportion across it
   close(L.holes[0].r, 3);                 // 6 mm hole: radius 3 px, as the 20 mm bore is 10 px
   close(L.holes[1].r / L.holes[0].r, 4 / 6);
   assert.deepEqual(L.wall.map((p) => p.half), [5, 5, 5, 10]);
-  assert.equal(fingeringHeightPx(100), 160);
-  assert.equal(fingeringHeightPx(300), 210);
-  assert.equal(fingeringHeightPx(2000), 300);
+  assert.equal(fingeringHeightPx(100), 180);
+  assert.equal(fingeringHeightPx(300), 300);
+  assert.equal(fingeringHeightPx(2000), 360);
 });
 
 test('the cents gauge spans at least a quarter tone and three tolerances each side', () => {

@@ -40,7 +40,7 @@ export const registerWords = (k) => t(`register${Math.min(Math.max(k, 1), 4)}`);
 export function drawCards(list, model) {
   const { segments, holes } = model.bore;
   const height = fingeringHeightPx(totalLengthMm(segments));
-  const layout = fingeringLayout(segments, holes, { heightPx: height, halfWidthPx: 11, padPx: 14 });
+  const layout = fingeringLayout(segments, holes, { heightPx: height, halfWidthPx: 9, padPx: 16 });
   list.replaceChildren(...model.rows.map((r, i) => card(r, i, model, layout, height)));
 }
 

@@ -129,9 +129,9 @@ export function fingeringLayout(segments, holes, { heightPx = 200, halfWidthPx =
   };
 }
 
-/** The height of a fingering's drawing: 0.7 px per mm of bore, kept between 160 and 300 px. */
+/** The height of a fingering's drawing: 1 px per mm of bore, kept between 180 and 360 px. */
 export function fingeringHeightPx(totalMm) {
-  return Math.round(Math.min(300, Math.max(160, 0.7 * (totalMm || 0))));
+  return Math.round(Math.min(360, Math.max(180, totalMm || 0)));
 }
 
 /**

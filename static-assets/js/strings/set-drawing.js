@@ -23,13 +23,13 @@ const LEVEL_SHAPE = { ok: '○', warning: '▲', danger: '✖' };
  * gaugeUnitText(mm)}, t: the page's texts.
  */
 export function drawNeck(container, set, t) {
-  const width = Math.max(560, container.clientWidth || 640);
+  const width = Math.max(520, container.clientWidth || 640);
   const n = set.strings.length;
   const labelW = 78;
   const nutX = labelW;
   const nutW = 9;
-  const bandW = 110;
-  const levelW = 96;
+  const bandW = 96;
+  const levelW = 136;
   const neckFrom = nutX + nutW;
   const neckTo = width - bandW - levelW - 24;
   const top = 58;
@@ -72,13 +72,15 @@ export function drawNeck(container, set, t) {
 
   // The stress band's scale, with the limits where the server puts them.
   const bandX = neckTo + 16;
-  svg.append(el('text', { x: bandX, y: top - 12, class: 'neck-caption' }, t('stressScale')));
+  svg.append(el('text', { x: bandX, y: top - 26, class: 'neck-caption' }, t('stressScale')));
   const limits = set.limits ?? {};
   for (const [kind, f] of [['warning', limits.warningFraction], ['danger', limits.dangerFraction]]) {
     const at = bandAt(f, bandW);
     if (at === null) continue;
     svg.append(el('line', { x1: bandX + at, y1: top - 6, x2: bandX + at, y2: neckBottom + 6, class: `limit-line ${kind}`, 'data-limit': kind }));
-    svg.append(el('text', { x: bandX + at, y: neckBottom + 22, class: `neck-caption middle limit-${kind}` }, `${(100 * f).toFixed(0)} %`));
+    // The caution mark's figure below the band, the breaking mark's above it, so that close limits both read.
+    svg.append(el('text', { x: bandX + at, y: kind === 'warning' ? neckBottom + 20 : top - 12, class: `neck-caption middle limit-${kind}` },
+      `${kind === 'warning' ? '▲' : '✖'} ${(100 * f).toFixed(0)} %`));
   }
 
   set.strings.forEach((s, i) => {

@@ -78,6 +78,7 @@ class BoreDrawingsIT extends BrowserTestBase {
         assertThat(Double.parseDouble(first.findElement(By.cssSelector(".cents-gauge")).getDomAttribute("data-cents")))
                 .isCloseTo(lastCents(0), within(0.005));
         assertThat(centsBefore).isEqualTo(signed(lastCents(0)) + " ¢");
+        js("document.getElementById('fingering-panel').scrollIntoView();");
         screenshot("bore-cards-whistle");
 
         // Open the lowest hole (6) of the D5 card: the whistle then sounds its E5 fingering (holes
@@ -100,6 +101,7 @@ class BoreDrawingsIT extends BrowserTestBase {
                 .isCloseTo(lastCents(0), within(0.005));
         // The table, the secondary view, shows the same fingering with the hole open.
         assertThat(js("return document.querySelector('#fingering-rows tr:first-child input[data-hole=\"5\"]').checked")).isEqualTo(false);
+        js("document.getElementById('fingering-panel').scrollIntoView();");
         screenshot("bore-cards-hole-opened");
 
         // From the keyboard: Enter on the focused hole closes it again, and the focus stays on it.
@@ -179,13 +181,17 @@ class BoreDrawingsIT extends BrowserTestBase {
         wait.until(d -> Double.parseDouble(field("holes[2].positionMm").getDomProperty("value")) == position - 2);
         assertThat(driver.findElement(By.cssSelector("#bore-drawing g.bore-hole[data-hole='2']")).getDomAttribute("class")).isEqualTo(state);
         assertThat(js("return document.activeElement.dataset.hole")).isEqualTo("2");
-        // Dragged with the pointer it moves too, by the drawing's scale, and is not toggled.
+        // Dragged with the pointer it moves too, by the drawing's scale, and is not toggled. (Once the
+        // answer for the keyed position is in: each answer draws the bore anew.)
+        wait.until(d -> num(js("const a = window.__answers; return a.length ? a[a.length - 1].request.holes[2].positionMm : 0"))
+                == position - 2);
         double pxPerMm = Double.parseDouble((String) js("return document.getElementById('bore-drawing').dataset.pxPerMm"));
         WebElement marker = driver.findElement(By.cssSelector("#bore-drawing g.bore-hole[data-hole='2'] .hole-marker"));
         new Actions(driver).clickAndHold(marker).moveByOffset(-15, 0).moveByOffset(-15, 0).release().perform();
         double moved = Double.parseDouble(field("holes[2].positionMm").getDomProperty("value"));
         assertThat(moved).isCloseTo(position - 2 - 30 / pxPerMm, within(1.5 / pxPerMm));
         assertThat(driver.findElement(By.cssSelector("#bore-drawing g.bore-hole[data-hole='2']")).getDomAttribute("class")).isEqualTo(state);
+        js("document.getElementById('bore-drawing').scrollIntoView();");
         screenshot("bore-drawing-hole-moved");
     }
 
