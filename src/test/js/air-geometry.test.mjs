@@ -69,6 +69,12 @@ test('a fingering drawing is to scale along the bore and in proportion across it
   close(L.holes[0].r, 3);                 // 6 mm hole: radius 3 px, as the 20 mm bore is 10 px
   close(L.holes[1].r / L.holes[0].r, 4 / 6);
   assert.deepEqual(L.wall.map((p) => p.half), [5, 5, 5, 10]);
+  // A short drawing: across is held to the scale along (0.5 px per mm), not widened to 10 px.
+  const S = fingeringLayout(CYL_CONE, holes, { heightPx: 150, halfWidthPx: 10 });
+  close(S.pxPerMm, 0.5);
+  close(S.acrossPxPerMm, 0.5);
+  close(S.holes[0].r, 1.5);
+  close(S.holes[1].y - S.holes[0].y, 50);
   assert.equal(fingeringHeightPx(100), 180);
   assert.equal(fingeringHeightPx(300), 300);
   assert.equal(fingeringHeightPx(2000), 360);

@@ -101,8 +101,9 @@ export function boundedMm(kind, mm, { totalMm = Infinity, min = 0.1 } = {}) {
 /**
  * A fingering's small drawing: the bore upright from the input end (top) to the output end
  * (bottom), the length to scale over heightPx; across the bore one scale for the walls and the
- * holes (the widest bore spans 2·halfWidthPx), so every hole's circle is in proportion to the
- * bore and to the other holes. Returns {pxPerMm, acrossPxPerMm, totalMm, wall: [{y, half}],
+ * holes (the widest bore spans at most 2·halfWidthPx, and the scale across is never larger than
+ * the one along), so every hole's circle is in proportion to the bore and to the other holes and
+ * holes never look closer than they are. Returns {pxPerMm, acrossPxPerMm, totalMm, wall: [{y, half}],
  * holes: [{index, y, r, diameterMm}]}; holes beyond the bore are left out.
  */
 export function fingeringLayout(segments, holes, { heightPx = 200, halfWidthPx = 10, padPx = 0 } = {}) {
@@ -111,7 +112,8 @@ export function fingeringLayout(segments, holes, { heightPx = 200, halfWidthPx =
   if (!(total > 0)) return { pxPerMm: 0, acrossPxPerMm: 0, totalMm: 0, wall: [], holes: [] };
   const pxPerMm = (heightPx - 2 * padPx) / total;
   const widest = Math.max(...good.flatMap((g) => [g.inputDiameterMm, g.outputDiameterMm]));
-  const across = halfWidthPx / (widest / 2);
+  // Never wider across than along: a bore long enough for the height is drawn to one scale both ways.
+  const across = Math.min(halfWidthPx / (widest / 2), pxPerMm);
   const wall = [];
   let at = 0;
   for (const g of good) {
