@@ -45,15 +45,21 @@ class CompareIT extends BrowserTestBase {
         waitFor(By.cssSelector("main[data-ready=true]"));
         WebElement thin = rowOf(THIN);
         WebElement heavy = rowOf(HEAVY);
+        String thinId = thin.getAttribute("data-design-id");
+        String heavyId = heavy.getAttribute("data-design-id");
         // Names read as text (left), dates in the browser's locale (a <time> with the ISO instant beside it).
         assertThat(thin.findElement(By.cssSelector("td:nth-child(2)")).getCssValue("text-align")).isIn("left", "start");
         WebElement time = thin.findElement(By.cssSelector("time"));
         assertThat(time.getAttribute("datetime")).matches("\\d{4}-\\d\\d-\\d\\dT.*");
         assertThat(time.getText()).isEqualTo(js("return new Intl.DateTimeFormat(undefined, {dateStyle: 'medium', timeStyle: 'short'})"
                 + ".format(new Date(arguments[0]))", time.getAttribute("datetime")));
+        // Ticking both opens the compare page (A and B in the list's order); A is then the thin string.
         thin.findElement(By.cssSelector(".compare-tick")).click();
         heavy.findElement(By.cssSelector(".compare-tick")).click();
         driver.findElement(By.id("compare-selected")).click();
+        waitFor(By.cssSelector("main[data-view=compare][data-ready=true]"));
+        assertThat(driver.getCurrentUrl()).contains("a=").contains("b=");
+        driver.get(url("/library/compare?a=" + thinId + "&b=" + heavyId));
         waitFor(By.cssSelector("main[data-view=compare][data-ready=true]"));
         waitFor(By.cssSelector("#results-summary tr[data-row='b']"));
 

@@ -65,6 +65,9 @@ class MicrophoneIT extends BrowserTestBase {
         max.sendKeys("16");
         WebElement mic = panel.findElement(By.cssSelector("[data-mic]"));
         assertThat(mic.getAttribute("data-state")).isEqualTo("idle");
+        // Every state the listen goes through, in order: it must wait for the attack, then keep what follows.
+        js("const mic = arguments[0]; window.__micStates = []; new MutationObserver(() => window.__micStates.push(mic.dataset.state))"
+                + ".observe(mic, {attributes: true, attributeFilter: ['data-state']});", mic);
         mic.findElement(By.cssSelector("[data-mic-role='listen']")).click();
 
         // While it waits for the attack the spectrum runs; then it keeps 3 s and sends them.
@@ -74,6 +77,8 @@ class MicrophoneIT extends BrowserTestBase {
         slow.until(d -> List.of("done", "failed").contains(mic.getAttribute("data-state")));
         assertThat(mic.getAttribute("data-state"))
                 .as(mic.findElement(By.cssSelector("[data-mic-role='status']")).getText()).isEqualTo("done");
+        assertThat((List<Object>) js("return window.__micStates.filter((s, i, all) => s !== all[i - 1])"))
+                .containsExactly("asking", "waiting", "recording", "sending", "done");
         assertThat(panel.getAttribute("data-measured")).matches("\\d+");
         assertThat(Long.parseLong(panel.getAttribute("data-measured"))).isGreaterThanOrEqualTo(12);
         screenshot("microphone-string-partials");
