@@ -55,12 +55,8 @@ function showMeasured() {
   role(p, 'result').hidden = false;
   const f = m.impedance.frequencyHz;
   role(p, 'summary').textContent = state.t('summary', f.length, sig(f[0], 6), sig(f[f.length - 1], 6), m.resonances.length);
-  const predicted = state.analysis?.response?.resonances ?? [];
   const rows = m.resonances.map((r) => {
-    let nearest = null;
-    for (const q of predicted) {
-      if (!nearest || Math.abs(q.frequencyHz - r.frequencyHz) < Math.abs(nearest.frequencyHz - r.frequencyHz)) nearest = q;
-    }
+    const nearest = nearestPredicted(r.frequencyHz);
     const cells = [r.n, sig(r.frequencyHz, 6), sig(r.magnitude, 4), r.q == null ? '' : sig(r.q, 3),
       nearest ? sig(nearest.frequencyHz, 6) : '', nearest ? centsBetween(r.frequencyHz, nearest.frequencyHz).toFixed(1) : ''];
     const tr = document.createElement('tr');
