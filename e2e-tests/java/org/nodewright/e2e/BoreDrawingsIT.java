@@ -195,6 +195,32 @@ class BoreDrawingsIT extends BrowserTestBase {
         screenshot("bore-drawing-hole-moved");
     }
 
+    @Test
+    void aJointMovesWithTheKeysAndADiameterWithThePointer() throws Exception {
+        String before = analyzed();
+        new Select(driver.findElement(By.id("preset-select"))).selectByValue("stopped-pipe");
+        wait.until(d -> !analyzed().equals(before));
+        // Shift + arrow right on the joint: ten steps of 1 mm, 300 mm becomes 310 mm.
+        WebElement joint = driver.findElement(By.cssSelector("#bore-drawing [data-handle='joint:0']"));
+        js("arguments[0].focus()", joint);
+        new Actions(driver).keyDown(Keys.SHIFT).sendKeys(Keys.ARROW_RIGHT).keyUp(Keys.SHIFT).perform();
+        wait.until(d -> "310".equals(field("segments[0].lengthMm").getDomProperty("value")));
+        assertThat(js("return document.activeElement.dataset.handle")).isEqualTo("joint:0");
+        wait.until(d -> num(js("const a = window.__answers; return a.length ? a[a.length - 1].request.segments[0].lengthMm : 0")) == 310);
+
+        // The output end's diameter knob dragged 12 px up: the radius grows by 12 px at the drawing's
+        // scale (diameters at true scale), so the diameter by twice that; the input end stays 25 mm.
+        double pxPerMm = Double.parseDouble((String) js("return document.getElementById('bore-drawing').dataset.pxPerMm"));
+        WebElement knob = driver.findElement(By.cssSelector("#bore-drawing [data-handle='diameter:0.outputDiameterMm'] .handle-knob"));
+        new Actions(driver).clickAndHold(knob).moveByOffset(0, -6).moveByOffset(0, -6).release().perform();
+        double d = Double.parseDouble(field("segments[0].outputDiameterMm").getDomProperty("value"));
+        assertThat(d).isCloseTo(25 + 2 * 12 / pxPerMm, within(2 * 1.5 / pxPerMm));
+        assertThat(field("segments[0].inputDiameterMm").getDomProperty("value")).isEqualTo("25");
+        wait.until(x -> num(js("const a = window.__answers; return a.length ? a[a.length - 1].request.segments[0].outputDiameterMm : 0")) == d);
+        js("document.getElementById('bore-drawing').scrollIntoView();");
+        screenshot("bore-drawing-diameter-dragged");
+    }
+
     // ---- helpers --------------------------------------------------------------------------
 
     /** The last answer's prediction for fingering i, Hz. */
