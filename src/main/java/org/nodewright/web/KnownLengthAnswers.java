@@ -11,6 +11,7 @@ import org.springframework.context.annotation.Configuration;
 import org.springframework.core.Ordered;
 import org.springframework.web.filter.OncePerRequestFilter;
 import org.springframework.web.util.ContentCachingResponseWrapper;
+import org.springframework.web.util.WebUtils;
 
 /**
  * Gives every API answer a {@code Content-Length}. Jackson streams its JSON, so without this the
@@ -18,7 +19,9 @@ import org.springframework.web.util.ContentCachingResponseWrapper;
  * answer a gzip-accepting client asks for, whatever {@code server.compression.min-response-size}
  * says: a 52 kB string analysis spent more time being compressed on a loopback connection than
  * being computed and written. Buffered here, an answer under the threshold goes out plain and a
- * large one (an impedance curve) is still compressed. The change-event stream is left streaming.
+ * large one (an impedance curve) is still compressed. The change-event stream is left streaming;
+ * a streamed download (a backup) is buffered until its async dispatch ends, as Spring's own
+ * ShallowEtagHeaderFilter does.
  */
 @Configuration(proxyBeanMethods = false)
 public class KnownLengthAnswers {
@@ -44,13 +47,26 @@ public class KnownLengthAnswers {
             return path.startsWith(EVENT_STREAM);
         }
 
+        /** A streamed body (a backup's StreamingResponseBody) finishes on an async dispatch: follow it there. */
+        @Override
+        protected boolean shouldNotFilterAsyncDispatch() {
+            return false;
+        }
+
         @Override
         protected void doFilterInternal(HttpServletRequest request, HttpServletResponse response, FilterChain chain)
                 throws ServletException, IOException {
-            ContentCachingResponseWrapper buffered = new ContentCachingResponseWrapper(response);
+            ContentCachingResponseWrapper buffered =
+                    WebUtils.getNativeResponse(response, ContentCachingResponseWrapper.class);
+            HttpServletResponse passed = response;
+            if (buffered == null) {
+                buffered = new ContentCachingResponseWrapper(response);
+                passed = buffered;
+            }
             try {
-                chain.doFilter(request, buffered);
+                chain.doFilter(request, passed);
             } finally {
+                // An async request is written out on its last dispatch, which comes through here again.
                 if (!request.isAsyncStarted()) {
                     buffered.copyBodyToResponse();
                 }
