@@ -87,4 +87,49 @@ class BlankTubeIT extends BrowserTestBase {
                 .doubleValue();
         assertThat(window).isNotEqualTo(4.0);
     }
+
+    @Test
+    void aMeasuredImpedanceCalibratesTheWindowFromItsResonances() throws Exception {
+        driver.get(url("/templates"));
+        wait.until(d -> String.valueOf(js("return document.getElementById('bore-json').value")).contains("segments"));
+        js("document.getElementById('bore-json').value = arguments[0]", "{\"segments\":[{\"lengthMm\":280,"
+                + "\"inputDiameterMm\":13,\"outputDiameterMm\":13}],\"inputEnd\":\"open\",\"outputEnd\":\"open-unflanged\","
+                + "\"temperatureC\":20,\"relativeHumidityPct\":0,\"fMinHz\":200,\"fMaxHz\":3000,"
+                + "\"mouth\":{\"kind\":\"window\",\"windowLengthMm\":4.0,\"windowWidthMm\":8.0,\"wallMm\":1.5,\"headspaceMm\":0}}");
+        js("document.getElementById('fingering-lines').value = arguments[0]", "blank, D5,");
+        js("document.getElementById('measured-lines').value = ''");
+        // the "measured" curve: a closed-form cylinder behind a lumped window inertance, not the tool's model
+        java.nio.file.Path file = java.nio.file.Files.createTempFile("blank-impedance-", ".csv");
+        try {
+            java.nio.file.Files.writeString(file, org.nodewright.inverse.InertancePipe.csv(300, 2000, 1));
+            driver.findElement(By.id("calib-impedance")).sendKeys(file.toAbsolutePath().toString());
+            driver.findElement(By.id("calib-impedance-fingering")).sendKeys("blank");
+            driver.findElement(By.id("calib-start")).click();
+            waitForJob();
+            wait.until(d -> !d.findElements(By.cssSelector("#calib-rows tr")).isEmpty());
+        } finally {
+            java.nio.file.Files.deleteIfExists(file);
+        }
+        @SuppressWarnings("unchecked")
+        List<List<String>> rows = (List<List<String>>) js("return [...document.querySelectorAll('#calib-rows tr')]"
+                + ".map(r => [...r.children].map(c => c.textContent))");
+        assertThat(rows).hasSize(3);
+        for (int n = 1; n <= 3; n++) {
+            List<String> r = rows.get(n - 1);
+            assertThat(r.get(0)).isEqualTo("impedance peak " + n);
+            // the peak the page lists is the closed form's minimum, within a cent
+            double measured = Double.parseDouble(r.get(1));
+            assertThat(Math.abs(1200 * Math.log(measured / org.nodewright.inverse.InertancePipe.minimumHz(n)) / Math.log(2)))
+                    .isLessThan(1.0);
+            assertThat(Math.abs(Double.parseDouble(r.get(3)))).isLessThan(Math.abs(Double.parseDouble(r.get(2))));
+        }
+        assertThat(String.valueOf(js("return document.getElementById('calib-values').textContent")))
+                .contains("mouth.windowLengthMm");
+        screenshot("calibrated-from-impedance");
+        driver.findElement(By.id("calib-apply")).click();
+        double window = ((Number) js("return JSON.parse(document.getElementById('bore-json').value).mouth.windowLengthMm"))
+                .doubleValue();
+        // a longer end correction than the 4 mm window's asks for a smaller window
+        assertThat(window).isLessThan(4.0);
+    }
 }
