@@ -81,8 +81,32 @@ function lengthAxis(lengthMm) {
   return { type: 'linear', min: 0, max: L(lengthMm), title: { display: true, text: `${t('position')} (${io.units.length})` } };
 }
 
+/**
+ * What a chart was last drawn from, when only the pluck and pickup lines can differ: the same
+ * shape arrays (the page reuses them for a marker move), length and unit. A marker move then
+ * moves the lines on the chart already drawn instead of rebuilding thousands of points.
+ */
+const drawnFrom = new Map();
+
+function markersOnly(canvasId, signature, request) {
+  const chart = chartOn(canvasId);
+  const before = drawnFrom.get(canvasId);
+  drawnFrom.set(canvasId, signature);
+  if (!chart || !before || !sameSignature(before, signature)) return false;
+  chart.options.plugins.annotation.annotations = markerAnnotations(liveMarkers(request));
+  chart.update('none');
+  return true;
+}
+
+function sameSignature(a, b) {
+  return a.key === b.key && a.refs.length === b.refs.length && a.refs.every((r, i) => r === b.refs[i]);
+}
+
 export function drawModeShapes(request, response) {
   const lengthMm = request.lengthMm;
+  const shapeRefs = response.modes.map((m) => (Array.isArray(m.shape) ? m.shape : null));
+  const signature = { key: `${lengthMm}|${io.units.length}`, refs: shapeRefs.every((r) => r) ? shapeRefs : [{}] };
+  if (markersOnly('mode-shapes-chart', signature, request)) return;
   const count = response.modes.length;
   const row = (n) => count - n + 1;   // mode 1 on the top row
   const datasets = [];
@@ -118,6 +142,8 @@ export function drawModeShapes(request, response) {
 
 export function drawNodeMap(request, response) {
   const count = response.modes.length;
+  const nodeKey = `${request.lengthMm}|${io.units.length}|${JSON.stringify(response.modes.map((m) => m.nodesMm))}`;
+  if (markersOnly('node-map-chart', { key: nodeKey, refs: [] }, request)) return;
   const datasets = response.modes.map((mode) => ({
     kind: 'node-row', n: mode.n, label: `${t('mode')} ${mode.n}`,
     data: mode.nodesMm.map((x) => ({ x: L(x), y: mode.n })),

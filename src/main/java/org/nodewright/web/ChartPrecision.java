@@ -23,20 +23,24 @@ public final class ChartPrecision extends ValueSerializer<Object> {
     /** Significant digits kept of the largest magnitude in the array. */
     public static final int SIGNIFICANT_DIGITS = 6;
     private static final int MAX_DECIMALS = 15;
+    /** Longest text: sign, "0.", 15 leading zeros, 16 digits; generous. */
+    static final int BUFFER = 48;
 
     @Override
     public void serialize(Object value, JsonGenerator gen, SerializationContext ctxt) throws JacksonException {
         double[] v = toArray(value);
         int decimals = decimalsFor(v);
         gen.writeStartArray(value, v.length);
-        StringBuilder text = new StringBuilder(24);
+        // One buffer and one power of ten per array; the digits go straight into the generator
+        // (no String per number: this loop is most of a 24-mode string answer's server time).
+        char[] buf = new char[BUFFER];
         double scale = Math.pow(10, decimals);
         for (double x : v) {
             if (!Double.isFinite(x) || Math.abs(x) * scale >= 9e15) {
                 gen.writeNumber(x);
             } else {
-                text.setLength(0);
-                gen.writeNumber(format(x, decimals, text));
+                int len = format(x, decimals, scale, buf);
+                gen.writeNumber(buf, 0, len);
             }
         }
         gen.writeEndArray();
@@ -59,29 +63,69 @@ public final class ChartPrecision extends ValueSerializer<Object> {
 
     /** x rounded half away from zero to {@code decimals} places, trailing zeros dropped, at least "d.d". */
     static String format(double x, int decimals, StringBuilder out) {
-        long scaled = Math.round(Math.abs(x) * Math.pow(10, decimals));
-        if (scaled == 0) {
-            return "0.0";
-        }
-        if (x < 0) {
-            out.append('-');
-        }
-        String digits = Long.toString(scaled);
-        int intDigits = digits.length() - decimals;
-        if (intDigits <= 0) {
-            out.append("0.");
-            out.append("0".repeat(-intDigits));
-            out.append(digits);
-        } else {
-            out.append(digits, 0, intDigits).append('.');
-            out.append(decimals == 0 ? "0" : digits.substring(intDigits));
-        }
-        int end = out.length();
-        while (out.charAt(end - 1) == '0' && out.charAt(end - 2) != '.') {
-            end--;
-        }
-        out.setLength(end);
+        char[] buf = new char[BUFFER];
+        int len = format(x, decimals, Math.pow(10, decimals), buf);
+        out.append(buf, 0, len);
         return out.toString();
+    }
+
+    /**
+     * The same text written into {@code buf} (at least {@link #BUFFER} long); returns its length.
+     * {@code scale} is 10^decimals; |x|·scale must stay below 9e15 (the caller checks).
+     */
+    static int format(double x, int decimals, double scale, char[] buf) {
+        long scaled = Math.round(Math.abs(x) * scale);
+        if (scaled == 0) {
+            buf[0] = '0';
+            buf[1] = '.';
+            buf[2] = '0';
+            return 3;
+        }
+        // Digits of the scaled value, least significant first, into the end of the buffer.
+        int p = BUFFER;
+        int digitCount = 0;
+        for (long r = scaled; r != 0; r /= 10) {
+            buf[--p] = (char) ('0' + (int) (r % 10));
+            digitCount++;
+        }
+        int fractionDigits = decimals;
+        // Trailing zeros of the fraction dropped, one kept ("1.0").
+        int kept = digitCount;
+        while (fractionDigits > 1 && buf[p + kept - 1] == '0') {
+            kept--;
+            fractionDigits--;
+        }
+        int intDigits = digitCount - decimals;
+        // The text is built at the front of the buffer while the digits are read from its end:
+        // the text is at most 19 characters and the digits start at BUFFER - 16 or later, so the
+        // two never meet.
+        int n = 0;
+        if (x < 0) {
+            buf[n++] = '-';
+        }
+        if (intDigits <= 0) {
+            buf[n++] = '0';
+            buf[n++] = '.';
+            for (int i = 0; i < -intDigits; i++) {
+                buf[n++] = '0';
+            }
+            for (int i = 0; i < kept; i++) {
+                buf[n++] = buf[p + i];
+            }
+        } else {
+            for (int i = 0; i < intDigits; i++) {
+                buf[n++] = buf[p + i];
+            }
+            buf[n++] = '.';
+            if (decimals == 0) {
+                buf[n++] = '0';
+            } else {
+                for (int i = intDigits; i < kept; i++) {
+                    buf[n++] = buf[p + i];
+                }
+            }
+        }
+        return n;
     }
 
     private static double[] toArray(Object value) {
