@@ -1,14 +1,15 @@
 // The bore panel: a bore (from the demo or the bore bench), its drilling template, and the
 // tone-hole solver (a job polled for progress, cancellable, whose result can be applied to the
 // bore and opened in the bore bench).
-import { clearFieldErrors, getJson, postJson, sendJson } from '../common/api.js';
+import { clearFieldErrors, getJson, postJson, postForBlob, download } from '../common/api.js';
+import { createJobFollower } from '../common/jobs.js';
 import { fmt } from '../common/units.js';
 import { OPEN_AIR_COLUMN, BORE_FOR_TEMPLATES, handOver, handedOver } from '../common/handover.js';
-import { $, t, num, hz as typedHz, postForBlob, showProblem, say, showImage, download } from './shared.js';
+import { $, t, num, hz as typedHz, showProblem, say, showImage } from './shared.js';
 
 
 const POLL_MS = 200;
-const state = { job: null, result: null, timer: null, polls: 0, limits: {} };
+const state = { result: null, limits: {} };
 
 const borePanel = $('bore-panel');
 
@@ -25,27 +26,34 @@ function fingeringLines(fingerings) {
   return fingerings.map((f) => `${f.name}, ${f.targetNote ?? f.targetHz}, ${(f.closedHoles || []).map((h) => h + 1).join(' ')}${(f.register ?? 1) > 1 ? `, ${f.register}` : ''}`).join('\n');
 }
 
-/** The fingering lines as the API's fingerings (closedHoles from 0). */
-function readFingerings() {
+/**
+ * The non-empty lines of a textarea, each split at commas and read by row(parts) into a row of the request, or
+ * null for a line it cannot read (then a problem "line N" on field).
+ */
+function readLines(id, field, row) {
   const rows = [];
   const problems = [];
-  $('fingering-lines').value.split('\n').forEach((line, i) => {
+  $(id).value.split('\n').forEach((line, i) => {
     if (!line.trim()) return;
-    const parts = line.split(',').map((s) => s.trim());
+    const r = row(line.split(',').map((s) => s.trim()));
+    if (r) rows.push(r); else problems.push({ field, message: t('badLine', i + 1) });
+  });
+  return { rows, problems };
+}
+
+/** The fingering lines as the API's fingerings (closedHoles from 0). */
+function readFingerings() {
+  return readLines('fingering-lines', 'fingerings', (parts) => {
     const closed = (parts[2] ?? '').split(/\s+/).filter(Boolean).map(Number);
     const register = parts[3] ? Number(parts[3]) : 1;
     if (parts.length < 2 || !parts[0] || !parts[1] || closed.some((n) => !Number.isInteger(n) || n < 1)
-      || !Number.isInteger(register) || register < 1) {
-      problems.push({ field: 'fingerings', message: t('badLine', i + 1) });
-      return;
-    }
+      || !Number.isInteger(register) || register < 1) return null;
     const hz = typedHz(parts[1]);
-    rows.push({
+    return {
       name: parts[0], closedHoles: closed.map((n) => n - 1),
       ...(Number.isFinite(hz) ? { targetHz: hz } : { targetNote: parts[1] }), register,
-    });
+    };
   });
-  return { rows, problems };
 }
 
 function limits() {
@@ -138,36 +146,30 @@ async function startSolve() {
   startJob('/api/v1/inverse/tone-holes', { bore: { ...bore, fingerings: f.rows }, limits: limits() });
 }
 
-async function poll() {
-  if (!state.job) return;
-  clearTimeout(state.timer);
-  const ticket = ++state.polls;
-  const answer = await getJson(`/api/v1/inverse/jobs/${encodeURIComponent(state.job)}`);
-  if (ticket !== state.polls || !state.job) return; // a later poll (after a cancel) speaks instead
-  if (!answer.ok) {
-    setRunning(false);
-    $('solve-state').textContent = t('error', answer.status);
-    return;
-  }
-  const job = answer.data;
-  const progress = $('solve-progress');
-  progress.value = job.status === 'succeeded' ? 1 : job.progress.fraction;
+/** The solve's status line and progress bar, from each poll of the job. */
+function showJob(job) {
+  $('solve-progress').value = job.status === 'succeeded' ? 1 : job.progress.fraction;
   $('solve-state').dataset.status = job.status;
   if (job.status === 'queued') {
     $('solve-state').textContent = t('queued');
   } else if (job.status === 'running') {
     $('solve-state').textContent = t('running', job.progress.evaluations,
       job.progress.worstCents == null ? '...' : fmt(job.progress.worstCents, 2));
-  } else {
-    finish(job);
-    return;
   }
-  state.timer = setTimeout(poll, POLL_MS);
 }
+
+const solveJob = createJobFollower({
+  interval: POLL_MS,
+  progress: showJob,
+  finished: (job) => { showJob(job); finish(job); },
+  failed: (answer) => {
+    setRunning(false);
+    $('solve-state').textContent = t('error', answer.status);
+  },
+});
 
 function finish(job) {
   setRunning(false);
-  state.job = null;
   if (job.status === 'cancelled') {
     $('solve-state').textContent = t('cancelled');
     return;
@@ -212,14 +214,10 @@ function finish(job) {
 }
 
 async function cancelSolve() {
-  if (!state.job) return;
-  clearTimeout(state.timer);
-  const answer = await sendJson('DELETE', `/api/v1/inverse/jobs/${encodeURIComponent(state.job)}`)
-    .catch((error) => ({ ok: false, status: String(error) }));
-  // A queued job is cancelled at once, a running one at its next evaluation: poll until the job
-  // says so. A refused or lost cancel is said on the page, and the job is still followed.
-  if (!answer.ok) $('solve-state').textContent = t('error', answer.status);
-  poll();
+  // A queued job is cancelled at once, a running one at its next evaluation: the follower polls until
+  // the job says so. A refused or lost cancel is said on the page, and the job is still followed.
+  const answer = await solveJob.cancel();
+  if (answer && !answer.ok) $('solve-state').textContent = t('error', answer.status);
 }
 
 function applyResult() {
@@ -247,10 +245,9 @@ async function startJob(url, body) {
   }
   say($('bore-message'), '');
   $('solve-result').hidden = true;
-  state.job = answer.data.id;
   setRunning(true);
   $('solve-progress').value = 0;
-  poll();
+  solveJob.follow(answer.data.id);
 }
 
 async function loadBlank() {
@@ -289,19 +286,10 @@ function solveBlank() {
 
 /** Measured lines "name, pitch" as the API's measured list (the pitch in Hz or as a note). */
 function readMeasured() {
-  const rows = [];
-  const problems = [];
-  $('measured-lines').value.split('\n').forEach((line, i) => {
-    if (!line.trim()) return;
-    const parts = line.split(',').map((s) => s.trim());
+  return readLines('measured-lines', 'measured', (parts) => {
     const hz = parts[1] ? typedHz(parts[1]) : NaN;
-    if (!parts[0] || !Number.isFinite(hz)) {
-      problems.push({ field: 'measured', message: t('badLine', i + 1) });
-      return;
-    }
-    rows.push({ fingering: parts[0], measuredHz: hz });
+    return !parts[0] || !Number.isFinite(hz) ? null : { fingering: parts[0], measuredHz: hz };
   });
-  return { rows, problems };
 }
 
 function calibrate() {

@@ -6,10 +6,6 @@ import java.util.function.BooleanSupplier;
 import org.hipparchus.linear.Array2DRowRealMatrix;
 import org.hipparchus.linear.ArrayRealVector;
 import org.hipparchus.linear.RealVector;
-import org.hipparchus.optim.nonlinear.vector.leastsquares.LeastSquaresBuilder;
-import org.hipparchus.optim.nonlinear.vector.leastsquares.LeastSquaresOptimizer;
-import org.hipparchus.optim.nonlinear.vector.leastsquares.LeastSquaresProblem;
-import org.hipparchus.optim.nonlinear.vector.leastsquares.LevenbergMarquardtOptimizer;
 import org.hipparchus.util.Pair;
 import org.nodewright.physics.Require;
 import org.nodewright.physics.aircolumn.Fingering;
@@ -71,25 +67,9 @@ public final class ToneHoleSolver {
         Run run = new Run(model, start, lengthBeforeFootMm, fingerings, limits, progress, cancelled);
         double[] startHz = run.frequencies(start, null);
         run.guess = startHz.clone();
-        LeastSquaresProblem problem = new LeastSquaresBuilder()
-                .model(run::value)
-                .target(new double[run.residualCount()])
-                .start(run.encode(start))
-                .parameterValidator(run::clamp)
-                .maxEvaluations(Integer.MAX_VALUE)
-                .maxIterations(Integer.MAX_VALUE)
-                .checker((iteration, previous, current) -> run.bestWorst <= toleranceCents)
-                .lazyEvaluation(false)
-                .build();
-        int iterations = 0;
-        try {
-            LeastSquaresOptimizer.Optimum optimum = new LevenbergMarquardtOptimizer().optimize(problem);
-            iterations = optimum.getIterations();
-        } catch (EvaluationCapReached stop) {
-            // keep the best layout seen so far
-        } catch (org.hipparchus.exception.MathIllegalStateException stalled) {
-            // the optimiser could not improve further; keep the best layout seen so far
-        }
+        // keeps the best layout seen so far when the cap ends the run or the optimiser stalls
+        int iterations = BestKeptFit.run(run::value, run.residualCount(), run.encode(start), run::clamp,
+                () -> run.bestWorst <= toleranceCents);
         HoleLayout best = run.best == null ? start : run.best;
         double[] endHz = run.frequencies(best, run.bestHz);
         List<ToneHoleSolution.Note> notes = new ArrayList<>();
@@ -108,14 +88,6 @@ public final class ToneHoleSolver {
         }
         return new ToneHoleSolution(best, notes, holes, best.footLengthMm() - start.footLengthMm(), iterations,
                 run.evaluations, worst <= toleranceCents);
-    }
-
-    private static final class EvaluationCapReached extends RuntimeException {
-        private static final long serialVersionUID = 1L;
-
-        EvaluationCapReached() {
-            super(null, null, false, false);
-        }
     }
 
     /** State of one solve: the parameter encoding, the best layout seen, counters. */
@@ -285,7 +257,7 @@ public final class ToneHoleSolver {
             evaluations++;
             progress.update(evaluations, maxEvaluations, bestWorst);
             if (evaluations >= maxEvaluations) {
-                throw new EvaluationCapReached();
+                throw new BestKeptFit.EvaluationCap();
             }
             return hz;
         }
