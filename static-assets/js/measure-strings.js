@@ -1,4 +1,5 @@
-// Measurement panel of the string bench: upload a recording (WAV) or a table of partials (CSV),
+// Measurement panel of the string bench: upload a recording (WAV) or a table of partials (CSV), or
+// listen through the microphone (common/microphone.js), then
 // show the measured partials against the predicted ones in the partials chart and a table of
 // residuals, and apply the fit back to the design as an effective linear density and modulus.
 import { mountPanel, role, sig, onPageEvent, uploadData, measure, textRow } from './measure/panel.js';
@@ -6,6 +7,7 @@ import { cents as centsBetween } from './common/notes.js';
 import { drawChart, setOverlay } from './common/charts.js';
 import { showPanelFailure } from './common/panels.js';
 import { APPLY_STRING_PARAMETERS, handOver } from './common/handover.js';
+import { mountMicrophone } from './common/microphone.js';
 
 const MEASURED_COLOUR = '#b5651d';
 const state = { panel: null, t: null, analysis: null, measured: null };
@@ -29,11 +31,23 @@ async function onSubmit(e) {
   const form = role(state.panel, 'upload');
   const data = uploadData(state, form);
   if (!data) return;
-  const file = data.get('file');
+  await analyseFile(data.get('file'));
+}
+
+/**
+ * Sends a recording or table with the form's expected f1 and partial count, and shows the fit: the
+ * one path of an uploaded file and of a recording heard through the microphone. True when fitted.
+ */
+async function analyseFile(file) {
+  const form = role(state.panel, 'upload');
+  const data = new FormData();
+  data.append('file', file);
   if (form.elements.expectedF1Hz.value !== '') data.append('expectedF1Hz', form.elements.expectedF1Hz.value);
   if (form.elements.maxPartials.value !== '') data.append('maxPartials', form.elements.maxPartials.value);
   const url = isCsv(file) ? '/api/v1/measurements/partials-csv' : '/api/v1/measurements/partials';
-  if (await measure(state, form, url, data, 'partials-chart')) showMeasured();
+  if (!(await measure(state, form, url, data, 'partials-chart'))) return false;
+  showMeasured();
+  return true;
 }
 
 function showMeasured() {
@@ -56,6 +70,7 @@ function showMeasured() {
   // Nothing to compare with until a design is analysed on this page (none on the Measure page).
   role(p, 'peaks').classList.toggle('without-design', !state.analysis);
   p.dataset.measured = String(m.peaks.length);
+  p.dataset.fit = JSON.stringify({ f1Hz: fit.f1Hz, inharmonicityB: fit.inharmonicityB, partialsUsed: fit.partialsUsed });
   fillApplyInputs(false);
   drawMeasured();
 }
@@ -154,6 +169,7 @@ async function init() {
   const panel = await mountPanel(state, 'measure-panel', 'measure-strings');
   if (!panel) return;
   role(panel, 'upload').addEventListener('submit', onSubmit);
+  mountMicrophone(panel.querySelector('[data-mic]'), { onRecording: analyseFile });
   role(panel, 'apply').addEventListener('click', onApply);
   for (const name of ['tension', 'length', 'diameter']) {
     role(panel, name).addEventListener('input', (e) => { e.target.dataset.auto = 'false'; preview(); });

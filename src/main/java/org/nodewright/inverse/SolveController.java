@@ -45,9 +45,11 @@ class SolveController {
     @Operation(summary = "Start a blank-tube hole solve; 202 with the job (poll GET /api/v1/inverse/jobs/{id})",
             description = "Body: {bore (no holes, no fingerings), holeCount, chimneyMm, fingerings (closedHoles index "
                     + "the holes to be made, 0 nearest the input; register 2 for the second register), "
-                    + "startDiametersMm, limits, toleranceCents (default 3), maxEvaluationsPerStart}. The result's "
+                    + "startDiametersMm, limits, toleranceCents (default 3), maxEvaluationsPerStart, mouthLimits "
+                    + "{varyHeadspace, minHeadspaceMm, maxHeadspaceMm, varyWindowLength, minWindowLengthMm, "
+                    + "maxWindowLengthMm}}. The result's "
                     + "solution is a tone-hole result (notes, holes, footMovedMm, bore); firstLayout is the closed "
-                    + "form's layout; starts lists every start tried.")
+                    + "form's layout; starts lists every start tried; mouth lists what moved at the player's end.")
     ResponseEntity<SolveJob.View> blankTube(@Valid @RequestBody BlankTubeRequest request) {
         return jobs.accepted("blank-tube", BlankTubeSetup.work(request));
     }
@@ -55,9 +57,11 @@ class SolveController {
     @PostMapping(path = "/api/v1/inverse/calibration", consumes = "application/json")
     @Operation(summary = "Start a calibration from measured pitches; 202 with the job (poll GET /api/v1/inverse/jobs/{id})",
             description = "Body: {bore (holes, fingerings, mouth as built), measured [{fingering, measuredHz}], fit "
-                    + "[\"mouth\" | \"air-temperature\"]}. Levenberg-Marquardt on the cents between the model and each "
-                    + "measured pitch; the result gives the fitted values, each note's cents before and after, the rms, "
-                    + "and the calibrated bore.")
+                    + "[\"mouth\" | \"air-temperature\"], impedance {fingering, csv (frequencyHz,magnitude,phase), "
+                    + "phaseUnit, minProminenceDb, maxPeaks}} (measured, impedance or both). Levenberg-Marquardt on the "
+                    + "cents between the model and each measured pitch and each measured impedance resonance (matched to "
+                    + "the model's nearest); the result gives the fitted values, each note's cents before and after, the "
+                    + "rms, the curve's resonances and whether each was used, and the calibrated bore.")
     ResponseEntity<SolveJob.View> calibration(@Valid @RequestBody CalibrationRequest request) {
         return jobs.accepted("calibration", CalibrationSetup.work(request));
     }
