@@ -27,12 +27,7 @@ class BoreBenchIT extends BrowserTestBase {
     @Test
     void aCylinderBuiltInTheEditorGetsItsChartAndOddHarmonics() throws Exception {
         String before = analyzed();
-        buildCylinder(300.0, 15.0);
-        new Select(driver.findElement(By.id("input-end"))).selectByValue("closed");
-        new Select(driver.findElement(By.id("output-end"))).selectByValue("ideal-open");
-        setChecked(driver.findElement(By.id("losses")), false);
-        type(driver.findElement(By.id("f-min")), "20");
-        type(driver.findElement(By.id("f-max")), "3000");
+        buildLosslessClosedOpenCylinder(300.0, 15.0);
         js("window.__airEvents = []; document.addEventListener('nodewright:air-analyzed', e => window.__airEvents.push(e.detail));");
         driver.findElement(By.id("analyze")).click();
         waitForAnalysisAfter(before);
@@ -82,12 +77,7 @@ class BoreBenchIT extends BrowserTestBase {
     @Test
     void aLengthTypedInInchesIsSentInMillimetres() throws Exception {
         String before = analyzed();
-        buildCylinder(300.0, 15.0);
-        new Select(driver.findElement(By.id("input-end"))).selectByValue("closed");
-        new Select(driver.findElement(By.id("output-end"))).selectByValue("ideal-open");
-        setChecked(driver.findElement(By.id("losses")), false);
-        type(driver.findElement(By.id("f-min")), "20");
-        type(driver.findElement(By.id("f-max")), "3000");
+        buildLosslessClosedOpenCylinder(300.0, 15.0);
         new Select(driver.findElement(By.id("units"))).selectByValue("inch");
         type(field("segments[0].lengthMm"), "12");
         js("window.__airEvents = []; document.addEventListener('nodewright:air-analyzed', e => window.__airEvents.push(e.detail));");
@@ -366,6 +356,16 @@ class BoreBenchIT extends BrowserTestBase {
             driver.findElement(By.cssSelector("#fingering-table-view > summary")).click();
         }
         wait.until(d -> Boolean.TRUE.equals(js("return document.getElementById('fingering-table-view').open")));
+    }
+
+    /** One cylinder, closed at the input, ideally open at the output, no losses, 20 to 3000 Hz (f_n = (2n-1) c / 4L). */
+    private void buildLosslessClosedOpenCylinder(double lengthMm, double boreMm) {
+        buildCylinder(lengthMm, boreMm);
+        new Select(driver.findElement(By.id("input-end"))).selectByValue("closed");
+        new Select(driver.findElement(By.id("output-end"))).selectByValue("ideal-open");
+        setChecked(driver.findElement(By.id("losses")), false);
+        type(driver.findElement(By.id("f-min")), "20");
+        type(driver.findElement(By.id("f-max")), "3000");
     }
 
     /** Clears the editor down to one cylinder of the given length and bore, in millimetres. */
