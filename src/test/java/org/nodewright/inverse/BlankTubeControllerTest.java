@@ -117,6 +117,47 @@ class BlankTubeControllerTest {
         refused(demoWith("$.mouthLimits.maxWindowLengthMm", "long"), "mouthLimits.maxWindowLengthMm");
     }
 
+    @org.junit.jupiter.params.ParameterizedTest
+    @org.junit.jupiter.params.provider.CsvSource(delimiter = '|', value = {
+        "$.holeCount|0|holeCount",
+        "$.holeCount|17|holeCount",
+        "$.chimneyMm|-1|chimneyMm",
+        "$.toleranceCents|0|toleranceCents",
+        "$.maxEvaluationsPerStart|0|maxEvaluationsPerStart",
+        "$.limits.minWallMm|-2|limits.minWallMm",
+        "$.limits.maxDiameterMm|1|limits.maxDiameterMm",
+        "$.mouthLimits.minWindowLengthMm|0|mouthLimits.minWindowLengthMm",
+    })
+    void everyBadFigureOfTheBlankTubeRequestIsNamed(String path, double value, String field) throws Exception {
+        refused(demoWith(path, value), field);
+    }
+
+    @Test
+    void missingAndEmptyPartsOfTheBlankTubeRequestAreNamed() throws Exception {
+        refused(JsonPath.parse(demo()).delete("$.bore").jsonString(), "bore");
+        refused(JsonPath.parse(demo()).delete("$.holeCount").jsonString(), "holeCount");
+        refused(demoWith("$.fingerings", List.of()), "fingerings");
+        refused(demoWith("$.startDiametersMm", List.of()), "startDiametersMm");
+        refused(demoWith("$.fingerings[0].closedHoles", List.of(-1)), "fingerings[0].closedHoles[0]");
+    }
+
+    void calibrationRefused(String body, String field) throws Exception {
+        mvc.perform(post("/api/v1/inverse/calibration").contentType(MediaType.APPLICATION_JSON).content(body))
+                .andExpect(status().isBadRequest())
+                .andExpect(jsonPath("$.errors[*].field", org.hamcrest.Matchers.hasItem(field)));
+    }
+
+    @Test
+    void everyBadPartOfTheCalibrationRequestIsNamed() throws Exception {
+        calibrationRefused(calibrationBody("[{\"fingering\":\"D5\",\"measuredHz\":-1}]", null), "measured[0].measuredHz");
+        calibrationRefused(calibrationBody("[{\"measuredHz\":580}]", null), "measured[0].fingering");
+        calibrationRefused(calibrationBody("[]", null), "measured");
+        calibrationRefused(calibrationBody("[{\"fingering\":\"D5\",\"measuredHz\":580}]", "[\"warmth\"]"), "fit[0]");
+        calibrationRefused(calibrationBody("[{\"fingering\":\"D5\",\"measuredHz\":580}]", "[]"), "fit");
+        calibrationRefused(calibrationBody("[{\"fingering\":\"D5\",\"measuredHz\":580}]", null)
+                .replace("\"windowLengthMm\":4.0", "\"windowLengthMm\":-4.0"), "bore.mouth.windowLengthMm");
+    }
+
     /** The workshop whistle as built (window preset), with a window 1.0 mm longer than the model's 4.0 mm. */
     static String calibrationBody(String measured, String fit) {
         String holes = "[{\"positionMm\":113.7,\"diameterMm\":6.5,\"chimneyMm\":2.5},{\"positionMm\":133.7,\"diameterMm\":7.0,"
