@@ -1,6 +1,6 @@
 // Fret slotting template: SVG preview, SVG and tiled PDF downloads.
-import { clearFieldErrors } from '../common/api.js';
-import { $, t, num, postForBlob, showProblem, say, showImage, download } from './shared.js';
+import { clearFieldErrors, postForBlob, download } from '../common/api.js';
+import { $, t, num, showProblem, say, showImage } from './shared.js';
 
 const fretForm = $('fret-form');
 

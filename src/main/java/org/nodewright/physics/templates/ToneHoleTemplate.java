@@ -106,7 +106,7 @@ public record ToneHoleTemplate(String name, List<Section> sections, List<Hole> h
             marks.add(Mark.Caption.of(cx, row, "H" + number + " d " + mm(h.diameterMm()) + " at " + mm(h.positionMm()),
                     2.0, Mark.Caption.Anchor.MIDDLE));
         }
-        marks.addAll(CalibrationRuler.at(x0, rulerBase, "calibration: this ruler must measure 100 mm"));
+        marks.addAll(CalibrationRuler.at(x0, rulerBase));
         String title = String.format(Locale.ROOT, "Tone holes: %s, bore %s mm, %d holes, distances from the input end",
                 name, mm(length), holes.size());
         marks.add(Mark.Caption.of(x0, 8, title, 3.0, Mark.Caption.Anchor.START));
