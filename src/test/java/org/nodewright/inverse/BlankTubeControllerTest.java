@@ -57,6 +57,11 @@ class BlankTubeControllerTest {
         // the optimiser improved on the closed form it started from
         double firstWorst = ((Number) JsonPath.read(done, "$.result.firstLayout.worstCents")).doubleValue();
         assertThat(worst).isLessThan(firstWorst);
+        // the demo lets the headspace move; the bore handed back carries where it went
+        assertThat((String) JsonPath.read(done, "$.result.mouth[0].field")).isEqualTo("mouth.headspaceMm");
+        double head = ((Number) JsonPath.read(done, "$.result.mouth[0].solvedMm")).doubleValue();
+        assertThat(head).isBetween(0.0, 13.0);
+        assertThat(((Number) JsonPath.read(done, "$.result.solution.bore.mouth.headspaceMm")).doubleValue()).isEqualTo(head);
         // the holed bore is a valid air-column request: the bore bench analyses it
         String bore = JsonPath.parse(done).read("$.result.solution.bore", net.minidev.json.JSONObject.class)
                 .toJSONString();
@@ -79,6 +84,78 @@ class BlankTubeControllerTest {
         mvc.perform(post("/api/v1/inverse/blank-tube").contentType(MediaType.APPLICATION_JSON).content(bigStart))
                 .andExpect(status().isBadRequest())
                 .andExpect(jsonPath("$.errors[*].field", org.hamcrest.Matchers.hasItem("startDiametersMm[0]")));
+    }
+
+    void refused(String body, String field) throws Exception {
+        mvc.perform(post("/api/v1/inverse/blank-tube").contentType(MediaType.APPLICATION_JSON).content(body))
+                .andExpect(status().isBadRequest())
+                .andExpect(jsonPath("$.errors[*].field", org.hamcrest.Matchers.hasItem(field)));
+    }
+
+    String demoWith(String path, Object value) throws Exception {
+        return JsonPath.parse(demo()).set(path, value).jsonString();
+    }
+
+    @Test
+    void mouthLimitsTheMouthCannotFollowAreRefusedByField() throws Exception {
+        // the demo lets the headspace move: without a mouth there is none
+        refused(demoWith("$.bore.mouth", null), "mouthLimits.varyHeadspace");
+        refused(demoWith("$.mouthLimits.varyWindowLength", true).replace("\"kind\":\"window\"", "\"kind\":\"reed\","
+                + "\"equivalentVolumeMm3\":500"), "mouthLimits.varyWindowLength");
+        refused(demoWith("$.mouthLimits.maxHeadspaceMm", -1), "mouthLimits.maxHeadspaceMm");
+        refused(JsonPath.parse(demo()).set("$.mouthLimits.minHeadspaceMm", 8).set("$.mouthLimits.maxHeadspaceMm", 4)
+                .jsonString(), "mouthLimits.maxHeadspaceMm");
+        // the blank's headspace (0 mm) outside the bounds would be a changed value: refused
+        refused(demoWith("$.mouthLimits.minHeadspaceMm", 2), "mouthLimits.minHeadspaceMm");
+        refused(JsonPath.parse(demo()).set("$.mouthLimits.varyWindowLength", true)
+                .set("$.mouthLimits.minWindowLengthMm", 5).jsonString(), "mouthLimits.minWindowLengthMm");
+        refused(JsonPath.parse(demo()).set("$.mouthLimits.varyWindowLength", true)
+                .set("$.mouthLimits.minWindowLengthMm", 3).set("$.mouthLimits.maxWindowLengthMm", 2).jsonString(),
+                "mouthLimits.maxWindowLengthMm");
+        refused(demoWith("$.mouthLimits.maxWindowLengthMm", 6), "mouthLimits.varyWindowLength");
+        refused(JsonPath.parse(demo()).set("$.mouthLimits.varyHeadspace", false).jsonString(), "mouthLimits.varyHeadspace");
+        refused(demoWith("$.mouthLimits.maxWindowLengthMm", "long"), "mouthLimits.maxWindowLengthMm");
+    }
+
+    @org.junit.jupiter.params.ParameterizedTest
+    @org.junit.jupiter.params.provider.CsvSource(delimiter = '|', value = {
+        "$.holeCount|0|holeCount",
+        "$.holeCount|17|holeCount",
+        "$.chimneyMm|-1|chimneyMm",
+        "$.toleranceCents|0|toleranceCents",
+        "$.maxEvaluationsPerStart|0|maxEvaluationsPerStart",
+        "$.limits.minWallMm|-2|limits.minWallMm",
+        "$.limits.maxDiameterMm|1|limits.maxDiameterMm",
+        "$.mouthLimits.minWindowLengthMm|0|mouthLimits.minWindowLengthMm",
+    })
+    void everyBadFigureOfTheBlankTubeRequestIsNamed(String path, double value, String field) throws Exception {
+        refused(demoWith(path, value), field);
+    }
+
+    @Test
+    void missingAndEmptyPartsOfTheBlankTubeRequestAreNamed() throws Exception {
+        refused(JsonPath.parse(demo()).delete("$.bore").jsonString(), "bore");
+        refused(JsonPath.parse(demo()).delete("$.holeCount").jsonString(), "holeCount");
+        refused(demoWith("$.fingerings", List.of()), "fingerings");
+        refused(demoWith("$.startDiametersMm", List.of()), "startDiametersMm");
+        refused(demoWith("$.fingerings[0].closedHoles", List.of(-1)), "fingerings[0].closedHoles[0]");
+    }
+
+    void calibrationRefused(String body, String field) throws Exception {
+        mvc.perform(post("/api/v1/inverse/calibration").contentType(MediaType.APPLICATION_JSON).content(body))
+                .andExpect(status().isBadRequest())
+                .andExpect(jsonPath("$.errors[*].field", org.hamcrest.Matchers.hasItem(field)));
+    }
+
+    @Test
+    void everyBadPartOfTheCalibrationRequestIsNamed() throws Exception {
+        calibrationRefused(calibrationBody("[{\"fingering\":\"D5\",\"measuredHz\":-1}]", null), "measured[0].measuredHz");
+        calibrationRefused(calibrationBody("[{\"measuredHz\":580}]", null), "measured[0].fingering");
+        calibrationRefused(calibrationBody("[]", null), "measured");
+        calibrationRefused(calibrationBody("[{\"fingering\":\"D5\",\"measuredHz\":580}]", "[\"warmth\"]"), "fit[0]");
+        calibrationRefused(calibrationBody("[{\"fingering\":\"D5\",\"measuredHz\":580}]", "[]"), "fit");
+        calibrationRefused(calibrationBody("[{\"fingering\":\"D5\",\"measuredHz\":580}]", null)
+                .replace("\"windowLengthMm\":4.0", "\"windowLengthMm\":-4.0"), "bore.mouth.windowLengthMm");
     }
 
     /** The workshop whistle as built (window preset), with a window 1.0 mm longer than the model's 4.0 mm. */
