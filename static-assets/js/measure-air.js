@@ -3,10 +3,10 @@
 // beside the nearest predicted resonance.
 import { loadPanel, texts, role, sig, onPageEvent, sendUpload } from './measure/panel.js';
 import { cents as centsBetween } from './common/notes.js';
-import { drawChart, setOverlay, clearOverlay } from './common/charts.js';
+import { drawChart, setOverlay, clearOverlay, PALETTE } from './common/charts.js';
 import { showPanelFailure } from './common/panels.js';
 
-const MEASURED_COLOUR = '#b5651d';
+const MEASURED_COLOUR = PALETTE[4];   // Okabe–Ito orange: measured values over predicted ones
 const state = { panel: null, t: null, analysis: null, measured: null };
 
 /** Factor bringing the measured curve's highest value onto the prediction's (for unlike units). */

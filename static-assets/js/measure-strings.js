@@ -3,11 +3,11 @@
 // residuals, and apply the fit back to the design as an effective linear density and modulus.
 import { loadPanel, texts, role, sig, onPageEvent, sendUpload } from './measure/panel.js';
 import { cents as centsBetween } from './common/notes.js';
-import { drawChart, setOverlay, clearOverlay } from './common/charts.js';
+import { drawChart, setOverlay, clearOverlay, PALETTE } from './common/charts.js';
 import { showPanelFailure } from './common/panels.js';
 import { APPLY_STRING_PARAMETERS, handOver } from './common/handover.js';
 
-const MEASURED_COLOUR = '#b5651d';
+const MEASURED_COLOUR = PALETTE[4];   // Okabe–Ito orange: measured values over predicted ones
 const state = { panel: null, t: null, analysis: null, measured: null };
 
 /**

@@ -1,12 +1,34 @@
 // Small Chart.js helpers shared by the pages. Chart.js and chartjs-plugin-annotation are globals
 // loaded by the layout from their WebJars; nothing here fetches anything.
 
-/** Twelve distinguishable colours (our own palette), reused in order. */
-const PALETTE = ['#2b5d8a', '#c0572b', '#2f7f4f', '#8a3b8f', '#b08a18', '#1f8a8a',
-  '#a3262a', '#5a6b2a', '#6a4fb3', '#d07a9a', '#44546a', '#8c5a2b'];
+/**
+ * The one palette of every chart and state mark: Okabe & Ito's "Color Universal Design" set (2008),
+ * eight colours chosen to stay apart for protanopes, deuteranopes and tritanopes. Series take them
+ * in this order (blue, vermillion, bluish green, reddish purple, orange, sky blue, yellow, black).
+ * nodewright.css carries the same values as --series-1..8; src/test/js/palette.test.mjs checks both
+ * against simulated colour-vision deficiency (Machado, Oliveira & Fernandes 2009) by CIEDE2000.
+ */
+export const PALETTE = Object.freeze(['#0072B2', '#D55E00', '#009E73', '#CC79A7', '#E69F00', '#56B4E9', '#F0E442', '#000000']);
+
+/**
+ * Colours of the states a page marks (in tune / out of tune, stress caution levels), always beside
+ * a word and a shape: Okabe–Ito blue, and its orange and vermillion darkened (sRGB × 0.65 and × 0.63)
+ * so that text in them reads at 4.5:1 on the paper. Same values as --ok, --warn, --danger in the CSS.
+ */
+export const STATE = Object.freeze({ ok: '#0072B2', warn: '#956700', danger: '#863B00' });
+
+/** Page ink and paper (as --ink and --paper), for marks drawn in black and white. */
+export const INK = '#1f2a36';
+export const PAPER = '#fbf8f1';
 
 export function colour(i) {
   return PALETTE[((i % PALETTE.length) + PALETTE.length) % PALETTE.length];
+}
+
+/** A palette or state colour with transparency alpha (0..1), for bands and shaded areas. */
+export function translucent(hex, alpha) {
+  const [r, g, b] = [1, 3, 5].map((k) => parseInt(hex.slice(k, k + 2), 16));
+  return `rgba(${r},${g},${b},${alpha})`;
 }
 
 // Overlays: a panel adds its datasets to a chart another module draws (measured partials on the
