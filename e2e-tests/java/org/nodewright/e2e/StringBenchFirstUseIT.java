@@ -157,6 +157,32 @@ class StringBenchFirstUseIT extends StringPageTestBase {
     }
 
     @Test
+    void aColleagueOpeningADesignSavedInInchesAndPoundsSeesItInInchesAndPounds() throws Exception {
+        // Issue 16 item 8: the units travel with the design, not only in the browser that saved it.
+        new org.openqa.selenium.support.ui.Select(driver.findElement(By.id("length-unit"))).selectByValue("inch");
+        new org.openqa.selenium.support.ui.Select(driver.findElement(By.id("force-unit"))).selectByValue("lbf");
+        WebElement bar = waitFor(By.cssSelector("#design-bar[data-ready='true']"));
+        bar.findElement(By.cssSelector("[data-role='name']")).sendKeys("Parlour first string for Bram");
+        bar.findElement(By.cssSelector("[data-role='save']")).click();
+        wait.until(d -> d.findElement(By.id("design-bar")).getAttribute("data-design-id") != null);
+        String id = driver.findElement(By.id("design-bar")).getAttribute("data-design-id");
+
+        // Another person's browser: its own profile, so nothing of the first browser's storage.
+        org.openqa.selenium.WebDriver colleague = newBrowser();
+        try {
+            var theirWait = new org.openqa.selenium.support.ui.WebDriverWait(colleague, java.time.Duration.ofSeconds(15));
+            colleague.get(url("/strings?design=" + id));
+            theirWait.until(d -> id.equals(d.findElement(By.id("design-bar")).getAttribute("data-design-id")));
+            assertThat(colleague.findElement(By.id("length-unit")).getAttribute("value")).isEqualTo("inch");
+            assertThat(colleague.findElement(By.id("force-unit")).getAttribute("value")).isEqualTo("lbf");
+            // 650 mm = 25.59055 inch (1 inch = 25.4 mm exactly).
+            assertThat(colleague.findElement(By.id("lengthMm")).getAttribute("value")).isEqualTo("25.59055");
+        } finally {
+            colleague.quit();
+        }
+    }
+
+    @Test
     void inInchesAMessageSpeaksInchesWithoutFloatNoise() {
         new org.openqa.selenium.support.ui.Select(driver.findElement(By.id("length-unit"))).selectByValue("inch");
         type("lengthMm", "25.5");

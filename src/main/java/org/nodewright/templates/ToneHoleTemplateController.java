@@ -28,7 +28,7 @@ class ToneHoleTemplateController {
                     + "100 mm calibration ruler.")
     ResponseEntity<String> svg(@Valid @RequestBody AirColumnRequest bore,
             @RequestParam(required = false) @Pattern(regexp = NAME, message = NAME_RULE) String name) {
-        return TemplateResponses.svg(BoreMapping.template(bore, name == null ? "bore" : name).draw(), "tone-holes");
+        return TemplateResponses.svg(BoreMapping.template(bore, name).draw(), "tone-holes");
     }
 
     @PostMapping(path = "/api/v1/templates/tone-holes.pdf", consumes = "application/json")
@@ -36,7 +36,7 @@ class ToneHoleTemplateController {
     ResponseEntity<byte[]> pdf(@Valid @RequestBody AirColumnRequest bore,
             @RequestParam(required = false) @Pattern(regexp = NAME, message = NAME_RULE) String name,
             @RequestParam(required = false) String paper) {
-        return TemplateResponses.pdf(BoreMapping.template(bore, name == null ? "bore" : name).draw(), paper,
+        return TemplateResponses.pdf(BoreMapping.template(bore, name).draw(), paper,
                 "tone-holes");
     }
 }
