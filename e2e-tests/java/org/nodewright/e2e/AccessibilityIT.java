@@ -2,15 +2,9 @@ package org.nodewright.e2e;
 
 import static org.assertj.core.api.Assertions.assertThat;
 
-import java.net.URI;
-import java.net.http.HttpClient;
-import java.net.http.HttpRequest;
-import java.net.http.HttpResponse;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
-import java.util.regex.Matcher;
-import java.util.regex.Pattern;
 import org.junit.jupiter.api.Test;
 
 /**
@@ -19,9 +13,6 @@ import org.junit.jupiter.api.Test;
  * The sign-in page is LAN-mode only and is checked by {@link LanLoginIT}.
  */
 class AccessibilityIT extends BrowserTestBase {
-
-    private static final Pattern ID = Pattern.compile("\"id\"\\s*:\\s*(\\d+)");
-    private final HttpClient http = HttpClient.newHttpClient();
 
     /** A page and the script that answers true once the page has drawn what it draws. */
     private record Page(String path, String ready) {
@@ -33,8 +24,8 @@ class AccessibilityIT extends BrowserTestBase {
 
     @Test
     void noPageHasASeriousOrCriticalViolation() throws Exception {
-        String a = createString("Harrowgate Lane parlour, top E");
-        String b = createString("Harrowgate Lane parlour, top E heavier");
+        String a = saveStringDesign("Harrowgate Lane parlour, top E", "Ada", "");
+        String b = saveStringDesign("Harrowgate Lane parlour, top E heavier", "Ada", "");
         List<Page> pages = List.of(
                 new Page("/", "return !!document.querySelector('main.home h1')"),
                 new Page("/strings", chartDrawn("mode-shapes-chart")),
@@ -73,18 +64,5 @@ class AccessibilityIT extends BrowserTestBase {
                 + "const g = document.createElement('img'); g.src = '/favicon.ico'; document.querySelector('main').append(g);");
         List<String> violations = AxeCheck.seriousViolations(driver);
         assertThat(String.join("\n", violations)).contains("label (critical)").contains("image-alt (critical)");
-    }
-
-    private String createString(String name) throws Exception {
-        String body = "{\"name\": \"" + name + "\", \"kind\": \"string\", \"author\": \"Ada\", \"notes\": \"\","
-                + " \"parameters\": {\"lengthMm\": 650.0, \"tensionN\": 70.0, \"material\": \"plain-steel\","
-                + " \"diameterMm\": 0.30, \"endCondition\": \"pinned\", \"stiffness\": true, \"modeCount\": 12}}";
-        HttpResponse<String> r = http.send(HttpRequest.newBuilder(URI.create(url("/api/v1/designs")))
-                .header("Content-Type", "application/json").POST(HttpRequest.BodyPublishers.ofString(body)).build(),
-                HttpResponse.BodyHandlers.ofString());
-        assertThat(r.statusCode()).as(r.body()).isEqualTo(201);
-        Matcher m = ID.matcher(r.body());
-        assertThat(m.find()).isTrue();
-        return m.group(1);
     }
 }

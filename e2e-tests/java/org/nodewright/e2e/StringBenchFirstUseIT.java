@@ -119,6 +119,53 @@ class StringBenchFirstUseIT extends StringPageTestBase {
         assertThat(driver.findElement(By.id("pickup-0-position")).getAttribute("value")).isEqualTo("610");
     }
 
+    /**
+     * Issue 15 §6: the pluck and pickup lines on the node map are sliders for the keyboard too. Tab
+     * reaches each line's handle (role slider, named, with its value and unit); the arrow keys move
+     * it a millimetre, Page Up ten, End to one step short of the bridge; the form, the native slider
+     * and the analysis follow.
+     */
+    @Test
+    void theMarkersOnTheNodeMapMoveWithTheArrowKeys() {
+        WebElement handle = waitFor(By.cssSelector("#node-map-chart ~ .line-handle[data-marker='pluck']"));
+        assertThat(handle.getAttribute("role")).isEqualTo("slider");
+        assertThat(handle.getAttribute("aria-label")).isEqualTo("Pluck");
+        assertThat(handle.getAttribute("aria-valuenow")).isEqualTo("520");
+        assertThat(handle.getAttribute("aria-valuetext")).isEqualTo("520 mm");
+        assertThat(handle.getAttribute("aria-valuemax")).isEqualTo("649");
+        // Reached from the keyboard: tabbing from the last form control before the chart lands on a handle.
+        js("arguments[0].focus();", driver.findElement(By.id("analyze-button")));
+        boolean reached = false;
+        for (int i = 0; i < 80 && !reached; i++) {
+            new org.openqa.selenium.interactions.Actions(driver).sendKeys(org.openqa.selenium.Keys.TAB).perform();
+            reached = Boolean.TRUE.equals(js("return document.activeElement.dataset.marker === 'pluck'"
+                    + " && document.activeElement.classList.contains('line-handle');"));
+        }
+        assertThat(reached).as("the pluck handle is in the tab order").isTrue();
+        // The focused handle has a visible focus ring (outline drawn, not 'none').
+        assertThat(js("return getComputedStyle(document.activeElement).outlineStyle;")).isNotEqualTo("none");
+
+        long before = analyses();
+        org.openqa.selenium.interactions.Actions keys = new org.openqa.selenium.interactions.Actions(driver);
+        keys.sendKeys(org.openqa.selenium.Keys.ARROW_RIGHT).perform();
+        wait.until(d -> "521".equals(d.findElement(By.id("pluckPosition")).getAttribute("value")));
+        keys.sendKeys(org.openqa.selenium.Keys.PAGE_UP).perform();
+        wait.until(d -> "531".equals(d.findElement(By.id("pluckPosition")).getAttribute("value")));
+        wait.until(d -> analyses() > before && num(js("return window.lastAnalysis.request.pluck.positionMm;")) == 531.0);
+        assertThat(driver.findElement(By.id("slider-pluck")).getAttribute("value")).isEqualTo("531");
+        assertThat(num(js("return Chart.getChart(document.getElementById('node-map-chart'))"
+                + ".options.plugins.annotation.annotations.pluck.xMin;"))).isEqualTo(531.0);
+        keys.sendKeys(org.openqa.selenium.Keys.END).perform();
+        wait.until(d -> "649".equals(d.findElement(By.id("pluckPosition")).getAttribute("value")));
+        assertThat(driver.findElement(By.cssSelector("#node-map-chart ~ .line-handle[data-marker='pluck']"))
+                .getAttribute("aria-valuenow")).isEqualTo("649");
+        // The chart has its text alternative: an image named by its panel, described by a table of its numbers.
+        WebElement canvas = driver.findElement(By.id("node-map-chart"));
+        assertThat(canvas.getAttribute("role")).isEqualTo("img");
+        assertThat(canvas.getAttribute("aria-describedby")).contains("node-map-chart-numbers").contains("modes-table");
+        assertThat(driver.findElements(By.cssSelector("#node-map-chart-numbers tbody tr"))).hasSize(12);
+    }
+
     @Test
     void switchingFromPitchToTensionKeepsTheSolvedTension() {
         type("targetHz", "E4");

@@ -74,19 +74,20 @@ class TemplatesIT extends BrowserTestBase {
                 + "fetch(document.getElementById('fret-image').src).then(r => r.text()).then(done);");
         var doc = DocumentBuilderFactory.newInstance().newDocumentBuilder()
                 .parse(new ByteArrayInputStream(svg.getBytes(StandardCharsets.UTF_8)));
+        assertThat(lineX(doc, "data-fret", "12") - lineX(doc, "data-fret", "0")).isCloseTo(323.85, within(0.01));
+        js("localStorage.removeItem('nodewright.units.templates.frets');");
+    }
+
+    /** x1 of the SVG line whose attribute has that value (a fret slot, a ruler tick). */
+    private static double lineX(org.w3c.dom.Document doc, String attribute, String value) {
         NodeList lines = doc.getElementsByTagName("line");
-        double nut = Double.NaN;
-        double fret12 = Double.NaN;
         for (int i = 0; i < lines.getLength(); i++) {
             Element e = (Element) lines.item(i);
-            if ("0".equals(e.getAttribute("data-fret"))) {
-                nut = Double.parseDouble(e.getAttribute("x1"));
-            } else if ("12".equals(e.getAttribute("data-fret"))) {
-                fret12 = Double.parseDouble(e.getAttribute("x1"));
+            if (value.equals(e.getAttribute(attribute))) {
+                return Double.parseDouble(e.getAttribute("x1"));
             }
         }
-        assertThat(fret12 - nut).isCloseTo(323.85, within(0.01));
-        js("localStorage.removeItem('nodewright.units.templates.frets');");
+        return Double.NaN;
     }
 
     @Test

@@ -174,14 +174,16 @@ class CsvTablesTest {
             }
         }
         // The partials table: 12 modes, 12 rows, a mode's nodes in one cell as positions (mode 3 of a
-        // pinned 650 mm string: nodes near L/3 and 2L/3, about 216.7 and 433.3 mm; stiffness moves them little).
+        // pinned 650 mm string: the two ends and nodes at L/3 and 2L/3, about 216.7 and 433.3 mm).
         List<List<String>> modes = rows(partials.body());
         assertThat(modes).hasSize(13);
         String nodes3 = modes.get(3).get(modes.get(0).indexOf("nodesMm")).replace("\"", "");
         List<Double> positions = java.util.Arrays.stream(nodes3.split(";")).map(Double::parseDouble).toList();
-        assertThat(positions).hasSize(2);
-        assertThat(positions.get(0)).isCloseTo(650.0 / 3, org.assertj.core.data.Offset.offset(1.0));
-        assertThat(positions.get(1)).isCloseTo(1300.0 / 3, org.assertj.core.data.Offset.offset(1.0));
+        assertThat(positions).hasSize(4);
+        assertThat(positions.get(0)).isEqualTo(0.0);
+        assertThat(positions.get(1)).isCloseTo(650.0 / 3, org.assertj.core.data.Offset.offset(1.0));
+        assertThat(positions.get(2)).isCloseTo(1300.0 / 3, org.assertj.core.data.Offset.offset(1.0));
+        assertThat(positions.get(3)).isEqualTo(650.0);
     }
 
     /**
