@@ -37,6 +37,7 @@ const mouthEditor = new MouthEditor({
 });
 const fingerings = new FingeringTable({
   body: $('fingering-rows'),
+  cards: $('fingering-cards'),
   onChange: () => changed(),
   onApply: (closedHoles) => editor.setClosedHoles(closedHoles),
 });
@@ -305,8 +306,12 @@ function drawCurrentBore() {
     outputEnd: $('output-end').value,
     nodesMm: current ? state.response.resonances?.[i]?.pressureNodesMm ?? [] : [],
     onHoleClick: (k) => editor.toggleHole(k),
+    // Edited on the drawing: the rows take the value, and the change is analysed as if typed.
+    onEdit: ({ targets, valueMm }) => editor.setValues(targets, valueMm),
+    onEditEnd: () => drawCurrentBore(),
     mouth,
   });
+  fingerings.setBore(segments, holes);
 }
 
 /** Fills the editor from an analyze request (mm), fingerings included, and analyses it. */
@@ -368,6 +373,10 @@ $('cents-tolerance').addEventListener('input', () => {
 });
 $('reference-a4').addEventListener('input', changed);
 window.addEventListener('resize', () => drawCurrentBore());
+// On paper the folded fingering table is printed open, and folded again afterwards as it was.
+let tableWasOpen = null;
+window.addEventListener('beforeprint', () => { tableWasOpen = $('fingering-table-view').open; $('fingering-table-view').open = true; });
+window.addEventListener('afterprint', () => { if (tableWasOpen !== null) $('fingering-table-view').open = tableWasOpen; tableWasOpen = null; });
 
 /** A bore handed over by the bench templates' solver (unsaved), else the workshop whistle. */
 function openFirstBore() {

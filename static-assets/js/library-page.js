@@ -1,11 +1,11 @@
 // Shop library pages: the list (search, compare, import/export), one design (history, restore,
-// duplicate, delete) and two designs compared (parameters that differ, modes in one chart).
+// duplicate, delete, any two revisions compared) and two designs compared (library/compare.js).
 // Every name, tag and note goes into the page with textContent, never as HTML.
 import { getJson, sendJson, postJson } from './common/api.js';
 import { loadDesignText, format, localTime } from './common/design-bar.js';
+import { showCompare, parameterRows, rememberedUnits } from './library/compare.js';
 
 const DESIGNERS = { string: '/strings', 'string-set': '/string-sets', 'air-column': '/air-columns', bar: '/bars', plate: '/plates' };
-const ANALYZE = { string: '/api/v1/strings/analyze', 'string-set': '/api/v1/string-sets/analyze', 'air-column': '/api/v1/air-columns/analyze', bar: '/api/v1/bars/analyze', plate: '/api/v1/plates/analyze' };
 
 const main = document.querySelector('main.library');
 let t = {};
@@ -92,9 +92,10 @@ async function listView() {
     });
     actions.append(dup, del);
     const cells = [el('td'), el('td'), el('td', {}, t[`library.kind.${d.kind}`] || d.kind), tagCell,
-      el('td', {}, String(d.version)), el('td', {}, localTime(d.updatedAt)), el('td', {}, d.updatedBy), actions];
+      el('td', { class: 'num' }, String(d.version)), el('td', { class: 'when' }), el('td', {}, d.updatedBy), actions];
     cells[0].append(tick);
     cells[1].append(open);
+    cells[5].append(el('time', { datetime: d.updatedAt ?? '' }, localTime(d.updatedAt)));
     tr.append(...cells);
     return tr;
   }
@@ -138,31 +139,17 @@ async function listView() {
 }
 
 // ---------- one design ----------
-function paramRows(tbody, parameters, highlight = new Set()) {
+/** A revision's parameters, labelled in the user's units, those differing from the current one marked. */
+function paramRows(tbody, parameters, kind, highlight = new Set()) {
   tbody.replaceChildren();
-  for (const [path, value] of Object.entries(flatten(parameters))) {
-    const tr = el('tr', { 'data-path': path });
-    if (highlight.has(path)) tr.classList.add('differs');
-    tr.append(el('th', {}, path), el('td', {}, display(value)));
+  const units = rememberedUnits(kind, window.localStorage);
+  const words = new Proxy({}, { get: (_, key) => t[key] || undefined });
+  for (const row of parameterRows(parameters, parameters, [...highlight].map((path) => ({ path })), units, words)) {
+    const tr = el('tr', { 'data-path': row.path });
+    if (row.differs) tr.classList.add('differs');
+    tr.append(el('th', {}, row.label), el('td', {}, row.a), el('td', { class: 'unit' }, row.unit));
     tbody.append(tr);
   }
-}
-
-function flatten(node, path = '', out = {}) {
-  if (node !== null && typeof node === 'object' && Object.keys(node).length > 0) {
-    for (const [k, v] of Object.entries(node)) {
-      flatten(v, Array.isArray(node) ? `${path}[${k}]` : (path ? `${path}.${k}` : k), out);
-    }
-  } else if (path) {
-    out[path] = node;
-  }
-  return out;
-}
-
-function display(v) {
-  if (v === undefined) return '—';
-  if (v === null) return 'null';
-  return typeof v === 'object' ? JSON.stringify(v) : String(v);
 }
 
 async function designView() {
@@ -178,6 +165,7 @@ async function designView() {
     document.getElementById('design-saved').textContent = format(t['library.lastSaved'], design.version, design.updatedBy, localTime(design.updatedAt));
     tbody.replaceChildren();
     for (const r of revs.data.slice().reverse()) tbody.append(revisionRow(r));
+    fillRevisionPicker(revs.data);
     main.dataset.version = String(design.version);
   }
 
@@ -191,7 +179,7 @@ async function designView() {
       const differs = new Set(cmp.ok ? cmp.data.differences.map((x) => x.path) : []);
       document.getElementById('revision-view').hidden = false;
       document.getElementById('revision-view-title').textContent = format(t['library.rev.parameters'], r.version);
-      paramRows(document.querySelector('#revision-params tbody'), r.parameters, differs);
+      paramRows(document.querySelector('#revision-params tbody'), r.parameters, design.kind, differs);
     });
     actions.append(view);
     if (r.version !== design.version) {
@@ -206,6 +194,27 @@ async function designView() {
       el('td', {}, r.name), el('td', {}, r.comment), actions);
     return tr;
   }
+
+  /** Any two revisions of the history, compared on the compare page. */
+  function fillRevisionPicker(revisions) {
+    const from = document.getElementById('compare-from');
+    const to = document.getElementById('compare-to');
+    const keep = [from.value, to.value];
+    for (const select of [from, to]) {
+      select.replaceChildren(...revisions.map((r) => el('option', { value: String(r.version) },
+        format(t['library.rev.option'], r.version, localTime(r.savedAt), r.comment || ''))));
+    }
+    from.value = keep[0] && revisions.some((r) => String(r.version) === keep[0]) ? keep[0] : String(revisions[0]?.version ?? '');
+    to.value = keep[1] && revisions.some((r) => String(r.version) === keep[1]) ? keep[1] : String(revisions[revisions.length - 1]?.version ?? '');
+    document.getElementById('compare-revisions').hidden = revisions.length < 2;
+  }
+  document.getElementById('compare-revisions').addEventListener('submit', (e) => {
+    e.preventDefault();
+    const from = document.getElementById('compare-from').value;
+    const to = document.getElementById('compare-to').value;
+    if (from === to) { status(t['library.rev.pickTwo'], 'error'); return; }
+    window.location.href = `/library/compare?design=${encodeURIComponent(id)}&from=${from}&to=${to}`;
+  });
 
   document.getElementById('duplicate-design').addEventListener('click', async () => {
     const r = await duplicate(design);
@@ -228,70 +237,11 @@ async function designView() {
   await refresh();
 }
 
-// ---------- two designs compared ----------
-async function compareView() {
-  const q = new URLSearchParams(window.location.search);
-  const r = await getJson(`/api/v1/designs/compare?${q}`);
-  if (!r.ok) { status(problemText(r), 'error'); return; }
-  const { left, right, differences } = r.data;
-  document.getElementById('compare-left-name').textContent = `${left.name} (v${left.version})`;
-  document.getElementById('compare-right-name').textContent = `${right.name} (v${right.version})`;
-  const differs = new Set(differences.map((d) => d.path));
-  document.getElementById('compare-summary').textContent = differs.size
-    ? format(t['library.compare.differ'], differs.size) : t['library.compare.same'];
-  const a = flatten(left.parameters);
-  const b = flatten(right.parameters);
-  const tbody = document.querySelector('#compare-table tbody');
-  for (const path of [...new Set([...Object.keys(a), ...Object.keys(b)])]) {
-    const tr = el('tr', { 'data-path': path });
-    if (differs.has(path)) tr.classList.add('differs');
-    tr.append(el('th', {}, path), el('td', {}, display(a[path])), el('td', {}, display(b[path])));
-    tbody.append(tr);
-  }
-  await drawChart(left, right);
-}
-
-/** Each design analysed by its bench's endpoint; partials, resonances or tensions in one chart. */
-async function drawChart(left, right) {
-  const note = document.getElementById('compare-chart-note');
-  const results = await Promise.all([left, right].map((s) => postJson(ANALYZE[s.kind], s.parameters)));
-  if (results.some((x) => !x.ok)) {
-    note.hidden = false;
-    note.textContent = results.map((x) => (x.ok ? '' : problemText(x))).filter(Boolean).join(' | ') || t['library.compare.noAnalysis'];
-    if (results.every((x) => !x.ok)) return;
-  }
-  const colours = ['#2b5d8a', '#a86400'];
-  let datasets;
-  let xTitle = t['library.compare.partial'];
-  let yTitle = t['library.compare.frequency'];
-  let type = 'scatter';
-  if (left.kind === 'string-set') {
-    type = 'bar';
-    xTitle = t['library.compare.string'];
-    yTitle = t['library.compare.tension'];
-    datasets = results.map((x, i) => ({ label: [left, right][i].name, backgroundColor: colours[i],
-      data: x.ok ? x.data.strings.map((s, k) => ({ x: String(k + 1), y: s.tensionN })) : [] }));
-  } else {
-    const rows = (x) => (left.kind === 'string' ? x.data.modes : x.data.resonances);
-    datasets = results.map((x, i) => ({ label: [left, right][i].name, borderColor: colours[i], backgroundColor: colours[i],
-      pointStyle: i === 0 ? 'circle' : 'triangle', pointRadius: 5, showLine: true,
-      data: x.ok ? rows(x).map((m) => ({ x: m.n, y: m.frequencyHz })) : [] }));
-  }
-  // eslint-disable-next-line no-undef
-  new Chart(document.getElementById('compare-chart'), {
-    type,
-    data: { datasets },
-    options: { responsive: true, maintainAspectRatio: false, animation: false,
-      scales: { x: { type: type === 'bar' ? 'category' : 'linear', title: { display: true, text: xTitle } },
-        y: { title: { display: true, text: yTitle } } } },
-  });
-}
-
 (async () => {
   t = await loadDesignText();
   const view = main.dataset.view;
   if (view === 'list') await listView();
   else if (view === 'design') await designView();
-  else if (view === 'compare') await compareView();
+  else if (view === 'compare') await showCompare({ getJson, postJson, t: (k) => t[k], status, problemText });
   main.dataset.ready = 'true';
 })();

@@ -1,4 +1,5 @@
-// Measurement panel of the string bench: upload a recording (WAV) or a table of partials (CSV),
+// Measurement panel of the string bench: upload a recording (WAV) or a table of partials (CSV), or
+// listen through the microphone (common/microphone.js), then
 // show the measured partials against the predicted ones in the partials chart and a table of
 // residuals, and apply the fit back to the design as an effective linear density and modulus.
 import { loadPanel, texts, role, sig, onPageEvent, sendUpload } from './measure/panel.js';
@@ -6,6 +7,7 @@ import { cents as centsBetween } from './common/notes.js';
 import { drawChart, setOverlay, clearOverlay, PALETTE } from './common/charts.js';
 import { showPanelFailure } from './common/panels.js';
 import { APPLY_STRING_PARAMETERS, handOver } from './common/handover.js';
+import { mountMicrophone } from './common/microphone.js';
 
 const MEASURED_COLOUR = PALETTE[4];   // Okabe–Ito orange: measured values over predicted ones
 const state = { panel: null, t: null, analysis: null, measured: null };
@@ -26,19 +28,26 @@ const isCsv = (file) => /\.(csv|txt)$/i.test(file.name) || /csv|text\/plain/.tes
 
 async function onSubmit(e) {
   e.preventDefault();
-  const p = state.panel;
-  const form = role(p, 'upload');
-  const status = role(p, 'status');
-  const file = form.elements.file.files[0];
-  if (!file) { status.textContent = state.t('noFile'); return; }
+  const file = role(state.panel, 'upload').elements.file.files[0];
+  if (!file) { role(state.panel, 'status').textContent = state.t('noFile'); return; }
+  await analyseFile(file);
+}
+
+/**
+ * Sends a recording or table with the form's expected f1 and partial count, and shows the fit: the
+ * one path of an uploaded file and of a recording heard through the microphone. True when fitted.
+ */
+async function analyseFile(file) {
+  const form = role(state.panel, 'upload');
   const data = new FormData();
   data.append('file', file);
   if (form.elements.expectedF1Hz.value !== '') data.append('expectedF1Hz', form.elements.expectedF1Hz.value);
   if (form.elements.maxPartials.value !== '') data.append('maxPartials', form.elements.maxPartials.value);
   const measured = await sendUpload(state, form, isCsv(file) ? '/api/v1/measurements/partials-csv' : '/api/v1/measurements/partials', data);
-  if (!measured) { clearMeasured(); return; }
+  if (!measured) { clearMeasured(); return false; }
   state.measured = measured;
   showMeasured();
+  return true;
 }
 
 /** A refused upload leaves no earlier fit, table or points under its error. */
@@ -72,6 +81,7 @@ function showMeasured() {
   // Nothing to compare with until a design is analysed on this page (none on the Measure page).
   role(p, 'peaks').classList.toggle('without-design', !state.analysis);
   p.dataset.measured = String(m.peaks.length);
+  p.dataset.fit = JSON.stringify({ f1Hz: fit.f1Hz, inharmonicityB: fit.inharmonicityB, partialsUsed: fit.partialsUsed });
   fillApplyInputs(false);
   drawMeasured();
 }
@@ -173,6 +183,7 @@ async function init() {
   state.panel = panel;
   state.t = texts(panel);
   role(panel, 'upload').addEventListener('submit', onSubmit);
+  mountMicrophone(panel.querySelector('[data-mic]'), { onRecording: analyseFile });
   role(panel, 'apply').addEventListener('click', onApply);
   for (const name of ['tension', 'length', 'diameter']) {
     role(panel, name).addEventListener('input', (e) => { e.target.dataset.auto = 'false'; preview(); });

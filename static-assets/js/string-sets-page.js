@@ -8,6 +8,8 @@ import { createRequestLoop, formView } from './common/request-loop.js';
 import { pageText } from './common/text.js';
 import { showPanelFailure } from './common/panels.js';
 import { pitchHz } from './common/notes.js';
+import { drawNeck } from './strings/set-drawing.js';
+import { outerDiameterMm } from './strings/set-geometry.js';
 
 const form = document.getElementById('set-form');
 const $ = (id) => document.getElementById(id);
@@ -167,6 +169,7 @@ function render(request, response) {
     data: { labels, datasets: [{ kind: 'tension', label: t('tension'), data: tensions, totalN: response.totalTensionN, backgroundColor: colours }] },
     options,
   });
+  drawSet(request, response, tensions, digits);
   const setWarnings = $('set-warnings');
   setWarnings.replaceChildren(...(response.warnings || []).map((w) => {
     const li = document.createElement('li');
@@ -195,6 +198,36 @@ function render(request, response) {
     });
     tbody.append(tr);
   });
+}
+
+/**
+ * The set drawn across the nut and the neck (strings/set-drawing.js): gauges from the request as
+ * sent (mm), tensions, stress shares, levels and limits from the answer, figures in the user's units.
+ */
+function drawSet(request, response, tensions, digits) {
+  const force = io.units.force;
+  const lengthUnit = io.units.length;
+  const gaugeText = (mm) => (Number.isFinite(mm)
+    ? `${io.lengthOut(mm).toFixed(lengthUnit === 'mm' ? 3 : 4)} ${lengthUnit === 'mm' ? 'mm' : 'in'}` : '—');
+  drawNeck($('set-drawing'), {
+    strings: response.strings.map((s, i) => {
+      const member = request.strings[i] ?? {};
+      const outer = outerDiameterMm(member);
+      return {
+        label: rows()[i]?.querySelector('.target').value || '',
+        outerMm: outer,
+        wound: member.wrapDiameterMm != null,
+        gaugeText: gaugeText(outer),
+        tensionN: s.tensionN,
+        tensionText: `${tensions[i].toFixed(digits)} ${force}`,
+        stressFraction: s.stressFraction,
+        stressLevel: s.stressLevel,
+      };
+    }),
+    totalText: `${io.forceOut(response.totalTensionN).toFixed(digits)} ${force}`,
+    limits: response.stressLimits ?? null,
+    tensionScaleText: (n) => `${io.forceOut(n).toFixed(force === 'N' ? 0 : 1)} ${force}`,
+  }, t);
 }
 
 const loop = createRequestLoop({
@@ -247,4 +280,5 @@ async function start() {
   await analyze();
 }
 
+window.addEventListener('resize', () => { if (loop.last) render(loop.last.request, loop.last.response); });
 start();

@@ -86,6 +86,19 @@ export class BoreEditor {
     this.onChange();
   }
 
+  /**
+   * Values set on the drawing (a dragged joint, diameter or hole): targets [{list: 'segments' |
+   * 'holes', index, field}] all take valueMm; the rows show it in the unit chosen.
+   */
+  setValues(targets, valueMm) {
+    for (const { list, index, field } of targets) {
+      const row = (list === 'holes' ? this.holes : this.segments)[index];
+      if (row && row[field]) row[field] = cell(valueMm, this.unit);
+    }
+    this.render();
+    this.onChange();
+  }
+
   toggleHole(index) {
     if (!this.holes[index]) return;
     this.holes[index].open = !this.holes[index].open;

@@ -2,33 +2,73 @@
 // has them, shown numbered from 1 nearest the input end), names a target (a note such as D5, or
 // hertz) and the register it should sound in. The server predicts each fingering's pitch; each row
 // then shows it and its cents from the target against a tolerance.
+// Two views of the same rows: the cards (each fingering drawn as the bore's own hole pattern,
+// fingering-cards.js), the first view, and the table, the secondary one; both edit the rows.
 import { fmt, parseNumber } from '../common/units.js';
+import { keepFocus } from '../common/keep-focus.js';
 import { cents, nearestNote, targetHz } from './tuning.js';
+import { drawCards } from './fingering-cards.js';
 import { t } from './text.js';
 
 export class FingeringTable {
-  constructor({ body, onChange, onApply }) {
+  constructor({ body, cards, onChange, onApply }) {
     this.body = body;
+    this.cards = cards ?? null;
     this.onChange = onChange;
     this.onApply = onApply;
     this.rows = [];
     this.holeCount = 0;
     this.predictions = [];
-    body.addEventListener('input', (e) => this.#typed(e));
-    body.addEventListener('change', (e) => this.#changed(e));
-    body.addEventListener('click', (e) => {
-      const apply = e.target.closest('button[data-action=apply]');
-      if (apply) {
-        this.onApply?.(this.rows[Number(apply.dataset.row)].closedHoles);
-        return;
+    this.bore = { segments: [], holes: [] };
+    for (const view of [body, this.cards].filter(Boolean)) {
+      view.addEventListener('input', (e) => this.#typed(e));
+      view.addEventListener('change', (e) => this.#changed(e));
+      view.addEventListener('click', (e) => this.#clicked(e));
+    }
+    this.cards?.addEventListener('keydown', (e) => {
+      const hole = e.target.closest('[data-action=toggle]');
+      if (hole && (e.key === 'Enter' || e.key === ' ')) {
+        e.preventDefault();
+        this.#toggle(Number(hole.dataset.row), Number(hole.dataset.hole));
       }
-      const b = e.target.closest('button[data-action=remove]');
-      if (!b) return;
-      this.rows.splice(Number(b.dataset.row), 1);
-      this.predictions = [];
-      this.render();
-      this.onChange();
     });
+  }
+
+  #clicked(e) {
+    const hole = e.target.closest('[data-action=toggle]');
+    if (hole) {
+      this.#toggle(Number(hole.dataset.row), Number(hole.dataset.hole));
+      return;
+    }
+    const apply = e.target.closest('button[data-action=apply]');
+    if (apply) {
+      this.onApply?.(this.rows[Number(apply.dataset.row)].closedHoles);
+      return;
+    }
+    const b = e.target.closest('button[data-action=remove]');
+    if (!b) return;
+    this.rows.splice(Number(b.dataset.row), 1);
+    this.predictions = [];
+    this.render();
+    this.onChange();
+  }
+
+  /** Closes an open hole of a fingering or opens a closed one (a click on its card's drawing). */
+  #toggle(row, hole) {
+    const r = this.rows[row];
+    if (!r || !(hole < this.holeCount)) return;
+    r.closedHoles = r.closedHoles.includes(hole) ? r.closedHoles.filter((x) => x !== hole)
+      : [...r.closedHoles, hole].sort((a, b) => a - b);
+    // The old prediction no longer belongs to this fingering: the card shows it waiting.
+    if (this.predictions[row]) this.predictions[row] = { ...this.predictions[row], pending: true };
+    this.render();
+    this.onChange();
+  }
+
+  /** The bore the cards draw (request lists in mm); only the cards are drawn again. */
+  setBore(segments, holes) {
+    this.bore = { segments, holes };
+    this.#drawCards();
   }
 
   /** Rows from the request's fingerings: {name, closedHoles (0-based), targetNote | targetHz, register}. */
@@ -83,7 +123,32 @@ export class FingeringTable {
   }
 
   render() {
-    this.body.replaceChildren(...this.rows.map((r, i) => this.#row(r, i)));
+    keepFocus(this.body, () => this.body.replaceChildren(...this.rows.map((r, i) => this.#row(r, i))));
+    this.#drawCards();
+  }
+
+  #drawCards() {
+    if (!this.cards) return;
+    keepFocus(this.cards, () => drawCards(this.cards, {
+      rows: this.rows, holeCount: this.holeCount, bore: this.bore, tolerance: this.tolerance ?? 10,
+      judge: (i) => this.judge(i),
+    }));
+  }
+
+  /**
+   * A fingering's reading: the predicted Hz, the note it sounds, its cents from the target and
+   * the verdict against the tolerance; null without a prediction (undefined before any answer).
+   */
+  judge(i) {
+    const p = this.predictions[i];
+    if (p === undefined) return undefined;
+    const r = this.rows[i];
+    const hz = p?.frequencyHz ?? null;
+    const goal = p?.targetHz ?? targetHz(r.target, this.a4 ?? 440);
+    if (!hz || !goal) return null;
+    const c = p.centsFromTarget ?? cents(hz, goal);
+    const note = p.note ?? nearestNote(hz, this.a4 ?? 440);
+    return { hz, note, cents: c, pending: Boolean(p.pending), ...verdict(c, this.tolerance ?? 10) };
   }
 
   #row(r, i) {
@@ -123,21 +188,16 @@ export class FingeringTable {
     reg.dataset.key = 'register'; reg.dataset.row = String(i); reg.dataset.field = `fingerings[${i}].register`;
     for (let k = 1; k <= 4; k++) reg.append(new Option(String(k), String(k), false, k === r.register));
     td(reg);
-    const p = this.predictions[i];
-    const hz = p?.frequencyHz ?? null;
-    const goal = p?.targetHz ?? targetHz(r.target, this.a4 ?? 440);
-    if (hz && goal) {
-      const c = p.centsFromTarget ?? cents(hz, goal);
-      const note = p.note ?? nearestNote(hz, this.a4 ?? 440);
-      const { cls, word } = verdict(c, this.tolerance ?? 10);
-      td(fmt(hz, 1), 'predicted');
-      td(`${note.name} ${signed(note.centsOff)}`);
-      td(signed(c), `cents ${cls}`);
-      td(word, `verdict ${cls}`);
-      tr.classList.add(cls);
+    const j = this.judge(i);
+    if (j) {
+      td(fmt(j.hz, 1), 'predicted');
+      td(`${j.note.name} ${signed(j.note.centsOff)}`);
+      td(signed(j.cents), `cents ${j.cls}`);
+      td(j.word, `verdict ${j.cls}`);
+      tr.classList.add(j.cls);
     } else {
       td('—', 'predicted'); td('—'); td('—', 'cents');
-      td(p === undefined ? '' : t('noPrediction'), 'verdict');
+      td(j === undefined ? '' : t('noPrediction'), 'verdict');
     }
     const apply = document.createElement('button');
     apply.type = 'button'; apply.className = 'secondary tiny apply'; apply.dataset.action = 'apply'; apply.dataset.row = String(i);
@@ -153,8 +213,10 @@ export class FingeringTable {
   #typed(e) {
     const key = e.target.dataset.key;
     if (key !== 'name' && key !== 'target') return;
-    this.rows[Number(e.target.dataset.row)][key] = e.target.value;
-    if (key === 'target') e.target.dataset.field = targetField(e.target.value, Number(e.target.dataset.row));
+    const row = Number(e.target.dataset.row);
+    this.rows[row][key] = e.target.value;
+    if (key === 'target') e.target.dataset.field = targetField(e.target.value, row);
+    this.#mirror(e.target, row, key);
     this.onChange();
   }
 
@@ -164,10 +226,25 @@ export class FingeringTable {
     if (e.target.dataset.hole) {
       const h = Number(e.target.dataset.hole);
       row.closedHoles = e.target.checked ? [...new Set([...row.closedHoles, h])].sort((a, b) => a - b) : row.closedHoles.filter((x) => x !== h);
+      this.#drawCards();
       this.onChange();
     } else if (e.target.dataset.key === 'register') {
       row.register = Number(e.target.value);
+      this.#mirror(e.target, Number(e.target.dataset.row), 'register');
+      this.#drawCards();
       this.onChange();
+    }
+  }
+
+  /** The same row's same input in the other view takes the value typed in this one. */
+  #mirror(source, row, key) {
+    for (const view of [this.body, this.cards].filter(Boolean)) {
+      if (view.contains(source)) continue;
+      const twin = view.querySelector(`[data-key="${key}"][data-row="${row}"]`);
+      if (twin) {
+        twin.value = source.value;
+        if (key === 'target') twin.dataset.field = targetField(source.value, row);
+      }
     }
   }
 }
@@ -179,12 +256,12 @@ function parseHz(text) {
 }
 
 /** The request field a target goes to, so that the server's message lands on this input. */
-const targetField = (text, i) => {
+export const targetField = (text, i) => {
   const s = String(text ?? '').trim();
   return `fingerings[${i}].${s === '' || parseHz(s) !== null ? 'targetHz' : 'targetNote'}`;
 };
 
-const signed = (c) => `${c >= 0 ? '+' : '−'}${Math.abs(c).toFixed(1)}`;
+export const signed = (c) => `${c >= 0 ? '+' : '−'}${Math.abs(c).toFixed(1)}`;
 
 /** Our own labels: within the tolerance "in tune"; up to three tolerances "sharp"/"flat"; beyond, "far". */
 export function verdict(c, tolerance) {

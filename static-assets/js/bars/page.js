@@ -11,6 +11,7 @@ import { parseNumber, toMm, fromMm, problemInUserUnits } from '../common/units.j
 import { PRESETS } from './presets.js';
 import { tapPartials, playTap, LOSS_FACTOR, MAX_SECONDS } from './listen.js';
 import { parseRatios, ratioOffsets } from './targets.js';
+import { mountMicrophone } from '../common/microphone.js';
 
 const t = pageText('#bar-texts');
 const form = document.getElementById('bar-form');
@@ -426,12 +427,19 @@ async function fitRecording() {
     $('blank-problem').textContent = t('blank.noFile');
     return;
   }
+  await fitFile(file);
+}
+
+/** The blank's recording (uploaded, or heard through the microphone) fitted with the bar as it stands. */
+async function fitFile(file) {
   const { request } = buildRequest();
   const data = new FormData();
   data.append('file', file);
   data.append('bar', new Blob([JSON.stringify(request)], { type: 'application/json' }));
   const query = new URLSearchParams({ fitShear: String($('blank-shear').checked) });
-  showFit(await postForm(`/api/v1/bars/measure-blank/recording?${query}`, data));
+  const res = await postForm(`/api/v1/bars/measure-blank/recording?${query}`, data);
+  showFit(res);
+  return res.ok;
 }
 
 function applyFit() {
@@ -477,6 +485,7 @@ async function start() {
   $('blank-fit').addEventListener('click', fitTyped);
   $('blank-fit-recording').addEventListener('click', fitRecording);
   $('blank-apply').addEventListener('click', applyFit);
+  mountMicrophone(document.querySelector('#bar-blank [data-mic]'), { onRecording: fitFile });
   writeLength($('solver-min'), 4);
   writeLength($('solver-flat'), 60);
   setParameters(PRESETS.marimba);

@@ -31,10 +31,13 @@ export function format(message, ...args) {
   return String(message ?? '').replace(/\{(\d+)\}/g, (m, i) => (args[i] === undefined ? m : String(args[i])));
 }
 
+/** A saved time in the user's locale and time zone (the browser's Intl.DateTimeFormat). */
+const LOCAL_TIME = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium', timeStyle: 'short' });
+
 export function localTime(iso) {
   if (!iso) return '';
   const d = new Date(iso);
-  return Number.isNaN(d.getTime()) ? String(iso) : d.toLocaleString();
+  return Number.isNaN(d.getTime()) ? String(iso) : LOCAL_TIME.format(d);
 }
 
 function el(tag, attrs = {}, text) {

@@ -1,9 +1,11 @@
-// Measure the plate: a rectangular sample's size, mass and tap frequencies (typed, or the peaks of a WAV through
+// Measure the plate: a rectangular sample's size, mass and tap frequencies (typed, or the peaks of a WAV, uploaded or
+// heard through the microphone, through
 // POST /api/v1/measurements/peaks) to its fitted constants (POST /api/v1/plates/measure), which the maker can then
 // use for the plate on the bench.
 import { clearFieldErrors, postForm, postJson, showFieldErrors } from '../common/api.js';
 import { parseNumber } from '../common/units.js';
 import { pageText } from '../common/text.js';
+import { mountMicrophone } from '../common/microphone.js';
 
 const $ = (id) => document.getElementById(id);
 const t = pageText('#plate-text', 'plates.js.');
@@ -23,8 +25,8 @@ function say(problem) {
   $('measure-problem').textContent = unclaimed.length ? unclaimed.join('; ') : (problem?.errors?.length ? '' : problem?.detail || '');
 }
 
-async function readRecording() {
-  const file = $('measure-wav').files[0];
+/** The peaks of a tap recording (the file chosen, or one heard through the microphone); false when refused. */
+async function readRecording(file = $('measure-wav').files[0]) {
   if (!file) return true;
   const data = new FormData();
   data.append('file', file);
@@ -76,19 +78,22 @@ function show(r) {
   document.dispatchEvent(new CustomEvent('nodewright:plate-measured', { detail: r }));
 }
 
-async function fit(event) {
-  event.preventDefault();
+async function fit(event, file) {
+  event?.preventDefault();
   clearFieldErrors($('measure-form'));
   $('measure-problem').textContent = '';
-  if (!(await readRecording())) return;
+  if (!(await readRecording(file))) return false;
   const answer = await postJson('/api/v1/plates/measure', request());
-  if (!answer.ok) { say(answer.problem); return; }
+  if (!answer.ok) { say(answer.problem); return false; }
   show(answer.data);
+  return true;
 }
 
 export function mountMeasure(api) {
   state.api = api;
-  $('measure-form').addEventListener('submit', fit);
+  $('measure-form').addEventListener('submit', (e) => fit(e));
+  // A tap heard through the microphone is fitted at once, as a chosen file is on "Fit".
+  mountMicrophone($('measure-form').querySelector('[data-mic]'), { onRecording: (file) => fit(null, file) });
   $('measure-wav').addEventListener('change', () => { state.peaks = null; $('measure-peaks').textContent = ''; });
   $('measure-apply').addEventListener('click', () => {
     const r = state.result;

@@ -4,7 +4,10 @@
 import { clearFieldErrors, getJson, postJson, sendJson } from '../common/api.js';
 import { fmt } from '../common/units.js';
 import { OPEN_AIR_COLUMN, BORE_FOR_TEMPLATES, handOver, handedOver } from '../common/handover.js';
-import { $, t, num, hz as typedHz, postForBlob, showProblem, say, showImage, download } from './shared.js';
+import { $, t, num, postForBlob, showProblem, say, showImage, download } from './shared.js';
+import {
+  fingeringLines, parseFingeringLines, parseMeasuredLines, blankTubeBody, calibrationBody, mouthMoves,
+} from './bore-lines.js';
 
 
 const POLL_MS = 200;
@@ -20,32 +23,10 @@ function readBore() {
   }
 }
 
-/** Fingerings as text lines; holes shown from 1 (the API counts closedHoles from 0). */
-function fingeringLines(fingerings) {
-  return fingerings.map((f) => `${f.name}, ${f.targetNote ?? f.targetHz}, ${(f.closedHoles || []).map((h) => h + 1).join(' ')}${(f.register ?? 1) > 1 ? `, ${f.register}` : ''}`).join('\n');
-}
-
 /** The fingering lines as the API's fingerings (closedHoles from 0). */
 function readFingerings() {
-  const rows = [];
-  const problems = [];
-  $('fingering-lines').value.split('\n').forEach((line, i) => {
-    if (!line.trim()) return;
-    const parts = line.split(',').map((s) => s.trim());
-    const closed = (parts[2] ?? '').split(/\s+/).filter(Boolean).map(Number);
-    const register = parts[3] ? Number(parts[3]) : 1;
-    if (parts.length < 2 || !parts[0] || !parts[1] || closed.some((n) => !Number.isInteger(n) || n < 1)
-      || !Number.isInteger(register) || register < 1) {
-      problems.push({ field: 'fingerings', message: t('badLine', i + 1) });
-      return;
-    }
-    const hz = typedHz(parts[1]);
-    rows.push({
-      name: parts[0], closedHoles: closed.map((n) => n - 1),
-      ...(Number.isFinite(hz) ? { targetHz: hz } : { targetNote: parts[1] }), register,
-    });
-  });
-  return { rows, problems };
+  const { rows, bad } = parseFingeringLines($('fingering-lines').value);
+  return { rows, problems: bad.map((line) => ({ field: 'fingerings', message: t('badLine', line) })) };
 }
 
 function limits() {
@@ -183,8 +164,9 @@ function finish(job) {
   }
   const r = job.kind === 'blank-tube' ? job.result.solution : job.result;
   if (job.kind === 'blank-tube') {
-    $('blank-first').textContent = t('firstLayout', fmt(job.result.firstLayout.worstCents, 1),
-      job.result.chosenStart + 1, job.result.starts.length);
+    const moves = mouthMoves(job.result).map((m) => t('mouthMoved', m.field, fmt(m.startMm, 2), fmt(m.solvedMm, 2)));
+    $('blank-first').textContent = [t('firstLayout', fmt(job.result.firstLayout.worstCents, 1),
+      job.result.chosenStart + 1, job.result.starts.length), ...moves].join(' ');
   }
   state.result = r;
   $('solve-state').textContent = r.withinTolerance ? t('succeeded', fmt(job.elapsedSeconds, 2), fmt(r.toleranceCents, 2))
@@ -270,6 +252,9 @@ async function loadBlank() {
   $('min-wall').value = l.minWallMm;
   $('vary-foot').checked = l.varyFoot !== false;
   $('vary-diameters').checked = l.varyDiameters !== false;
+  const m = d.mouthLimits || {};
+  $('blank-vary-headspace').checked = !!m.varyHeadspace;
+  $('blank-vary-window').checked = !!m.varyWindowLength;
 }
 
 function solveBlank() {
@@ -282,45 +267,45 @@ function solveBlank() {
     showProblem(borePanel, $('bore-message'), { errors: [...(problem ? problem.errors : []), ...f.problems] });
     return;
   }
-  const blank = { ...bore };
-  delete blank.holes;
-  startJob('/api/v1/inverse/blank-tube', { bore: blank, holeCount: count, chimneyMm: chimney, fingerings: f.rows, limits: limits() });
+  startJob('/api/v1/inverse/blank-tube', blankTubeBody(bore, {
+    holeCount: count, chimneyMm: chimney, fingerings: f.rows, limits: limits(),
+    varyHeadspace: $('blank-vary-headspace').checked, varyWindowLength: $('blank-vary-window').checked,
+  }));
 }
 
 /** Measured lines "name, pitch" as the API's measured list (the pitch in Hz or as a note). */
-function readMeasured() {
-  const rows = [];
-  const problems = [];
-  $('measured-lines').value.split('\n').forEach((line, i) => {
-    if (!line.trim()) return;
-    const parts = line.split(',').map((s) => s.trim());
-    const hz = parts[1] ? typedHz(parts[1]) : NaN;
-    if (!parts[0] || !Number.isFinite(hz)) {
-      problems.push({ field: 'measured', message: t('badLine', i + 1) });
-      return;
-    }
-    rows.push({ fingering: parts[0], measuredHz: hz });
-  });
-  return { rows, problems };
+function readMeasured(bore) {
+  const { rows, bad } = parseMeasuredLines($('measured-lines').value, bore && bore.referenceA4Hz);
+  return { rows, problems: bad.map((line) => ({ field: 'measured', message: t('badLine', line) })) };
 }
 
-function calibrate() {
+/** The chosen impedance file's text, or null when none is chosen. */
+function impedanceText() {
+  const file = $('calib-impedance').files[0];
+  return file ? file.text() : Promise.resolve(null);
+}
+
+async function calibrate() {
   clearFieldErrors(borePanel);
   const { bore, problem } = readBore();
   const f = readFingerings();
-  const m = readMeasured();
+  const m = readMeasured(bore);
   if (problem || f.problems.length || m.problems.length) {
     showProblem(borePanel, $('bore-message'), { errors: [...(problem ? problem.errors : []), ...f.problems, ...m.problems] });
     return;
   }
-  startJob('/api/v1/inverse/calibration', { bore: { ...bore, fingerings: f.rows }, measured: m.rows, fit: [$('calib-fit').value] });
+  const csv = await impedanceText();
+  startJob('/api/v1/inverse/calibration', calibrationBody(bore, f.rows, m.rows, $('calib-fit').value,
+    csv === null ? null : { csv, fingering: $('calib-impedance-fingering').value }));
 }
 
 function showCalibration(r) {
   state.calibration = r;
   const p = r.parameters[0];
-  $('calib-values').textContent = t('calibrated', p.field, fmt(p.fittedValue, 3), p.unit, fmt(p.startValue, 3),
-    fmt(r.rmsCentsBefore, 2), fmt(r.rmsCentsAfter, 2));
+  const peaks = (r.impedancePeaks || []).map((k) => (k.used ? t('peakUsed', k.n, fmt(k.measuredHz, 2))
+    : t('peakUnused', k.n, fmt(k.measuredHz, 2), k.reason)));
+  $('calib-values').textContent = [t('calibrated', p.field, fmt(p.fittedValue, 3), p.unit, fmt(p.startValue, 3),
+    fmt(r.rmsCentsBefore, 2), fmt(r.rmsCentsAfter, 2)), ...peaks].join(' ');
   const rows = $('calib-rows');
   rows.replaceChildren();
   r.notes.forEach((n) => {

@@ -26,13 +26,18 @@ class BlankTubeIT extends BrowserTestBase {
         waitFor(By.id("blank-demo")).click();
         wait.until(d -> String.valueOf(js("return document.getElementById('bore-json').value")).contains("\"window\""));
         assertThat(String.valueOf(js("return document.getElementById('fingering-lines').value"))).contains("D6").contains(", 2");
+        // the workshop blank lets the headspace move with the holes
+        assertThat(js("return document.getElementById('blank-vary-headspace').checked")).isEqualTo(true);
         driver.findElement(By.id("blank-solve")).click();
         waitForJob();
         @SuppressWarnings("unchecked")
         List<String> cents = (List<String>) js(
                 "return [...document.querySelectorAll('#note-rows tr')].map(r => r.dataset.cents)");
         assertThat(cents).hasSize(13);
-        assertThat(String.valueOf(js("return document.getElementById('blank-first').textContent"))).contains("cents");
+        assertThat(String.valueOf(js("return document.getElementById('blank-first').textContent"))).contains("cents")
+                .contains("mouth.headspaceMm");
+        // every note of both registers within the 3 cents asked for (by the tool's own model)
+        assertThat(cents).allSatisfy(c -> assertThat(Math.abs(Double.parseDouble(c))).isLessThanOrEqualTo(3.0));
         @SuppressWarnings("unchecked")
         List<Object> holes = (List<Object>) js("return [...document.querySelectorAll('#hole-rows tr')]"
                 + ".map(r => Number(r.children[1].textContent))");
@@ -41,6 +46,8 @@ class BlankTubeIT extends BrowserTestBase {
         driver.findElement(By.id("solve-apply")).click();
         assertThat(((Number) js("return JSON.parse(document.getElementById('bore-json').value).holes.length")).intValue())
                 .isEqualTo(6);
+        assertThat(((Number) js("return JSON.parse(document.getElementById('bore-json').value).mouth.headspaceMm"))
+                .doubleValue()).isPositive();
     }
 
     @Test

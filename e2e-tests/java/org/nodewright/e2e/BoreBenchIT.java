@@ -184,6 +184,8 @@ class BoreBenchIT extends BrowserTestBase {
         waitForAnalysisAfter(beforeWhistle);
         wait.until(d -> analyzed().equals(js("return document.querySelector('main.air-bench').dataset.fingeringsReady")));
         assertThat(driver.findElements(By.cssSelector("#hole-rows tr"))).hasSize(6);
+        // The table is the secondary view of the fingerings now (the cards come first): open it.
+        openFingeringTable();
         List<WebElement> rows = driver.findElements(By.cssSelector("#fingering-rows tr"));
         assertThat(rows).hasSize(9);
         for (WebElement row : rows) {
@@ -273,6 +275,7 @@ class BoreBenchIT extends BrowserTestBase {
         new Select(driver.findElement(By.id("preset-select"))).selectByValue("stopped-pipe");
         waitForAnalysisAfter(before);
         driver.findElement(By.id("add-fingering")).click();
+        openFingeringTable();
         type(driver.findElement(By.cssSelector("#fingering-rows tr:nth-child(1) input[data-key='target']")), "C#4");
         type(driver.findElement(By.id("temperature")), "28");
         String changed = analyzed();
@@ -290,6 +293,7 @@ class BoreBenchIT extends BrowserTestBase {
         assertThat(driver.findElements(By.cssSelector("#hole-rows tr"))).isEmpty();
         assertThat(driver.findElement(By.cssSelector("#fingering-rows tr:nth-child(1) input[data-key='target']"))
                 .getDomProperty("value")).isEqualTo("C#4");
+        openFingeringTable();
         wait.until(d -> !driver.findElements(By.cssSelector("#fingering-rows tr:nth-child(1) td.predicted")).isEmpty()
                 && driver.findElement(By.cssSelector("#fingering-rows tr:nth-child(1) td.predicted")).getText().matches("\\d+\\.\\d"));
         fullPageScreenshot("bore-bench-saved-design");
@@ -326,6 +330,14 @@ class BoreBenchIT extends BrowserTestBase {
         driver.manage().window().setSize(before);
     }
 
+    /** Opens the fingering table (a collapsible view under the fingering cards) with its summary, as a user would. */
+    private void openFingeringTable() {
+        if (!Boolean.TRUE.equals(js("return document.getElementById('fingering-table-view').open"))) {
+            driver.findElement(By.cssSelector("#fingering-table-view > summary")).click();
+        }
+        wait.until(d -> Boolean.TRUE.equals(js("return document.getElementById('fingering-table-view').open")));
+    }
+
     /** Clears the editor down to one cylinder of the given length and bore, in millimetres. */
     private void buildCylinder(double lengthMm, double boreMm) {
         new Select(driver.findElement(By.id("units"))).selectByValue("mm");
@@ -336,8 +348,9 @@ class BoreBenchIT extends BrowserTestBase {
         while (!driver.findElements(By.cssSelector("#segment-rows button.remove")).isEmpty()) {
             driver.findElement(By.cssSelector("#segment-rows button.remove")).click();
         }
-        while (!driver.findElements(By.cssSelector("#fingering-rows button.remove")).isEmpty()) {
-            driver.findElement(By.cssSelector("#fingering-rows button.remove")).click();
+        // Fingerings are removed on their cards (the table of them is folded away).
+        while (!driver.findElements(By.cssSelector("#fingering-cards button.remove")).isEmpty()) {
+            driver.findElement(By.cssSelector("#fingering-cards button.remove")).click();
         }
         driver.findElement(By.id("add-segment")).click();
         type(field("segments[0].lengthMm"), plain(lengthMm));

@@ -48,7 +48,7 @@ public abstract class BrowserTestBase {
 
     @BeforeEach
     void startBrowser() throws IOException {
-        driver = newBrowser(https());
+        driver = newBrowser(https(), browserArguments());
         wait = new WebDriverWait(driver, Duration.ofSeconds(15));
     }
 
@@ -91,6 +91,11 @@ public abstract class BrowserTestBase {
         return false;
     }
 
+    /** Further Chromium switches for this class's browser (e.g. a fake microphone); none by default. */
+    protected List<String> browserArguments() throws IOException {
+        return List.of();
+    }
+
     /** A fresh headless Chromium with its own profile folder; callers quit it. */
     protected static WebDriver newBrowser() throws IOException {
         return newBrowser(false);
@@ -98,6 +103,11 @@ public abstract class BrowserTestBase {
 
     /** As {@link #newBrowser()}; {@code acceptSelfSigned} adds {@code --ignore-certificate-errors}. */
     protected static WebDriver newBrowser(boolean acceptSelfSigned) throws IOException {
+        return newBrowser(acceptSelfSigned, List.of());
+    }
+
+    /** As {@link #newBrowser(boolean)} with further Chromium switches. */
+    protected static WebDriver newBrowser(boolean acceptSelfSigned, List<String> arguments) throws IOException {
         String chromedriver = System.getProperty("nodewright.chromedriver", "/usr/bin/chromedriver");
         String chromium = System.getProperty("nodewright.chromium", "/usr/bin/chromium");
         ChromeDriverService service = new ChromeDriverService.Builder()
@@ -118,6 +128,7 @@ public abstract class BrowserTestBase {
             options.addArguments("--ignore-certificate-errors");
             options.setAcceptInsecureCerts(true);
         }
+        options.addArguments(arguments);
         return new ChromeDriver(service, options);
     }
 

@@ -179,14 +179,13 @@ class LibraryIT extends BrowserTestBase {
         WebElement differs = driver.findElement(By.cssSelector("#compare-table tr.differs"));
         assertThat(differs.getAttribute("data-path")).isEqualTo("tensionN");
         assertThat(differs.getText()).contains("70").contains("72.5");
-        // Both designs analysed by the string bench's endpoint: twelve partials each, in one chart.
-        wait.until(d -> chartData("compare-chart") != null);
+        // Both designs analysed by the string bench's endpoint: twelve partials' cents each and their difference.
+        wait.until(d -> chartData("compare-chart-partials") != null);
         @SuppressWarnings("unchecked")
         java.util.List<java.util.Map<String, Object>> datasets = (java.util.List<java.util.Map<String, Object>>)
-                ((java.util.Map<String, Object>) chartData("compare-chart")).get("datasets");
-        assertThat(datasets).hasSize(2);
-        assertThat((java.util.List<?>) datasets.get(0).get("data")).hasSize(12);
-        assertThat((java.util.List<?>) datasets.get(1).get("data")).hasSize(12);
+                ((java.util.Map<String, Object>) chartData("compare-chart-partials")).get("datasets");
+        assertThat(datasets).extracting(ds -> ds.get("kind")).containsExactly("a", "b", "difference");
+        assertThat(datasets).allSatisfy(ds -> assertThat((java.util.List<?>) ds.get("data")).hasSize(12));
         screenshot("library-compare");
     }
 

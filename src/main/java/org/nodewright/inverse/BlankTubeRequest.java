@@ -34,7 +34,29 @@ record BlankTubeRequest(
         @Size(min = 1, max = MAX_STARTS) List<@NotNull @Finite @Positive @DecimalMax("2000") Double> startDiametersMm,
         @Valid ToneHoleSolveRequest.Limits limits,
         @Finite @DecimalMin("0.01") @DecimalMax("50") Double toleranceCents,
-        @Min(1) @Max(5000) Integer maxEvaluationsPerStart) implements CrossFieldChecked.Rules {
+        @Min(1) @Max(5000) Integer maxEvaluationsPerStart,
+        @Valid MouthLimits mouthLimits) implements CrossFieldChecked.Rules {
+
+    /**
+     * Whether the solve may also move the player's end, and within what: the headspace (a window's
+     * or an embouchure's; default 0 mm up to the bore's input diameter, or the given headspace if
+     * longer) and a window's length along the bore (default 50 %..150 % of the given length). Bounds
+     * only count with their {@code vary} switch on.
+     */
+    record MouthLimits(
+            Boolean varyHeadspace,
+            @Finite @PositiveOrZero @DecimalMax("2000") Double minHeadspaceMm,
+            @Finite @PositiveOrZero @DecimalMax("2000") Double maxHeadspaceMm,
+            Boolean varyWindowLength,
+            @Finite @Positive @DecimalMax("500") Double minWindowLengthMm,
+            @Finite @Positive @DecimalMax("500") Double maxWindowLengthMm) {
+    }
+
+    /** The same request with other mouth limits (the demo's, a test's). */
+    BlankTubeRequest withMouthLimits(MouthLimits m) {
+        return new BlankTubeRequest(bore, holeCount, chimneyMm, fingerings, startDiametersMm, limits, toleranceCents,
+                maxEvaluationsPerStart, m);
+    }
 
     static final int MAX_HOLES = 16;
     static final int MAX_STARTS = 8;
@@ -60,6 +82,7 @@ record BlankTubeRequest(
             AirColumnRules.fingerings(out, "", fingerings, holeCount);
         }
         BlankTubeSetup.problems(out, this);
+        BlankTubeSetup.mouthProblems(out, this);
         return out;
     }
 

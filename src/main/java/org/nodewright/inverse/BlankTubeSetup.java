@@ -10,7 +10,10 @@ import org.nodewright.physics.aircolumn.InputEnd;
 import org.nodewright.physics.aircolumn.OutputEnd;
 import org.nodewright.physics.inverse.AirCoreFrequencyModel;
 import org.nodewright.physics.inverse.FirstLayout;
+import org.nodewright.physics.aircolumn.MouthKind;
 import org.nodewright.physics.inverse.HoleLayout;
+import org.nodewright.physics.inverse.ModelFreedom;
+import org.nodewright.physics.inverse.MouthFreedom;
 import org.nodewright.physics.inverse.SolverLimits;
 import org.nodewright.web.BadRequestException;
 import org.nodewright.web.FieldProblem;
@@ -21,7 +24,7 @@ import org.nodewright.web.FieldProblem;
  * blank as the closed form sees it, the limits and the starting diameters.
  */
 record BlankTubeSetup(AirColumnRequest bore, AirCoreFrequencyModel model, FirstLayout.Tube tube, double[] chimneysMm,
-        List<Fingering> fingerings, SolverLimits limits, double[] startDiametersMm) {
+        List<Fingering> fingerings, SolverLimits limits, double[] startDiametersMm, ModelFreedom freedom) {
 
     /** Levine &amp; Schwinger 1948: end correction 0.6133 a of an unflanged pipe at low ka. */
     static final double UNFLANGED_END = 0.6133;
@@ -64,6 +67,81 @@ record BlankTubeSetup(AirColumnRequest bore, AirCoreFrequencyModel model, FirstL
                     out.add(new FieldProblem("startDiametersMm[" + i + "]", "must lie within the diameter limits ("
                             + b.minDiameterMm() + ".." + b.maxDiameterMm() + " mm)"));
                 }
+            }
+        }
+    }
+
+    /** The headspace's bounds (mm) when it may move, else null; defaults in {@link BlankTubeRequest.MouthLimits}. */
+    static MouthFreedom.Range headspaceRange(BlankTubeRequest r) {
+        BlankTubeRequest.MouthLimits m = r.mouthLimits();
+        if (m == null || !Boolean.TRUE.equals(m.varyHeadspace())) {
+            return null;
+        }
+        AirColumnRequest.MouthSpec mouth = r.bore().mouth();
+        double given = mouth == null || mouth.headspaceMm() == null ? 0 : mouth.headspaceMm();
+        double input = r.bore().segments().get(0).inputDiameterMm();
+        return new MouthFreedom.Range(m.minHeadspaceMm() == null ? 0 : m.minHeadspaceMm(),
+                m.maxHeadspaceMm() == null ? Math.max(given, input) : m.maxHeadspaceMm());
+    }
+
+    /** The window length's bounds (mm) when it may move, else null. */
+    static MouthFreedom.Range windowRange(BlankTubeRequest r) {
+        BlankTubeRequest.MouthLimits m = r.mouthLimits();
+        if (m == null || !Boolean.TRUE.equals(m.varyWindowLength())) {
+            return null;
+        }
+        double given = r.bore().mouth().windowLengthMm();
+        return new MouthFreedom.Range(m.minWindowLengthMm() == null ? 0.5 * given : m.minWindowLengthMm(),
+                m.maxWindowLengthMm() == null ? 1.5 * given : m.maxWindowLengthMm());
+    }
+
+    /** The mouth limits against the bore's mouth: what may move must exist, bounds must hold the given figure. */
+    static void mouthProblems(List<FieldProblem> out, BlankTubeRequest r) {
+        BlankTubeRequest.MouthLimits m = r.mouthLimits();
+        if (m == null) {
+            return;
+        }
+        AirColumnRequest.MouthSpec mouth = r.bore().mouth();
+        MouthKind kind = mouth == null ? null : mouth.kind();
+        boolean head = Boolean.TRUE.equals(m.varyHeadspace());
+        boolean window = Boolean.TRUE.equals(m.varyWindowLength());
+        if (!head && (m.minHeadspaceMm() != null || m.maxHeadspaceMm() != null)) {
+            out.add(new FieldProblem("mouthLimits.varyHeadspace", "set it to true for the headspace bounds to count"));
+        }
+        if (!window && (m.minWindowLengthMm() != null || m.maxWindowLengthMm() != null)) {
+            out.add(new FieldProblem("mouthLimits.varyWindowLength", "set it to true for the window bounds to count"));
+        }
+        if (head && kind != MouthKind.WINDOW && kind != MouthKind.EMBOUCHURE) {
+            out.add(new FieldProblem("mouthLimits.varyHeadspace", "only a window or embouchure mouth has a headspace"
+                    + (kind == null ? "; the bore has no mouth" : "; the bore's mouth is " + kind)));
+            head = false;
+        }
+        if (window && kind != MouthKind.WINDOW) {
+            out.add(new FieldProblem("mouthLimits.varyWindowLength", "only a window mouth has a window length"
+                    + (kind == null ? "; the bore has no mouth" : "; the bore's mouth is " + kind)));
+            window = false;
+        }
+        if (!usable(r.bore())) {
+            return;
+        }
+        if (head) {
+            MouthFreedom.Range h = headspaceRange(r);
+            double given = mouth.headspaceMm() == null ? 0 : mouth.headspaceMm();
+            if (h.maxMm() < h.minMm()) {
+                out.add(new FieldProblem("mouthLimits.maxHeadspaceMm", "must not be below minHeadspaceMm (" + h.minMm() + ")"));
+            } else if (given < h.minMm() || given > h.maxMm()) {
+                out.add(new FieldProblem("mouthLimits.minHeadspaceMm", "the bore's headspace (" + given
+                        + " mm) must lie within minHeadspaceMm..maxHeadspaceMm"));
+            }
+        }
+        if (window && mouth.windowLengthMm() != null) {
+            MouthFreedom.Range w = windowRange(r);
+            if (w.maxMm() < w.minMm()) {
+                out.add(new FieldProblem("mouthLimits.maxWindowLengthMm", "must not be below minWindowLengthMm ("
+                        + w.minMm() + ")"));
+            } else if (mouth.windowLengthMm() < w.minMm() || mouth.windowLengthMm() > w.maxMm()) {
+                out.add(new FieldProblem("mouthLimits.minWindowLengthMm", "the window's length ("
+                        + mouth.windowLengthMm() + " mm) must lie within minWindowLengthMm..maxWindowLengthMm"));
             }
         }
     }
@@ -125,8 +203,9 @@ record BlankTubeSetup(AirColumnRequest bore, AirCoreFrequencyModel model, FirstL
                 ? r.startDiametersMm().stream().mapToDouble(Double::doubleValue).toArray()
                 : Arrays.stream(BlankTubeRequest.DEFAULT_START_FRACTIONS)
                         .map(f -> Math.min(b.maxDiameterMm(), Math.max(b.minDiameterMm(), f * diameter))).toArray();
-        return new BlankTubeSetup(bore, BoreMapping.model(bore), tube(blank, length, diameter), chimneys, fingerings,
-                b.toCore(), starts);
+        AirCoreFrequencyModel model = BoreMapping.model(bore);
+        return new BlankTubeSetup(bore, model, tube(blank, length, diameter), chimneys, fingerings,
+                b.toCore(), starts, MouthFreedom.of(model, headspaceRange(r), windowRange(r)));
     }
 
     /**

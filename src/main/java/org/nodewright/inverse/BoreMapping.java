@@ -6,6 +6,8 @@ import org.nodewright.aircolumns.AirColumnMapper;
 import org.nodewright.aircolumns.AirColumnRequest;
 import org.nodewright.physics.inverse.AirCoreFrequencyModel;
 import org.nodewright.physics.inverse.HoleLayout;
+import org.nodewright.physics.inverse.ModelFreedom;
+import org.nodewright.physics.inverse.MouthFreedom;
 import org.nodewright.physics.templates.ToneHoleTemplate;
 
 /** The bore bench's request (millimetres) to the template and solver cores, and back. */
@@ -46,6 +48,29 @@ public final class BoreMapping {
         return new AirCoreFrequencyModel(AirColumnMapper.segments(r), chimneys, r.inputEnd(), r.outputEnd(),
                 AirColumnMapper.air(r), r.lossesOrDefault(), AirColumnMapper.mouth(r.mouth()),
                 AirColumnMapper.breath(r.breath()));
+    }
+
+    /** The request with the player's end's figures a solve moved ({@code headspaceMm}, {@code windowLengthMm}). */
+    static AirColumnRequest withMouth(AirColumnRequest r, List<ModelFreedom.Change> changes) {
+        AirColumnRequest.MouthSpec m = r.mouth();
+        if (changes.isEmpty() || m == null) {
+            return r;
+        }
+        Double head = m.headspaceMm();
+        Double window = m.windowLengthMm();
+        for (ModelFreedom.Change c : changes) {
+            switch (c.name()) {
+                case MouthFreedom.HEADSPACE -> head = c.value();
+                case MouthFreedom.WINDOW_LENGTH -> window = c.value();
+                default -> throw new IllegalArgumentException("no mouth field " + c.name());
+            }
+        }
+        AirColumnRequest.MouthSpec moved = new AirColumnRequest.MouthSpec(m.kind(), m.holeDiameterMm(), m.holeLengthMm(),
+                m.holeWidthMm(), m.wallMm(), head, m.lipCoveragePct(), window, m.windowWidthMm(),
+                m.equivalentVolumeMm3(), m.cupVolumeMm3(), m.throatDiameterMm(), m.throatLengthMm());
+        return new AirColumnRequest(r.segments(), r.inputEnd(), r.outputEnd(), r.holes(), r.temperatureC(),
+                r.relativeHumidityPct(), r.losses(), r.fMinHz(), r.fMaxHz(), r.points(), r.referenceA4Hz(),
+                r.profileSamples(), r.fingerings(), moved, r.breath());
     }
 
     /** The request with the solved holes and foot: what "apply" hands back to the bore bench. */

@@ -13,7 +13,14 @@ import org.nodewright.physics.inverse.Calibrator;
  * the fitted values (to re-solve the holes with, or to open in the bore bench).
  */
 record CalibrationResult(List<Value> parameters, List<Note> notes, double rmsCentsBefore, double rmsCentsAfter,
-        double worstCentsAfter, int evaluations, AirColumnRequest bore) {
+        double worstCentsAfter, int evaluations, List<ImpedancePeak> impedancePeaks, AirColumnRequest bore) {
+
+    /**
+     * A resonance of the measured impedance: its number from the lowest, frequency and prominence,
+     * whether the fit used it (its note is then "impedance peak n"), and why not.
+     */
+    record ImpedancePeak(int n, double measuredHz, double prominenceDb, boolean used, String reason) {
+    }
 
     record Value(CalibrationParameter parameter, String field, String unit, double startValue, double fittedValue,
             double lower, double upper) {
@@ -24,7 +31,7 @@ record CalibrationResult(List<Value> parameters, List<Note> notes, double rmsCen
     }
 
     static CalibrationResult of(Calibrator.Fit fit, List<CalibrationSetup.Parameter> ps, List<Fingering> measured,
-            AirColumnRequest bore) {
+            AirColumnRequest bore, List<CalibrationSetup.Peak> peaks) {
         List<Value> values = new ArrayList<>();
         for (int i = 0; i < ps.size(); i++) {
             CalibrationSetup.Parameter p = ps.get(i);
@@ -38,6 +45,8 @@ record CalibrationResult(List<Value> parameters, List<Note> notes, double rmsCen
             worst = Math.max(worst, Math.abs(fit.after()[i]));
         }
         return new CalibrationResult(values, notes, fit.rmsBefore(), fit.rmsAfter(), worst, fit.evaluations(),
+                peaks.stream().map(p -> new ImpedancePeak(p.n(), p.measuredHz(), p.prominenceDb(), p.used(), p.note()))
+                        .toList(),
                 CalibrationSetup.with(bore, ps, fit.fitted()));
     }
 }

@@ -7,6 +7,13 @@ import org.nodewright.aircolumns.AirColumnRequest;
 import org.nodewright.physics.aircolumn.Fingering;
 import org.nodewright.physics.inverse.CalibrationParameter;
 import org.nodewright.physics.inverse.Calibrator;
+import org.nodewright.physics.measure.ImpedanceCsvReader;
+import org.nodewright.physics.measure.ImpedanceCurve;
+import org.nodewright.physics.measure.ImpedancePeak;
+import org.nodewright.physics.measure.ImpedancePeakFinder;
+import org.nodewright.physics.measure.UnreadableInputException;
+import org.nodewright.physics.tuning.Cents;
+import org.nodewright.web.FieldProblem;
 
 /**
  * The calibration's parameters as request fields: each one's field path, start, bounds, and how a
@@ -99,7 +106,7 @@ final class CalibrationSetup {
         List<Fingering> chart = AirColumnMapper.fingerings(r.bore());
         List<AirColumnRequest.FingeringSpec> specs = r.bore().fingeringsOrEmpty();
         List<Fingering> out = new ArrayList<>();
-        for (CalibrationRequest.Measured m : r.measured()) {
+        for (CalibrationRequest.Measured m : r.measuredOrEmpty()) {
             for (int i = 0; i < specs.size(); i++) {
                 if (m.fingering().equals(specs.get(i).name())) {
                     Fingering f = chart.get(i);
@@ -109,5 +116,112 @@ final class CalibrationSetup {
             }
         }
         return out;
+    }
+
+    /** Name of the n-th measured impedance resonance among the calibration's notes. */
+    static String peakName(int n) {
+        return "impedance peak " + n;
+    }
+
+    /** The curve's phase unit: true for degrees, false for radians, null to take the header's word. */
+    private static Boolean degrees(CalibrationRequest.MeasuredImpedance m) {
+        return m.phaseUnit() == null ? null : "deg".equals(m.phaseUnit());
+    }
+
+    /** The playing resonances of the measured curve (minima for an open input end, maxima for a closed one), lowest first. */
+    static List<ImpedancePeak> peaks(CalibrationRequest r) {
+        CalibrationRequest.MeasuredImpedance m = r.impedance();
+        ImpedanceCurve curve = ImpedanceCsvReader.read(m.csv(), degrees(m));
+        boolean minima = r.bore().inputEnd() == org.nodewright.physics.aircolumn.InputEnd.OPEN;
+        List<ImpedancePeak> all = ImpedancePeakFinder.find(curve, minima, m.prominenceOrDefault());
+        return all.subList(0, Math.min(all.size(), m.maxPeaksOrDefault()));
+    }
+
+    /** The impedance's rules: a known fingering and phase unit, a readable curve with at least one resonance. */
+    static void impedanceProblems(List<FieldProblem> out, CalibrationRequest r, java.util.Set<String> names) {
+        CalibrationRequest.MeasuredImpedance m = r.impedance();
+        if (m.fingering() != null && !names.contains(m.fingering())) {
+            out.add(new FieldProblem("impedance.fingering", "no fingering named '" + m.fingering() + "' in bore.fingerings"));
+        }
+        if (m.phaseUnit() != null && !m.phaseUnit().equals("rad") && !m.phaseUnit().equals("deg")) {
+            out.add(new FieldProblem("impedance.phaseUnit", "must be \"rad\" or \"deg\""));
+            return;
+        }
+        if (m.csv() == null || m.csv().isEmpty() || m.csv().length() > CalibrationRequest.MAX_CSV_CHARS
+                || r.bore().inputEnd() == null
+                || (m.minProminenceDb() != null && !(m.minProminenceDb() >= 0 && m.minProminenceDb() <= 60))
+                || (m.maxPeaks() != null && (m.maxPeaks() < 1 || m.maxPeaks() > 20))) {
+            return; // the field's own constraint speaks
+        }
+        try {
+            if (peaks(r).isEmpty()) {
+                out.add(new FieldProblem("impedance.csv", "no " + (r.bore().inputEnd()
+                        == org.nodewright.physics.aircolumn.InputEnd.OPEN ? "minimum" : "maximum")
+                        + " of the curve stands out by " + FieldProblem.figure(m.prominenceOrDefault())
+                        + " dB (impedance.minProminenceDb); the player's end is " + r.bore().inputEnd()));
+            }
+        } catch (UnreadableInputException e) {
+            out.add(new FieldProblem("impedance.csv", e.getMessage()));
+        }
+    }
+
+    /** A measured resonance of the curve and what became of it. */
+    record Peak(int n, double measuredHz, double prominenceDb, boolean used, String note) {
+    }
+
+    /** The measured curve's resonances matched to the model's, and the fingerings the fit tracks them as. */
+    record Matched(List<Peak> peaks, List<Fingering> fingerings) {
+    }
+
+    /**
+     * Each measured resonance paired with the model's resonance nearest it (the one the model's
+     * search from the measured frequency climbs to, at the start values); a measured resonance
+     * whose model partner is already taken by a lower one, or that has none within a factor 1.4,
+     * is left out of the fit and said so.
+     */
+    static Matched match(CalibrationRequest r, Calibrator.Family family, double[] start) {
+        if (r.impedance() == null) {
+            return new Matched(List.of(), List.of());
+        }
+        java.util.Set<Integer> closed = new java.util.TreeSet<>();
+        String name = r.impedance().fingering();
+        if (name != null) {
+            List<AirColumnRequest.FingeringSpec> specs = r.bore().fingeringsOrEmpty();
+            List<Fingering> chart = AirColumnMapper.fingerings(r.bore());
+            for (int i = 0; i < specs.size(); i++) {
+                if (name.equals(specs.get(i).name())) {
+                    closed.addAll(chart.get(i).closedHoles());
+                    break;
+                }
+            }
+        } else {
+            List<AirColumnRequest.Hole> holes = r.bore().holesOrEmpty();
+            for (int i = 0; i < holes.size(); i++) {
+                if (Boolean.FALSE.equals(holes.get(i).open())) {
+                    closed.add(i);
+                }
+            }
+        }
+        List<Peak> peaks = new ArrayList<>();
+        List<Fingering> fingerings = new ArrayList<>();
+        double lastModel = 0;
+        List<ImpedancePeak> found = peaks(r);
+        for (int i = 0; i < found.size(); i++) {
+            ImpedancePeak p = found.get(i);
+            Fingering f = new Fingering(peakName(i + 1), closed, p.frequencyHz(), i + 1);
+            double model = family.soundingHz(start, f, p.frequencyHz());
+            String note;
+            if (!Double.isFinite(model)) {
+                note = "the model has no resonance near it";
+            } else if (lastModel > 0 && Math.abs(Cents.between(model, lastModel)) < 1) {
+                note = "nearest the same model resonance as the one below it";
+            } else {
+                note = null;
+                lastModel = model;
+                fingerings.add(f);
+            }
+            peaks.add(new Peak(i + 1, p.frequencyHz(), p.prominenceDb(), note == null, note));
+        }
+        return new Matched(peaks, fingerings);
     }
 }

@@ -62,6 +62,6 @@ final class DemoRequests {
         ToneHoleSolveRequest.Limits limits = new ToneHoleSolveRequest.Limits(40.0, 10.0, 3.0, 3.0, 11.0, true, true,
                 200.0, DemoWhistle.BLANK_LENGTH_MM);
         return new BlankTubeRequest(bore, DemoWhistle.POSITIONS_MM.size(), DemoWhistle.CHIMNEY_MM, fingerings, null,
-                limits, null, null);
+                limits, null, null, new BlankTubeRequest.MouthLimits(true, 0.0, DemoWhistle.BORE_MM, null, null, null));
     }
 }

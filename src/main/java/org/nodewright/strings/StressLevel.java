@@ -9,6 +9,10 @@ import org.nodewright.physics.strings.StressCheck;
  */
 final class StressLevel {
 
+    /** Where the words change, for the pages' drawings. */
+    static final StringSetResponse.StressLimits LIMITS =
+            new StringSetResponse.StressLimits(StressCheck.WARN_FRACTION, StressCheck.STRONG_FRACTION);
+
     private StressLevel() {
     }
 

@@ -53,6 +53,6 @@ class StringSetService {
                     StressLevel.of(s.fractionOfStrength())));
         }
         return new StringSetResponse(out, result.totalTensionN(), result.totalTensionN() / G0, all,
-                wording.caution(), wording.neckCaution());
+                wording.caution(), wording.neckCaution(), StressLevel.LIMITS);
     }
 }

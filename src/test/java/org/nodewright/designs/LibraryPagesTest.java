@@ -31,7 +31,8 @@ class LibraryPagesTest {
     @Test
     void listAndComparePagesRender() throws Exception {
         assertThat(page("/library")).contains("id=\"design-list\"", "id=\"library-search\"", "/js/library-page.js");
-        assertThat(page("/library/compare")).contains("id=\"compare-table\"", "id=\"compare-chart\"");
+        assertThat(page("/library/compare")).contains("id=\"compare-table\"", "id=\"compare-results\"",
+                "id=\"length-unit\"", "id=\"force-unit\"");
     }
 
     @Test
@@ -61,6 +62,7 @@ class LibraryPagesTest {
         for (String script : List.of("static-assets/js/library-page.js", "static-assets/js/common/design-bar.js")) {
             collect(Path.of(script), Pattern.compile("t\\['([a-zA-Z.\\-]+)'\\]"), used);
         }
+        collect(Path.of("static-assets/js/library/compare.js"), Pattern.compile("\\bt\\('([a-zA-Z.\\-]+)'\\)"), used);
         assertThat(used).hasSizeGreaterThan(40);
         assertThat(used).allSatisfy(key -> assertThat(messages).as(key).containsKey(key));
         mvc.perform(get("/api/v1/designs/ui-text"))

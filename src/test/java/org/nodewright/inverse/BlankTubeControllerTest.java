@@ -57,6 +57,11 @@ class BlankTubeControllerTest {
         // the optimiser improved on the closed form it started from
         double firstWorst = ((Number) JsonPath.read(done, "$.result.firstLayout.worstCents")).doubleValue();
         assertThat(worst).isLessThan(firstWorst);
+        // the demo lets the headspace move; the bore handed back carries where it went
+        assertThat((String) JsonPath.read(done, "$.result.mouth[0].field")).isEqualTo("mouth.headspaceMm");
+        double head = ((Number) JsonPath.read(done, "$.result.mouth[0].solvedMm")).doubleValue();
+        assertThat(head).isBetween(0.0, 13.0);
+        assertThat(((Number) JsonPath.read(done, "$.result.solution.bore.mouth.headspaceMm")).doubleValue()).isEqualTo(head);
         // the holed bore is a valid air-column request: the bore bench analyses it
         String bore = JsonPath.parse(done).read("$.result.solution.bore", net.minidev.json.JSONObject.class)
                 .toJSONString();
@@ -79,6 +84,37 @@ class BlankTubeControllerTest {
         mvc.perform(post("/api/v1/inverse/blank-tube").contentType(MediaType.APPLICATION_JSON).content(bigStart))
                 .andExpect(status().isBadRequest())
                 .andExpect(jsonPath("$.errors[*].field", org.hamcrest.Matchers.hasItem("startDiametersMm[0]")));
+    }
+
+    void refused(String body, String field) throws Exception {
+        mvc.perform(post("/api/v1/inverse/blank-tube").contentType(MediaType.APPLICATION_JSON).content(body))
+                .andExpect(status().isBadRequest())
+                .andExpect(jsonPath("$.errors[*].field", org.hamcrest.Matchers.hasItem(field)));
+    }
+
+    String demoWith(String path, Object value) throws Exception {
+        return JsonPath.parse(demo()).set(path, value).jsonString();
+    }
+
+    @Test
+    void mouthLimitsTheMouthCannotFollowAreRefusedByField() throws Exception {
+        // the demo lets the headspace move: without a mouth there is none
+        refused(demoWith("$.bore.mouth", null), "mouthLimits.varyHeadspace");
+        refused(demoWith("$.mouthLimits.varyWindowLength", true).replace("\"kind\":\"window\"", "\"kind\":\"reed\","
+                + "\"equivalentVolumeMm3\":500"), "mouthLimits.varyWindowLength");
+        refused(demoWith("$.mouthLimits.maxHeadspaceMm", -1), "mouthLimits.maxHeadspaceMm");
+        refused(JsonPath.parse(demo()).set("$.mouthLimits.minHeadspaceMm", 8).set("$.mouthLimits.maxHeadspaceMm", 4)
+                .jsonString(), "mouthLimits.maxHeadspaceMm");
+        // the blank's headspace (0 mm) outside the bounds would be a changed value: refused
+        refused(demoWith("$.mouthLimits.minHeadspaceMm", 2), "mouthLimits.minHeadspaceMm");
+        refused(JsonPath.parse(demo()).set("$.mouthLimits.varyWindowLength", true)
+                .set("$.mouthLimits.minWindowLengthMm", 5).jsonString(), "mouthLimits.minWindowLengthMm");
+        refused(JsonPath.parse(demo()).set("$.mouthLimits.varyWindowLength", true)
+                .set("$.mouthLimits.minWindowLengthMm", 3).set("$.mouthLimits.maxWindowLengthMm", 2).jsonString(),
+                "mouthLimits.maxWindowLengthMm");
+        refused(demoWith("$.mouthLimits.maxWindowLengthMm", 6), "mouthLimits.varyWindowLength");
+        refused(JsonPath.parse(demo()).set("$.mouthLimits.varyHeadspace", false).jsonString(), "mouthLimits.varyHeadspace");
+        refused(demoWith("$.mouthLimits.maxWindowLengthMm", "long"), "mouthLimits.maxWindowLengthMm");
     }
 
     /** The workshop whistle as built (window preset), with a window 1.0 mm longer than the model's 4.0 mm. */

@@ -178,6 +178,10 @@ class StringsApiTest {
         assertThat(r.path("totalTensionN").asDouble()).isCloseTo(70.7587 + t2, within(1e-4));
         assertThat(r.path("strings").get(1).path("lengthMm").asDouble()).isEqualTo(660.0);
         assertThat(r.path("strings").get(1).path("note").path("name").asString()).isEqualTo("E2");
+        // The limits the pages mark on their drawings come with the answer (common practice: a
+        // caution above 75 % of the typical breaking stress, danger above 90 %).
+        assertThat(r.path("stressLimits").path("warningFraction").asDouble()).isEqualTo(0.75);
+        assertThat(r.path("stressLimits").path("dangerFraction").asDouble()).isEqualTo(0.90);
     }
 
     @Test

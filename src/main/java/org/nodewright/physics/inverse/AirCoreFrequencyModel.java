@@ -74,6 +74,16 @@ public final class AirCoreFrequencyModel implements PlayingFrequencyModel {
         this.breath = breath;
     }
 
+    /** The same bore, holes, ends, air and breath with another player's end (null: none). */
+    public AirCoreFrequencyModel withMouth(Mouth other) {
+        return new AirCoreFrequencyModel(segments, chimneysMm, inputEnd, outputEnd, air, losses, other, breath);
+    }
+
+    /** The player's end, or null. */
+    public Mouth mouth() {
+        return mouth;
+    }
+
     /** Bore length up to the last section, mm. */
     public double lengthBeforeFootMm() {
         double m = 0;

@@ -11,8 +11,22 @@ import org.nodewright.physics.aircolumn.Fingering;
  * then the {@link ToneHoleSolver} (Levenberg–Marquardt, Hipparchus) from it; several such starts
  * (a multi-start search, since one start can settle in a local minimum or stall against a limit),
  * stopping at the first start that reaches the tolerance and otherwise keeping the best.
+ *
+ * <p>A start that ends outside the tolerance is refined: least squares spreads the error over
+ * every note, while the maker asks that the worst note be within the tolerance (a minimax aim).
+ * Up to {@link #REFINE_ROUNDS} more runs of the tone-hole solver from where it stopped (together
+ * at most one more start's evaluations), each with
+ * the notes reweighted after Lawson's iteratively reweighted least squares for the smallest
+ * maximum error (Lawson 1961, from memory): w_i &larr; w_i (1/2 + |r_i| / max |r|), normalised to a
+ * mean of 1, so that the notes outside lean harder and the notes well inside give way; a round that
+ * does not lower the worst note ends the refinement.
  */
 public final class BlankTubeSolver {
+
+    /** At most this many reweighted runs after a start that ended outside the tolerance. */
+    public static final int REFINE_ROUNDS = 4;
+    /** The refinement of one start shares one more start's evaluations; a round needs at least this many. */
+    static final int MIN_REFINE = 20;
 
     private final double toleranceCents;
     private final int maxEvaluationsPerStart;
@@ -53,11 +67,22 @@ public final class BlankTubeSolver {
     public Result solve(PlayingFrequencyModel model, FirstLayout.Tube tube, double[] chimneysMm,
             double lengthBeforeFootMm, List<Fingering> fingerings, SolverLimits limits, double[] startDiametersMm,
             SolveProgress progress, BooleanSupplier cancelled) {
+        return solve(model, tube, chimneysMm, lengthBeforeFootMm, fingerings, limits, ModelFreedom.NONE,
+                startDiametersMm, progress, cancelled);
+    }
+
+    /**
+     * The same, every start also moving the model's own figures in {@code freedom} (the player's
+     * end's headspace or window length), each start from the figures as given.
+     */
+    public Result solve(PlayingFrequencyModel model, FirstLayout.Tube tube, double[] chimneysMm,
+            double lengthBeforeFootMm, List<Fingering> fingerings, SolverLimits limits, ModelFreedom freedom,
+            double[] startDiametersMm, SolveProgress progress, BooleanSupplier cancelled) {
         if (startDiametersMm.length == 0) {
             throw new IllegalArgumentException("at least one start is needed");
         }
         int holes = chimneysMm.length;
-        int cap = maxEvaluationsPerStart * startDiametersMm.length;
+        int cap = 2 * maxEvaluationsPerStart * startDiametersMm.length;
         List<Start> starts = new ArrayList<>();
         int chosen = -1;
         double bestWorst = Double.POSITIVE_INFINITY;
@@ -75,12 +100,35 @@ public final class BlankTubeSolver {
             ToneHoleSolution solution;
             try {
                 solution = new ToneHoleSolver(toleranceCents, maxEvaluationsPerStart).solve(model, first,
-                        lengthBeforeFootMm, fingerings, limits, overall, cancelled);
+                        lengthBeforeFootMm, fingerings, limits, freedom, overall, cancelled);
             } catch (IllegalArgumentException noResonance) {
                 lastFailure = noResonance;
                 continue;
             }
             spent += solution.evaluations();
+            double[] weights = new double[fingerings.size()];
+            java.util.Arrays.fill(weights, 1.0);
+            int refineBudget = maxEvaluationsPerStart;
+            for (int round = 0; round < REFINE_ROUNDS && !solution.withinTolerance() && refineBudget >= MIN_REFINE;
+                    round++) {
+                weights = lawson(weights, solution);
+                final int done = spent;
+                SolveProgress refining = (e, m, w) -> progress.update(done + e, cap, Math.min(bestSoFar, w));
+                ToneHoleSolution next;
+                try {
+                    next = new ToneHoleSolver(toleranceCents, refineBudget).solve(model, solution.layout(),
+                            lengthBeforeFootMm, fingerings, limits, freedom.startingAt(values(solution)), weights,
+                            refining, cancelled);
+                } catch (IllegalArgumentException lost) {
+                    break;
+                }
+                spent += next.evaluations();
+                refineBudget -= next.evaluations();
+                if (!(next.worstAbsCents() < solution.worstAbsCents())) {
+                    break;
+                }
+                solution = chained(solution, next, first);
+            }
             double firstWorst = solution.notes().stream().mapToDouble(n -> Math.abs(n.startCents())).max().orElse(0);
             starts.add(new Start(s, d, first, firstWorst, solution));
             if (solution.worstAbsCents() < bestWorst) {
@@ -96,6 +144,50 @@ public final class BlankTubeSolver {
         }
         progress.update(spent, cap, bestWorst);
         return new Result(starts, chosen);
+    }
+
+    /** The model figures a solution ended at, in the freedom's order. */
+    private static double[] values(ToneHoleSolution s) {
+        return s.modelChanges().stream().mapToDouble(ModelFreedom.Change::value).toArray();
+    }
+
+    /** Lawson's reweighting: w_i (1/2 + |r_i| / max |r|), normalised to a mean of 1. */
+    static double[] lawson(double[] weights, ToneHoleSolution s) {
+        double worst = Math.max(1e-12, s.worstAbsCents());
+        double[] w = new double[weights.length];
+        double sum = 0;
+        for (int i = 0; i < w.length; i++) {
+            w[i] = weights[i] * (0.5 + Math.abs(s.notes().get(i).achievedCents()) / worst);
+            sum += w[i];
+        }
+        for (int i = 0; i < w.length; i++) {
+            w[i] *= w.length / sum;
+        }
+        return w;
+    }
+
+    /** A refinement's end told from the first run's start: start pitches, moves and figures from where it all began. */
+    private static ToneHoleSolution chained(ToneHoleSolution from, ToneHoleSolution to, HoleLayout first) {
+        List<ToneHoleSolution.Note> notes = new ArrayList<>();
+        for (int i = 0; i < to.notes().size(); i++) {
+            ToneHoleSolution.Note a = from.notes().get(i);
+            ToneHoleSolution.Note b = to.notes().get(i);
+            notes.add(new ToneHoleSolution.Note(b.fingering(), b.targetHz(), a.startHz(), b.achievedHz(), a.startCents(),
+                    b.achievedCents()));
+        }
+        HoleLayout end = to.layout();
+        List<ToneHoleSolution.HoleChange> holes = new ArrayList<>();
+        for (int h = 0; h < end.holeCount(); h++) {
+            holes.add(new ToneHoleSolution.HoleChange(h, end.position(h), end.position(h) - first.position(h),
+                    end.diameter(h), end.diameter(h) - first.diameter(h)));
+        }
+        List<ModelFreedom.Change> figures = new ArrayList<>();
+        for (int v = 0; v < to.modelChanges().size(); v++) {
+            figures.add(new ModelFreedom.Change(to.modelChanges().get(v).name(), from.modelChanges().get(v).start(),
+                    to.modelChanges().get(v).value()));
+        }
+        return new ToneHoleSolution(end, notes, holes, end.footLengthMm() - first.footLengthMm(),
+                from.iterations() + to.iterations(), from.evaluations() + to.evaluations(), to.withinTolerance(), figures);
     }
 
     /**

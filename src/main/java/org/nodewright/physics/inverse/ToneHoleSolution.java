@@ -10,9 +10,10 @@ import java.util.List;
  * @param holes       per hole: new position and diameter and how far each moved from the start
  * @param footMovedMm change of the last section's length (positive = longer)
  * @param withinTolerance whether every fingering is within the requested tolerance
+ * @param modelChanges the model's own figures the solve was let move (see {@link ModelFreedom}), start and end
  */
 public record ToneHoleSolution(HoleLayout layout, List<Note> notes, List<HoleChange> holes, double footMovedMm,
-        int iterations, int evaluations, boolean withinTolerance) {
+        int iterations, int evaluations, boolean withinTolerance, List<ModelFreedom.Change> modelChanges) {
 
     public record Note(String fingering, double targetHz, double startHz, double achievedHz, double startCents,
             double achievedCents) {
@@ -24,6 +25,7 @@ public record ToneHoleSolution(HoleLayout layout, List<Note> notes, List<HoleCha
     public ToneHoleSolution {
         notes = List.copyOf(notes);
         holes = List.copyOf(holes);
+        modelChanges = List.copyOf(modelChanges);
     }
 
     public double worstAbsCents() {

@@ -29,6 +29,10 @@ import org.nodewright.physics.tuning.Cents;
  *       the problem well posed when there are more unknowns than notes and changes the achieved
  *       cents by far less than the tolerance.</li>
  * </ul>
+ *
+ * <p>Besides the holes and the foot, a {@link ModelFreedom} may let figures of the model itself move
+ * (the player's end's headspace or window length): they are more parameters with their bounds,
+ * and the frequencies come from the model at their values.
  */
 public final class ToneHoleSolver {
 
@@ -57,6 +61,31 @@ public final class ToneHoleSolver {
      */
     public ToneHoleSolution solve(PlayingFrequencyModel model, HoleLayout start, double lengthBeforeFootMm,
             List<Fingering> fingerings, SolverLimits limits, SolveProgress progress, BooleanSupplier cancelled) {
+        return solve(model, start, lengthBeforeFootMm, fingerings, limits, ModelFreedom.NONE, progress, cancelled);
+    }
+
+    /**
+     * The same, also moving the model's own figures in {@code freedom} (from their starts, within
+     * their bounds); {@code model} is used when {@code freedom} moves nothing.
+     */
+    public ToneHoleSolution solve(PlayingFrequencyModel model, HoleLayout start, double lengthBeforeFootMm,
+            List<Fingering> fingerings, SolverLimits limits, ModelFreedom freedom, SolveProgress progress,
+            BooleanSupplier cancelled) {
+        return solve(model, start, lengthBeforeFootMm, fingerings, limits, freedom, null, progress, cancelled);
+    }
+
+    /**
+     * The same with a weight on each fingering's residual (null: all 1): least squares on
+     * w_i r_i, so that a refinement can lean on the notes still outside the tolerance (Lawson's
+     * reweighting towards the smallest worst error, Lawson 1961). The tolerance and the result
+     * stay in plain cents.
+     */
+    public ToneHoleSolution solve(PlayingFrequencyModel model, HoleLayout start, double lengthBeforeFootMm,
+            List<Fingering> fingerings, SolverLimits limits, ModelFreedom freedom, double[] weights,
+            SolveProgress progress, BooleanSupplier cancelled) {
+        if (weights != null && weights.length != fingerings.size()) {
+            throw new IllegalArgumentException("one weight per fingering is needed");
+        }
         if (fingerings.isEmpty()) {
             throw new IllegalArgumentException("at least one fingering is needed");
         }
@@ -68,8 +97,9 @@ public final class ToneHoleSolver {
                 }
             }
         }
-        Run run = new Run(model, start, lengthBeforeFootMm, fingerings, limits, progress, cancelled);
-        double[] startHz = run.frequencies(start, null);
+        Run run = new Run(model, freedom, start, lengthBeforeFootMm, fingerings, limits, progress, cancelled);
+        run.weights = weights;
+        double[] startHz = run.frequencies(run.encode(start), null);
         run.guess = startHz.clone();
         LeastSquaresProblem problem = new LeastSquaresBuilder()
                 .model(run::value)
@@ -90,8 +120,9 @@ public final class ToneHoleSolver {
         } catch (org.hipparchus.exception.MathIllegalStateException stalled) {
             // the optimiser could not improve further; keep the best layout seen so far
         }
-        HoleLayout best = run.best == null ? start : run.best;
-        double[] endHz = run.frequencies(best, run.bestHz);
+        double[] bestX = run.best == null ? run.encode(start) : run.best;
+        HoleLayout best = run.decode(bestX);
+        double[] endHz = run.frequencies(bestX, run.bestHz);
         List<ToneHoleSolution.Note> notes = new ArrayList<>();
         double worst = 0;
         for (int i = 0; i < fingerings.size(); i++) {
@@ -106,8 +137,13 @@ public final class ToneHoleSolver {
             holes.add(new ToneHoleSolution.HoleChange(h, best.position(h), best.position(h) - start.position(h),
                     best.diameter(h), best.diameter(h) - start.diameter(h)));
         }
+        List<ModelFreedom.Change> moved = new ArrayList<>();
+        for (int v = 0; v < freedom.size(); v++) {
+            moved.add(new ModelFreedom.Change(freedom.variables().get(v).name(), run.startPoint[run.firstExtra + v],
+                    bestX[run.firstExtra + v]));
+        }
         return new ToneHoleSolution(best, notes, holes, best.footLengthMm() - start.footLengthMm(), iterations,
-                run.evaluations, worst <= toleranceCents);
+                run.evaluations, worst <= toleranceCents, moved);
     }
 
     private static final class EvaluationCapReached extends RuntimeException {
@@ -121,6 +157,13 @@ public final class ToneHoleSolver {
     /** State of one solve: the parameter encoding, the best layout seen, counters. */
     private final class Run {
         private final PlayingFrequencyModel model;
+        private final ModelFreedom freedom;
+        /** Index of the foot parameter (when it varies) and of the first model figure. */
+        private final int footIndex;
+        final int firstExtra;
+        /** The model at the last figures asked for (a cache: most evaluations move holes only). */
+        private double[] figuresAt;
+        private PlayingFrequencyModel modelThere;
         private final HoleLayout start;
         private final double lengthBeforeFoot;
         private final List<Fingering> fingerings;
@@ -134,13 +177,15 @@ public final class ToneHoleSolver {
         private final double[] startPoint;
         double[] guess;
         int evaluations;
-        HoleLayout best;
+        double[] weights;
+        double[] best;
         double[] bestHz;
         double bestWorst = Double.POSITIVE_INFINITY;
 
-        Run(PlayingFrequencyModel model, HoleLayout start, double lengthBeforeFoot, List<Fingering> fingerings,
-                SolverLimits limits, SolveProgress progress, BooleanSupplier cancelled) {
+        Run(PlayingFrequencyModel model, ModelFreedom freedom, HoleLayout start, double lengthBeforeFoot,
+                List<Fingering> fingerings, SolverLimits limits, SolveProgress progress, BooleanSupplier cancelled) {
             this.model = model;
+            this.freedom = freedom;
             this.start = start;
             this.lengthBeforeFoot = lengthBeforeFoot;
             this.fingerings = fingerings;
@@ -148,7 +193,9 @@ public final class ToneHoleSolver {
             this.progress = progress;
             this.cancelled = cancelled;
             this.holes = start.holeCount();
-            this.parameters = holes + (limits.varyDiameters() ? holes : 0) + (limits.varyFoot() ? 1 : 0);
+            this.footIndex = holes + (limits.varyDiameters() ? holes : 0);
+            this.firstExtra = footIndex + (limits.varyFoot() ? 1 : 0);
+            this.parameters = firstExtra + freedom.size();
             this.lower = new double[parameters];
             this.upper = new double[parameters];
             double longestBore = lengthBeforeFoot + (limits.varyFoot() ? limits.maxFootMm() : start.footLengthMm());
@@ -161,8 +208,12 @@ public final class ToneHoleSolver {
                 }
             }
             if (limits.varyFoot()) {
-                lower[parameters - 1] = limits.minFootMm();
-                upper[parameters - 1] = limits.maxFootMm();
+                lower[footIndex] = limits.minFootMm();
+                upper[footIndex] = limits.maxFootMm();
+            }
+            for (int v = 0; v < freedom.size(); v++) {
+                lower[firstExtra + v] = freedom.variables().get(v).min();
+                upper[firstExtra + v] = freedom.variables().get(v).max();
             }
             for (int p = 0; p < parameters; p++) {
                 if (!(lower[p] <= upper[p])) {
@@ -185,7 +236,10 @@ public final class ToneHoleSolver {
                 }
             }
             if (limits.varyFoot()) {
-                x[parameters - 1] = layout.footLengthMm();
+                x[footIndex] = layout.footLengthMm();
+            }
+            for (int v = 0; v < freedom.size(); v++) {
+                x[firstExtra + v] = freedom.variables().get(v).start();
             }
             return x;
         }
@@ -199,7 +253,7 @@ public final class ToneHoleSolver {
                     dia[h] = x[holes + h];
                 }
             }
-            return new HoleLayout(pos, dia, limits.varyFoot() ? x[parameters - 1] : start.footLengthMm());
+            return new HoleLayout(pos, dia, limits.varyFoot() ? x[footIndex] : start.footLengthMm());
         }
 
         /** Box limits, then no hole centre nearer the (possibly moved) output end than the margin. */
@@ -208,7 +262,7 @@ public final class ToneHoleSolver {
             for (int p = 0; p < parameters; p++) {
                 x[p] = Math.min(upper[p], Math.max(lower[p], x[p]));
             }
-            double foot = limits.varyFoot() ? x[parameters - 1] : start.footLengthMm();
+            double foot = limits.varyFoot() ? x[footIndex] : start.footLengthMm();
             double last = lengthBeforeFoot + foot - limits.maxPositionMargin();
             for (int h = 0; h < holes; h++) {
                 x[h] = Math.max(lower[h], Math.min(last, x[h]));
@@ -216,10 +270,25 @@ public final class ToneHoleSolver {
             return new ArrayRealVector(x, false);
         }
 
-        double[] frequencies(HoleLayout layout, double[] guesses) {
+        /** The model at the figures in x (the solver's own when nothing of the model moves). */
+        private PlayingFrequencyModel modelAt(double[] x) {
+            if (freedom.size() == 0) {
+                return model;
+            }
+            double[] figures = java.util.Arrays.copyOfRange(x, firstExtra, parameters);
+            if (!java.util.Arrays.equals(figures, figuresAt)) {
+                figuresAt = figures;
+                modelThere = freedom.family().apply(figures);
+            }
+            return modelThere;
+        }
+
+        double[] frequencies(double[] x, double[] guesses) {
             if (cancelled.getAsBoolean()) {
                 throw new SolveCancelledException();
             }
+            HoleLayout layout = decode(x);
+            PlayingFrequencyModel model = modelAt(x);
             double[] hz = new double[fingerings.size()];
             for (int i = 0; i < hz.length; i++) {
                 Fingering f = fingerings.get(i);
@@ -240,7 +309,7 @@ public final class ToneHoleSolver {
             double[] r = new double[residualCount()];
             int k = 0;
             for (int i = 0; i < fingerings.size(); i++) {
-                r[k++] = Cents.between(hz[i], fingerings.get(i).targetHz());
+                r[k++] = (weights == null ? 1 : weights[i]) * Cents.between(hz[i], fingerings.get(i).targetHz());
             }
             for (int p = 0; p < parameters; p++) {
                 r[k++] = STAY_WEIGHT * (x[p] - startPoint[p]);
@@ -255,17 +324,16 @@ public final class ToneHoleSolver {
 
         Pair<RealVector, org.hipparchus.linear.RealMatrix> value(RealVector point) {
             double[] x = point.toArray();
-            HoleLayout layout = decode(x);
-            double[] hz = count(frequencies(layout, guess));
+            double[] hz = count(frequencies(x, guess));
             guess = hz;
             double[] r0 = residuals(x, hz);
             double worst = 0;
             for (int i = 0; i < fingerings.size(); i++) {
-                worst = Math.max(worst, Math.abs(r0[i]));
+                worst = Math.max(worst, Math.abs(r0[i] / (weights == null ? 1 : weights[i])));
             }
             if (worst < bestWorst) {
                 bestWorst = worst;
-                best = layout;
+                best = x.clone();
                 bestHz = hz.clone();
             }
             double[][] jacobian = new double[r0.length][parameters];
@@ -273,7 +341,7 @@ public final class ToneHoleSolver {
                 double[] xp = x.clone();
                 double step = xp[p] + STEP_MM > upper[p] ? -STEP_MM : STEP_MM;
                 xp[p] += step;
-                double[] rp = residuals(xp, count(frequencies(decode(xp), hz)));
+                double[] rp = residuals(xp, count(frequencies(xp, hz)));
                 for (int i = 0; i < r0.length; i++) {
                     jacobian[i][p] = (rp[i] - r0[i]) / step;
                 }

@@ -37,6 +37,14 @@ public final class TestRecordings {
         return SyntheticPluck.wav(x, 1, 1, 16, rate);
     }
 
+    /**
+     * {@code silenceSeconds} of room noise (−60 dB), then a pluck as {@link #pluck} lasting {@code seconds}:
+     * 16-bit mono at 48 kHz, for a fake microphone that loops the file and an onset detector that must find the attack.
+     */
+    public static byte[] pluckAfterSilence(double f1Hz, double b, double silenceSeconds, double seconds) {
+        return new SyntheticPluck().f1(f1Hz).b(b).seconds(seconds).noise(1e-3).silenceFirst(silenceSeconds).wav16(1);
+    }
+
     public static byte[] silence(int samples) {
         return SyntheticPluck.wav(new double[samples], 1, 1, 16, 48_000);
     }
