@@ -5,7 +5,7 @@ import { problemInUserUnits } from './common/units.js';
 import { readNumber, readPitch, unitInputs, loadMaterials, defaultWrap, localChecks } from './common/string-form.js';
 import { drawChart, baseOptions, STATE, PALETTE } from './common/charts.js';
 import { createRequestLoop, formView } from './common/request-loop.js';
-import { pageText } from './common/text.js';
+import { pageText, labelByColumn } from './common/text.js';
 import { showPanelFailure } from './common/panels.js';
 import { pitchHz } from './common/notes.js';
 import { drawNeck } from './strings/set-drawing.js';
@@ -110,6 +110,7 @@ function renumber() {
     tr.querySelector('.wrap-material').disabled = !wound;
     tr.querySelector('.wrap-gauge').disabled = !wound;
   });
+  labelByColumn($('set-rows'));
   io.showLabels();
 }
 

@@ -3,7 +3,7 @@
 // thicknesses to carve, Hz per 0.1 mm removed), "apply to the plate" and the graduation template.
 import { clearFieldErrors, getJson, postJson, sendJson, showFieldErrors } from '../common/api.js';
 import { parseNumber } from '../common/units.js';
-import { pageText } from '../common/text.js';
+import { pageText, labelByColumn } from '../common/text.js';
 import { postForBlob, download } from '../templates/shared.js';
 
 const POLL_MS = 250;
@@ -47,6 +47,7 @@ function renumber() {
     const target = tr.querySelector('[data-role="target"]');
     target.dataset.field = `targets[${i}].targetHz`;
   });
+  labelByColumn($('solver-target-rows'));
 }
 
 /** The frequency each target's mode has now, from the bench's last answer. */
