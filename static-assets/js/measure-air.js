@@ -4,11 +4,11 @@
 // (common/microphone.js) and list the peaks heard (POST /api/v1/measurements/peaks) the same way.
 import { mountPanel, role, sig, onPageEvent, sendUpload, uploadData, measure, textRow } from './measure/panel.js';
 import { cents as centsBetween } from './common/notes.js';
-import { drawChart, setOverlay, clearOverlay } from './common/charts.js';
+import { drawChart, setOverlay, clearOverlay, PALETTE } from './common/charts.js';
 import { showPanelFailure } from './common/panels.js';
 import { mountMicrophone } from './common/microphone.js';
 
-const MEASURED_COLOUR = '#b5651d';
+const MEASURED_COLOUR = PALETTE[4];   // Okabe–Ito orange: measured values over predicted ones
 const state = { panel: null, t: null, analysis: null, measured: null, heard: null };
 /** Peaks kept from a listen, and the lowest: below 40 Hz is the room's rumble (common practice). */
 const HEARD_PEAKS = 12;

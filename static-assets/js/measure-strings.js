@@ -4,12 +4,12 @@
 // residuals, and apply the fit back to the design as an effective linear density and modulus.
 import { mountPanel, role, sig, onPageEvent, uploadData, measure, textRow } from './measure/panel.js';
 import { cents as centsBetween } from './common/notes.js';
-import { drawChart, setOverlay } from './common/charts.js';
+import { drawChart, setOverlay, clearOverlay, PALETTE } from './common/charts.js';
 import { showPanelFailure } from './common/panels.js';
 import { APPLY_STRING_PARAMETERS, handOver } from './common/handover.js';
 import { mountMicrophone } from './common/microphone.js';
 
-const MEASURED_COLOUR = '#b5651d';
+const MEASURED_COLOUR = PALETTE[4];   // Okabe–Ito orange: measured values over predicted ones
 const state = { panel: null, t: null, analysis: null, measured: null };
 
 /**

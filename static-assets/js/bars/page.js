@@ -7,7 +7,7 @@ import { getJson, postJson, postForm, postForBlob, download, problemLine, showFi
 import { createJobFollower } from '../common/jobs.js';
 import { createRequestLoop } from '../common/request-loop.js';
 import { pageText } from '../common/text.js';
-import { drawChart, baseOptions, colour } from '../common/charts.js';
+import { drawChart, baseOptions, colour, translucent, STATE } from '../common/charts.js';
 import { mountDesignBar } from '../common/design-bar.js';
 import { parseNumber, toMm, fromMm, problemInUserUnits } from '../common/units.js';
 import { PRESETS } from './presets.js';
@@ -167,7 +167,7 @@ function drawSideView(request, response) {
   drawChart($('bar-side-chart'), {
     type: 'line',
     data: { datasets: [
-      { label: 'profile', data: top, borderColor: colour(0), backgroundColor: 'rgba(43,93,138,0.15)', fill: 'origin', pointRadius: 0 },
+      { label: 'profile', data: top, borderColor: colour(0), backgroundColor: translucent(colour(0), 0.15), fill: 'origin', pointRadius: 0 },
       { label: 'cord holes', data: holes, showLine: false, pointRadius: 6, pointStyle: 'circle', borderColor: colour(1), backgroundColor: colour(1) },
     ] },
     options: opts,
@@ -204,7 +204,7 @@ function drawTargets(response) {
     data: {
       labels: offsets.map((o) => `${o.n}: ${o.ratio.toFixed(3)} / ${o.target}`),
       datasets: [{ label: 'cents', data: offsets.map((o) => o.cents),
-        backgroundColor: offsets.map((o) => (Math.abs(o.cents) <= 5 ? colour(2) : colour(1))) }],
+        backgroundColor: offsets.map((o) => (Math.abs(o.cents) <= 5 ? STATE.ok : STATE.warn)) }],
     },
     options: opts,
   }, { replace: true });

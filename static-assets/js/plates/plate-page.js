@@ -233,6 +233,9 @@ function showResults(response) {
     figure.appendChild(canvas);
     const caption = document.createElement('figcaption');
     caption.textContent = `${m.n}: ${m.frequencyHz.toFixed(1)} Hz ${m.name || ''}`;
+    caption.id = `${canvas.id}-caption`;
+    canvas.setAttribute('role', 'img');
+    canvas.setAttribute('aria-labelledby', caption.id);
     figure.appendChild(caption);
     gallery.appendChild(figure);
     drawMode(canvas, m);

@@ -4,7 +4,7 @@
 import { clearFieldErrors, postJson, showFieldErrors, postForBlob, download } from '../common/api.js';
 import { createJobFollower } from '../common/jobs.js';
 import { parseNumber } from '../common/units.js';
-import { pageText } from '../common/text.js';
+import { pageText, labelByColumn } from '../common/text.js';
 
 const POLL_MS = 250;
 const $ = (id) => document.getElementById(id);
@@ -47,6 +47,7 @@ function renumber() {
     const target = tr.querySelector('[data-role="target"]');
     target.dataset.field = `targets[${i}].targetHz`;
   });
+  labelByColumn($('solver-target-rows'));
 }
 
 /** The frequency each target's mode has now, from the bench's last answer. */

@@ -64,7 +64,7 @@ class DrawnTemplatesController {
                     + "100 mm calibration ruler.")
     ResponseEntity<String> toneHolesSvg(@Valid @RequestBody AirColumnRequest bore,
             @RequestParam(required = false) @Pattern(regexp = NAME, message = NAME_RULE) String name) {
-        return TemplateResponses.svg(BoreMapping.template(bore, name == null ? "bore" : name).draw(), "tone-holes");
+        return TemplateResponses.svg(BoreMapping.template(bore, name).draw(), "tone-holes");
     }
 
     @PostMapping(path = "/api/v1/templates/tone-holes.pdf", consumes = "application/json")
@@ -72,7 +72,7 @@ class DrawnTemplatesController {
     ResponseEntity<byte[]> toneHolesPdf(@Valid @RequestBody AirColumnRequest bore,
             @RequestParam(required = false) @Pattern(regexp = NAME, message = NAME_RULE) String name,
             @RequestParam(required = false) String paper) {
-        return TemplateResponses.pdf(BoreMapping.template(bore, name == null ? "bore" : name).draw(), paper,
+        return TemplateResponses.pdf(BoreMapping.template(bore, name).draw(), paper,
                 "tone-holes");
     }
 
