@@ -100,7 +100,9 @@ class StringSetPlannerIT extends StringPageTestBase {
         // An octave up needs four times the tension (T = mu (2 L f)^2): about 5.7 GPa in a 0.254 mm wire.
         wait.until(d -> driver.findElements(By.cssSelector("#set-results tbody tr:first-child td.strong")).size() > 0);
         Object colour = js("return Chart.getChart(document.getElementById('set-tension-chart')).data.datasets[0].backgroundColor[0];");
-        assertThat(colour).isEqualTo("#a3262a");
+        // The palette's danger colour (one home: --danger in nodewright.css, STATE.danger in charts.js).
+        Object danger = js("return getComputedStyle(document.documentElement).getPropertyValue('--danger').trim();");
+        assertThat(String.valueOf(colour)).isEqualToIgnoringCase(String.valueOf(danger));
         assertThat(driver.findElement(By.cssSelector("#set-results tbody tr:first-child")).getText()).contains("E5");
         js("document.getElementById('set-total').scrollIntoView();");
         screenshot("set-planner-over-strength");

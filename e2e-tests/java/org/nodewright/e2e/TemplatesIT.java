@@ -64,17 +64,18 @@ class TemplatesIT extends BrowserTestBase {
         scale.clear();
         scale.sendKeys("25.5");
         driver.findElement(By.id("fret-positions")).sendKeys("tailpiece = 27");
+        js("window.__fretBodies = []; const f = window.fetch; window.fetch = (u, o) => {"
+                + " if (String(u).includes('/templates/frets')) window.__fretBodies.push(o && o.body); return f(u, o); };");
         driver.findElement(By.id("fret-preview")).click();
         wait.until(d -> String.valueOf(js("return document.getElementById('fret-image').getAttribute('src') || ''"))
                 .startsWith("blob:"));
         assertThat(driver.findElement(By.id("fret-message")).getText())
                 .contains("tailpiece").contains("past the saddle").contains("27 inch").contains("25.5 inch");
-        // The preview drawn from what was sent: the 12th fret at half of 25.5 inch = 323.85 mm from the nut.
-        String svg = (String) ((JavascriptExecutor) driver).executeAsyncScript("const done = arguments[arguments.length - 1];"
-                + "fetch(document.getElementById('fret-image').src).then(r => r.text()).then(done);");
-        var doc = DocumentBuilderFactory.newInstance().newDocumentBuilder()
-                .parse(new ByteArrayInputStream(svg.getBytes(StandardCharsets.UTF_8)));
-        assertThat(lineX(doc, "data-fret", "12") - lineX(doc, "data-fret", "0")).isCloseTo(323.85, within(0.01));
+        // What the page sent for the preview: the lengths in mm (1 inch = 25.4 mm exactly).
+        Object sent = js("return window.__fretBodies[window.__fretBodies.length - 1];");
+        var body = new tools.jackson.databind.json.JsonMapper().readTree(String.valueOf(sent));
+        assertThat(body.get("scaleLengthMm").asDouble()).isCloseTo(25.5 * 25.4, within(1e-9));
+        assertThat(body.get("positions").get(0).get("positionMm").asDouble()).isCloseTo(27 * 25.4, within(1e-9));
         js("localStorage.removeItem('nodewright.units.templates.frets');");
     }
 
