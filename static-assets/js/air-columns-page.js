@@ -404,7 +404,17 @@ openFirstBore();
 // Integration hooks: the design bar (save/load), and the listening and measuring panels, each
 // handed the last analysis when it loads; a panel that fails to load says so in its place.
 import('/js/common/design-bar.js')
-  .then((m) => m.mountDesignBar(document.getElementById('design-bar'), { kind: 'air-column', getParameters, setParameters }))
+  .then((m) => m.mountDesignBar(document.getElementById('design-bar'), {
+    kind: 'air-column', getParameters, setParameters,
+    getView: () => ({ units: { length: $('units').value } }),
+    setView: (view) => {
+      const length = view?.units?.length;
+      if ((length === 'mm' || length === 'inch') && $('units').value !== length) {
+        $('units').value = length;
+        $('units').dispatchEvent(new Event('change'));
+      }
+    },
+  }))
   .catch((error) => showPanelFailure('design-bar', 'design bar', error));
 loadPanels([
   { url: '/js/listen-air.js', place: 'listen-panel', name: 'listen-air' },

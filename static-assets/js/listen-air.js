@@ -4,7 +4,7 @@
 // harmonics of the lowest resonance, each ∝ |Z(h·f1)|/h, held for 1.5 s — resonances that line up
 // with harmonics strengthen them, as in a reed or lip-driven tone. Not a played note.
 import { showPanelFailure } from './common/panels.js';
-import { loadPanel, texts, role, showPlaying, onPageEvent } from './measure/panel.js';
+import { mountPanel, role, showPlaying, onPageEvent } from './measure/panel.js';
 import { play, setVolume, stopAll, state as audioState } from './measure/voices.js';
 
 const state = { panel: null, t: null, analysis: null };
@@ -60,11 +60,8 @@ async function onPlay() {
 }
 
 async function init() {
-  const section = document.getElementById('listen-panel');
-  if (!section) return;
-  const panel = await loadPanel(section, 'listen-air');
-  state.panel = panel;
-  state.t = texts(panel);
+  const panel = await mountPanel(state, 'listen-panel', 'listen-air');
+  if (!panel) return;
   role(panel, 'play').addEventListener('click', onPlay);
   role(panel, 'stop').addEventListener('click', () => { stopAll(); panel.dataset.audioState = audioState().contextState; });
   role(panel, 'volume').addEventListener('input', (e) => { if (audioState().contextState !== 'none') setVolume(Number(e.target.value)); });

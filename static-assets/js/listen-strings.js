@@ -2,7 +2,7 @@
 // predicted partials (stiffness included) weighted by the pluck and the chosen pickups, each
 // decaying at its own rate — and compares two remembered versions ("A" and "B").
 import { showPanelFailure } from './common/panels.js';
-import { loadPanel, texts, role, showPlaying, sig, onPageEvent } from './measure/panel.js';
+import { mountPanel, role, showPlaying, sig, onPageEvent } from './measure/panel.js';
 import { play, schedule, audio, setVolume, stopAll, state as audioState } from './measure/voices.js';
 
 const LN_1000 = Math.log(1000); // T60: the time to fall 60 dB, e^{−σ·T60} = 1/1000
@@ -106,11 +106,8 @@ async function onCompare() {
 }
 
 async function init() {
-  const section = document.getElementById('listen-panel');
-  if (!section) return;
-  const panel = await loadPanel(section, 'listen-strings');
-  state.panel = panel;
-  state.t = texts(panel);
+  const panel = await mountPanel(state, 'listen-panel', 'listen-strings');
+  if (!panel) return;
   role(panel, 'rememberA').textContent = state.t('remember', 'A');
   role(panel, 'rememberB').textContent = state.t('remember', 'B');
   role(panel, 'play').addEventListener('click', onPlay);

@@ -2,13 +2,13 @@
 // magnitude, phase), draw it over the predicted curve in the impedance chart and list its peaks
 // beside the nearest predicted resonance; or listen to the instrument through the microphone
 // (common/microphone.js) and list the peaks heard (POST /api/v1/measurements/peaks) the same way.
-import { loadPanel, texts, role, sig, onPageEvent, sendUpload } from './measure/panel.js';
+import { mountPanel, role, sig, onPageEvent, sendUpload, uploadData, measure, textRow } from './measure/panel.js';
 import { cents as centsBetween } from './common/notes.js';
-import { drawChart, setOverlay, clearOverlay } from './common/charts.js';
+import { drawChart, setOverlay, clearOverlay, PALETTE } from './common/charts.js';
 import { showPanelFailure } from './common/panels.js';
 import { mountMicrophone } from './common/microphone.js';
 
-const MEASURED_COLOUR = '#b5651d';
+const MEASURED_COLOUR = PALETTE[4];   // Okabe–Ito orange: measured values over predicted ones
 const state = { panel: null, t: null, analysis: null, measured: null, heard: null };
 /** Peaks kept from a listen, and the lowest: below 40 Hz is the room's rumble (common practice). */
 const HEARD_PEAKS = 12;
@@ -24,28 +24,12 @@ export function scaleToPrediction(measuredMagnitudes, predictedMagnitudes) {
 
 async function onSubmit(e) {
   e.preventDefault();
-  const p = state.panel;
-  const form = role(p, 'upload');
-  const status = role(p, 'status');
-  const file = form.elements.file.files[0];
-  if (!file) { status.textContent = state.t('noFile'); return; }
-  const data = new FormData();
-  data.append('file', file);
+  const form = role(state.panel, 'upload');
+  const data = uploadData(state, form);
+  if (!data) return;
   if (form.elements.phaseUnit.value) data.append('phaseUnit', form.elements.phaseUnit.value);
   data.append('inputEnd', state.analysis?.request?.inputEnd === 'open' ? 'open' : 'closed');
-  const measured = await sendUpload(state, form, '/api/v1/measurements/impedance', data);
-  if (!measured) { clearMeasured(); return; }
-  state.measured = measured;
-  showMeasured();
-}
-
-/** A refused upload leaves no earlier curve or table under its error. */
-function clearMeasured() {
-  state.measured = null;
-  role(state.panel, 'result').hidden = true;
-  role(state.panel, 'peaks').tBodies[0].replaceChildren();
-  role(state.panel, 'own-chart').hidden = true;
-  clearOverlay('impedance-chart', 'measured');
+  if (await measure(state, form, '/api/v1/measurements/impedance', data, 'impedance-chart')) showMeasured();
 }
 
 function showMeasured() {
@@ -59,9 +43,7 @@ function showMeasured() {
     const nearest = nearestPredicted(r.frequencyHz);
     const cells = [r.n, sig(r.frequencyHz, 6), sig(r.magnitude, 4), r.q == null ? '' : sig(r.q, 3),
       nearest ? sig(nearest.frequencyHz, 6) : '', nearest ? centsBetween(r.frequencyHz, nearest.frequencyHz).toFixed(1) : ''];
-    const tr = document.createElement('tr');
-    tr.replaceChildren(...cells.map((c) => Object.assign(document.createElement('td'), { textContent: String(c) })));
-    return tr;
+    return textRow(cells);
   });
   role(p, 'peaks').tBodies[0].replaceChildren(...rows);
   // Nothing to compare with until a design is analysed on this page (none on the Measure page).
@@ -143,9 +125,7 @@ function showHeard() {
     const q = nearestPredicted(pk.frequencyHz);
     const cells = [i + 1, sig(pk.frequencyHz, 6), pk.levelDb.toFixed(1), q ? sig(q.frequencyHz, 6) : '',
       q ? centsBetween(pk.frequencyHz, q.frequencyHz).toFixed(1) : ''];
-    const tr = document.createElement('tr');
-    tr.replaceChildren(...cells.map((c) => Object.assign(document.createElement('td'), { textContent: String(c) })));
-    return tr;
+    return textRow(cells);
   });
   role(p, 'heard').tBodies[0].replaceChildren(...rows);
   role(p, 'heard').classList.toggle('without-design', !state.analysis);
@@ -160,11 +140,8 @@ function showHeard() {
 }
 
 async function init() {
-  const section = document.getElementById('measure-air-panel') || document.getElementById('measure-panel');
-  if (!section) return;
-  const panel = await loadPanel(section, 'measure-air');
-  state.panel = panel;
-  state.t = texts(panel);
+  const panel = await mountPanel(state, ['measure-air-panel', 'measure-panel'], 'measure-air');
+  if (!panel) return;
   role(panel, 'upload').addEventListener('submit', onSubmit);
   role(panel, 'scale').addEventListener('change', drawMeasured);
   mountMicrophone(panel.querySelector('[data-mic]'), { onRecording: analyseHeard });

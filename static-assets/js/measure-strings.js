@@ -2,14 +2,14 @@
 // listen through the microphone (common/microphone.js), then
 // show the measured partials against the predicted ones in the partials chart and a table of
 // residuals, and apply the fit back to the design as an effective linear density and modulus.
-import { loadPanel, texts, role, sig, onPageEvent, sendUpload } from './measure/panel.js';
+import { mountPanel, role, sig, onPageEvent, uploadData, measure, textRow } from './measure/panel.js';
 import { cents as centsBetween } from './common/notes.js';
-import { drawChart, setOverlay, clearOverlay } from './common/charts.js';
+import { drawChart, setOverlay, clearOverlay, PALETTE } from './common/charts.js';
 import { showPanelFailure } from './common/panels.js';
 import { APPLY_STRING_PARAMETERS, handOver } from './common/handover.js';
 import { mountMicrophone } from './common/microphone.js';
 
-const MEASURED_COLOUR = '#b5651d';
+const MEASURED_COLOUR = PALETTE[4];   // Okabe–Ito orange: measured values over predicted ones
 const state = { panel: null, t: null, analysis: null, measured: null };
 
 /**
@@ -28,9 +28,10 @@ const isCsv = (file) => /\.(csv|txt)$/i.test(file.name) || /csv|text\/plain/.tes
 
 async function onSubmit(e) {
   e.preventDefault();
-  const file = role(state.panel, 'upload').elements.file.files[0];
-  if (!file) { role(state.panel, 'status').textContent = state.t('noFile'); return; }
-  await analyseFile(file);
+  const form = role(state.panel, 'upload');
+  const data = uploadData(state, form);
+  if (!data) return;
+  await analyseFile(data.get('file'));
 }
 
 /**
@@ -43,20 +44,10 @@ async function analyseFile(file) {
   data.append('file', file);
   if (form.elements.expectedF1Hz.value !== '') data.append('expectedF1Hz', form.elements.expectedF1Hz.value);
   if (form.elements.maxPartials.value !== '') data.append('maxPartials', form.elements.maxPartials.value);
-  const measured = await sendUpload(state, form, isCsv(file) ? '/api/v1/measurements/partials-csv' : '/api/v1/measurements/partials', data);
-  if (!measured) { clearMeasured(); return false; }
-  state.measured = measured;
+  const url = isCsv(file) ? '/api/v1/measurements/partials-csv' : '/api/v1/measurements/partials';
+  if (!(await measure(state, form, url, data, 'partials-chart'))) return false;
   showMeasured();
   return true;
-}
-
-/** A refused upload leaves no earlier fit, table or points under its error. */
-function clearMeasured() {
-  state.measured = null;
-  role(state.panel, 'result').hidden = true;
-  role(state.panel, 'peaks').tBodies[0].replaceChildren();
-  role(state.panel, 'own-chart').hidden = true;
-  clearOverlay('partials-chart', 'measured');
 }
 
 function showMeasured() {
@@ -69,12 +60,10 @@ function showMeasured() {
     sig(fit.rmsCents, 3), fit.partialsUsed);
   const design = new Map((state.analysis?.response.modes ?? []).map((x) => [x.n, x.frequencyHz]));
   const rows = m.peaks.map((pk) => {
-    const tr = document.createElement('tr');
-    if (!pk.usedInFit) tr.className = 'set-aside';
     const d = design.get(pk.n);
-    const cells = [pk.n, sig(pk.frequencyHz, 7), pk.levelDb == null ? '' : pk.levelDb.toFixed(1), sig(pk.fittedHz, 7),
-      pk.residualCents.toFixed(3), d ? sig(d, 7) : '', d ? centsBetween(pk.frequencyHz, d).toFixed(2) : ''];
-    tr.replaceChildren(...cells.map((c) => Object.assign(document.createElement('td'), { textContent: String(c) })));
+    const tr = textRow([pk.n, sig(pk.frequencyHz, 7), pk.levelDb == null ? '' : pk.levelDb.toFixed(1), sig(pk.fittedHz, 7),
+      pk.residualCents.toFixed(3), d ? sig(d, 7) : '', d ? centsBetween(pk.frequencyHz, d).toFixed(2) : '']);
+    if (!pk.usedInFit) tr.className = 'set-aside';
     return tr;
   });
   role(p, 'peaks').tBodies[0].replaceChildren(...rows);
@@ -177,11 +166,8 @@ function onApply() {
 }
 
 async function init() {
-  const section = document.getElementById('measure-panel');
-  if (!section) return;
-  const panel = await loadPanel(section, 'measure-strings');
-  state.panel = panel;
-  state.t = texts(panel);
+  const panel = await mountPanel(state, 'measure-panel', 'measure-strings');
+  if (!panel) return;
   role(panel, 'upload').addEventListener('submit', onSubmit);
   mountMicrophone(panel.querySelector('[data-mic]'), { onRecording: analyseFile });
   role(panel, 'apply').addEventListener('click', onApply);

@@ -3,9 +3,9 @@
 import { postJson } from './common/api.js';
 import { problemInUserUnits } from './common/units.js';
 import { readNumber, readPitch, unitInputs, loadMaterials, defaultWrap, localChecks } from './common/string-form.js';
-import { drawChart, baseOptions } from './common/charts.js';
+import { drawChart, baseOptions, STATE, PALETTE } from './common/charts.js';
 import { createRequestLoop, formView } from './common/request-loop.js';
-import { pageText } from './common/text.js';
+import { pageText, labelByColumn } from './common/text.js';
 import { showPanelFailure } from './common/panels.js';
 import { pitchHz } from './common/notes.js';
 import { drawNeck } from './strings/set-drawing.js';
@@ -18,7 +18,7 @@ const io = unitInputs();
 const state = { materials: null };
 
 /** Bar colour and table marking by the server's stressLevel word. */
-const LEVEL_COLOUR = { danger: '#a3262a', warning: '#a86400' };
+const LEVEL_COLOUR = { danger: STATE.danger, warning: STATE.warn };
 const LEVEL_CLASS = { danger: 'strong', warning: 'warn' };
 
 // Harrowgate Lane Workshop's steel-string parlour guitar, a light set of our own devising.
@@ -110,6 +110,7 @@ function renumber() {
     tr.querySelector('.wrap-material').disabled = !wound;
     tr.querySelector('.wrap-gauge').disabled = !wound;
   });
+  labelByColumn($('set-rows'));
   io.showLabels();
 }
 
@@ -156,7 +157,7 @@ function fillForm(p) {
 
 function render(request, response) {
   const tensions = response.strings.map((s) => io.forceOut(s.tensionN));
-  const colours = response.strings.map((s) => LEVEL_COLOUR[s.stressLevel] ?? '#2b5d8a');
+  const colours = response.strings.map((s) => LEVEL_COLOUR[s.stressLevel] ?? PALETTE[0]);
   const digits = io.units.force === 'N' ? 1 : 2;
   $('set-total').textContent = `${io.forceOut(response.totalTensionN).toFixed(digits)} ${io.units.force}`;
   const options = baseOptions({ legend: false });

@@ -4,14 +4,15 @@
 // The form speaks the user's units; every request to the API is in mm and N (units.js converts).
 import { postJson } from './common/api.js';
 import { toMm, problemInUserUnits } from './common/units.js';
-import { enableLineDrag } from './common/charts.js';
+import { enableLineDrag, enableLineKeys } from './common/charts.js';
 import { createRequestLoop, formView } from './common/request-loop.js';
 import { loadPanels, showPanelFailure } from './common/panels.js';
 import { loadMaterials, defaultWrap } from './common/string-form.js';
 import { APPLY_STRING_PARAMETERS, handedOver } from './common/handover.js';
 import { form, $, t, io } from './strings/context.js';
 import { buildRequest, fillForm, showConstruction, wound } from './strings/form.js';
-import { addPickupRow, addPickupWhereRoom, buildSliders, syncSliders, moveMarker, onPickupsChanged } from './strings/pickups.js';
+import { addPickupRow, addPickupWhereRoom, buildSliders, syncSliders, moveMarker, onPickupsChanged,
+  markerName, markerRange, markerDigits, nudgeMarker } from './strings/pickups.js';
 import { drawModeShapes, drawNodeMap, drawPartials, drawSpectrum, probeNodes } from './strings/charts.js';
 import { drawSummary, drawTable, drawNearNodes } from './strings/tables.js';
 
@@ -102,6 +103,7 @@ function wire() {
   $('add-pickup').addEventListener('click', addPickupWhereRoom);
   for (const canvasId of ['node-map-chart', 'mode-shapes-chart']) {
     enableLineDrag($(canvasId), (id, x) => moveMarker(id, toMm(x, io.units.length), true));
+    enableLineKeys($(canvasId), { label: markerName, range: markerRange, unit: () => io.units.length, digits: markerDigits, onMove: nudgeMarker });
   }
   $('node-map-chart').addEventListener('pointermove', (e) => probeNodes(e, loop.last));
   document.addEventListener('nodewright:apply-string-parameters', (e) => {

@@ -3,7 +3,7 @@
 // 1 lbf = 4.4482216152605 N (NIST SP 811, appendix B.8).
 import { test } from 'node:test';
 import assert from 'node:assert/strict';
-import { parseNumber, toMm, fromMm, toNewton, fromNewton, fmt } from '../../../static-assets/js/common/units.js';
+import { parseNumber, toMm, fromMm, toNewton, fromNewton, fmt, textFromMm, textToMm } from '../../../static-assets/js/common/units.js';
 
 test('published factors', () => {
   assert.equal(toMm(1, 'inch'), 25.4);
@@ -49,4 +49,18 @@ test('server messages in the user\'s units, without float noise', async () => {
   assert.equal(inUserUnits('must be at most 100 kg/m'), 'must be at most 100000 g/m');
   assert.equal(inUserUnits('must be at least 1e-9 kg/m'), 'must be at least 0.000001 g/m');
   assert.equal(inUserUnits('must be greater than 0'), 'must be greater than 0');
+});
+
+test('lists of lengths (the plate bench outline, graduation points, braces) shown in inches and read back in mm', () => {
+  // 25.4 mm = 1 in exactly; 400 mm = 15.748031... in, shown to 4 decimals
+  assert.equal(textFromMm('0, 0\n400, 0\n400, 300', 'inch'), '0, 0\n15.748, 0\n15.748, 11.811');
+  assert.equal(textFromMm('25.4, -50.8, 2.54', 'inch'), '1, -2, 0.1');
+  assert.equal(textToMm('1, -2, 0.1', 'inch'), '25.4, -50.8, 2.54');
+  const [a, b] = textToMm('15.75, 11.8125', 'inch').split(', ').map(Number);
+  assert.ok(Math.abs(a - 400.05) <= 4 * Number.EPSILON * 400.05 && Math.abs(b - 300.0375) <= 4 * Number.EPSILON * 300.0375);
+  // words and separators are kept, so a typo still reaches the server as typed and is named there
+  assert.equal(textToMm('1, x; 2', 'inch'), '25.4, x; 50.8');
+  // in mm nothing is touched, not even the way a number was written
+  assert.equal(textFromMm('3.0, 1e2', 'mm'), '3.0, 1e2');
+  assert.equal(textToMm('3.0, 1e2', 'mm'), '3.0, 1e2');
 });

@@ -2,13 +2,12 @@
 // resonances marked) and the standing wave along the bore (pressure, flow, node markers, holes).
 // Chart.js and its annotation plugin are globals loaded by the layout from their WebJars.
 import { t } from './text.js';
-import { drawChart } from '../common/charts.js';
+import { drawChart, PALETTE, translucent } from '../common/charts.js';
 
-const INK = '#1f2a36';
-const ACCENT = '#2b5d8a';
-const FLOW = '#b5651d';
-const PHASE = '#7a4f9a';
-const NODE = '#a3262a';
+const ACCENT = PALETTE[0];
+const FLOW = PALETTE[4];
+const PHASE = PALETTE[3];
+const NODE = PALETTE[1];
 
 const hasAnnotations = () => typeof Chart !== 'undefined' && Chart.registry?.plugins?.get?.('annotation');
 
@@ -37,7 +36,7 @@ export function drawImpedance(canvas, impedance, resonances, { showPhase, inputC
   if (hasAnnotations()) {
     resonances.forEach((r, i) => {
       annotations[`r${i}`] = {
-        type: 'line', xMin: r.frequencyHz, xMax: r.frequencyHz, borderColor: 'rgba(163,38,42,0.45)', borderWidth: 1,
+        type: 'line', xMin: r.frequencyHz, xMax: r.frequencyHz, borderColor: translucent(NODE, 0.45), borderWidth: 1,
         borderDash: [4, 3],
         label: { display: i < 24, content: String(r.n), position: inputClosed ? 'start' : 'end', font: { size: 10 },
           backgroundColor: 'rgba(255,255,255,0.85)', color: NODE, padding: 2 },
@@ -96,7 +95,7 @@ export function drawProfile(canvas, profile, nodesMm, holes, { toUnit, unitLabel
   const annotations = {};
   if (hasAnnotations()) {
     nodesMm.forEach((n, i) => {
-      annotations[`n${i}`] = { type: 'line', xMin: toUnit(n), xMax: toUnit(n), borderColor: 'rgba(163,38,42,0.5)', borderDash: [3, 3], borderWidth: 1 };
+      annotations[`n${i}`] = { type: 'line', xMin: toUnit(n), xMax: toUnit(n), borderColor: translucent(NODE, 0.5), borderDash: [3, 3], borderWidth: 1 };
     });
     holes.forEach((h, i) => {
       if (!Number.isFinite(h.positionMm) || !Number.isFinite(h.diameterMm)) return;

@@ -9,6 +9,7 @@ import { keepFocus } from '../common/keep-focus.js';
 import { cents, nearestNote, targetHz } from './tuning.js';
 import { drawCards } from './fingering-cards.js';
 import { t } from './text.js';
+import { labelByColumn } from '../common/text.js';
 
 export class FingeringTable {
   constructor({ body, cards, onChange, onApply }) {
@@ -124,6 +125,7 @@ export class FingeringTable {
 
   render() {
     keepFocus(this.body, () => this.body.replaceChildren(...this.rows.map((r, i) => this.#row(r, i))));
+    labelByColumn(this.body);
     this.#drawCards();
   }
 

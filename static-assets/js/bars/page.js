@@ -2,10 +2,12 @@
 // mode shapes, partials against the target ratios, results table, cautions; the tuning solver panel
 // (polled solve job), the undercut template (SVG / tiled PDF), listen (a synthesised tap) and
 // measure-the-blank. Lengths are shown in mm or inches (js/common/units.js); requests speak mm.
-import { getJson, postJson, postForm, sendJson, csrfHeaders, showFieldErrors, clearFieldErrors, escapeHtml } from '../common/api.js';
+import { getJson, postJson, postForm, postForBlob, download, problemLine, showFieldErrors, clearFieldErrors, escapeHtml }
+  from '../common/api.js';
+import { createJobFollower } from '../common/jobs.js';
 import { createRequestLoop } from '../common/request-loop.js';
 import { pageText } from '../common/text.js';
-import { drawChart, baseOptions, colour } from '../common/charts.js';
+import { drawChart, baseOptions, colour, translucent, STATE } from '../common/charts.js';
 import { mountDesignBar } from '../common/design-bar.js';
 import { parseNumber, toMm, fromMm, problemInUserUnits } from '../common/units.js';
 import { PRESETS } from './presets.js';
@@ -165,7 +167,7 @@ function drawSideView(request, response) {
   drawChart($('bar-side-chart'), {
     type: 'line',
     data: { datasets: [
-      { label: 'profile', data: top, borderColor: colour(0), backgroundColor: 'rgba(43,93,138,0.15)', fill: 'origin', pointRadius: 0 },
+      { label: 'profile', data: top, borderColor: colour(0), backgroundColor: translucent(colour(0), 0.15), fill: 'origin', pointRadius: 0 },
       { label: 'cord holes', data: holes, showLine: false, pointRadius: 6, pointStyle: 'circle', borderColor: colour(1), backgroundColor: colour(1) },
     ] },
     options: opts,
@@ -202,7 +204,7 @@ function drawTargets(response) {
     data: {
       labels: offsets.map((o) => `${o.n}: ${o.ratio.toFixed(3)} / ${o.target}`),
       datasets: [{ label: 'cents', data: offsets.map((o) => o.cents),
-        backgroundColor: offsets.map((o) => (Math.abs(o.cents) <= 5 ? colour(2) : colour(1))) }],
+        backgroundColor: offsets.map((o) => (Math.abs(o.cents) <= 5 ? STATE.ok : STATE.warn)) }],
     },
     options: opts,
   }, { replace: true });
@@ -242,41 +244,37 @@ const loop = createRequestLoop({
       const shown = problemInUserUnits(problem, { length: unit });
       clearFieldErrors(form);
       showFieldErrors(form, shown);
-      const first = (shown.errors ?? [])[0];
-      $('form-problem').textContent = first ? `${first.field}: ${first.message}` : (shown.detail ?? '');
+      $('form-problem').textContent = problemLine(shown);
     },
     failed() { $('form-problem').textContent = t('error'); },
   },
 });
 
 // --- tuning solver panel -------------------------------------------------------------------
-let jobId = null;
 let lastResult = null;
 
-async function poll() {
-  if (!jobId) return;
-  const res = await getJson(`/api/v1/inverse/jobs/${jobId}`);
-  if (!res.ok) return;
-  const job = res.data;
-  const status = $('solver-status');
-  if (job.status === 'queued' || job.status === 'running') {
+const solveJob = createJobFollower({
+  interval: 300,
+  progress(job) {
+    const status = $('solver-status');
     status.textContent = t('solver.progress', job.progress.evaluations, job.progress.maxEvaluations,
       job.progress.worstCents == null ? '–' : job.progress.worstCents.toFixed(2));
     status.dataset.state = job.status;
-    setTimeout(poll, 300);
-    return;
-  }
-  status.dataset.state = job.status;
-  if (job.status === 'succeeded') {
-    lastResult = job.result;
-    status.textContent = t('solver.done', job.result.worstCents.toFixed(2), job.result.evaluations);
-    $('solver-apply').disabled = false;
-    drawSensitivity(job.result.sensitivity);
-  } else {
-    status.textContent = t('solver.failed', job.error ?? job.status);
-  }
-  jobId = null;
-}
+  },
+  finished(job) {
+    const status = $('solver-status');
+    status.dataset.state = job.status;
+    if (job.status === 'succeeded') {
+      lastResult = job.result;
+      status.textContent = t('solver.done', job.result.worstCents.toFixed(2), job.result.evaluations);
+      $('solver-apply').disabled = false;
+      drawSensitivity(job.result.sensitivity);
+    } else {
+      status.textContent = t('solver.failed', job.error ?? job.status);
+    }
+  },
+  failed(answer) { $('solver-status').textContent = t('solver.failed', problemLine(answer.problem, String(answer.status))); },
+});
 
 function drawSensitivity(s) {
   const datasets = s.centsPerMm2.map((row, i) => ({ label: `mode ${i + 1}`,
@@ -297,14 +295,11 @@ async function startSolve() {
   problem.textContent = '';
   const res = await postJson('/api/v1/inverse/bar-tuning', body);
   if (!res.ok) {
-    const shown = problemInUserUnits(res.problem, { length: unit });
-    const first = (shown?.errors ?? [])[0];
-    problem.textContent = first ? `${first.field}: ${first.message}` : (shown?.detail ?? t('error'));
+    problem.textContent = problemLine(problemInUserUnits(res.problem, { length: unit }), t('error'));
     return;
   }
-  jobId = res.data.id;
   $('solver-apply').disabled = true;
-  poll();
+  solveJob.follow(res.data.id);
 }
 
 // --- undercut template ---------------------------------------------------------------------
@@ -319,29 +314,17 @@ async function downloadTemplate(kind) {
   const query = new URLSearchParams();
   if (Number.isFinite(hole)) query.set('cordHoleMm', String(hole));
   if (kind === 'pdf') query.set('paper', $('template-paper').value);
-  const response = await fetch(`/api/v1/templates/bar-undercut.${kind}?${query}`, {
-    method: 'POST',
-    headers: { 'Content-Type': 'application/json', ...csrfHeaders() },
-    body: JSON.stringify(request),
-  });
+  const answer = await postForBlob(`/api/v1/templates/bar-undercut.${kind}?${query}`, request);
   delete status.dataset.bytes;
-  if (!response.ok) {
-    const problem = await response.json().catch(() => null);
-    const first = (problem?.errors ?? [])[0];
-    status.textContent = t('template.failed', first ? `${first.field}: ${first.message}` : response.status);
+  if (!answer.ok) {
+    status.textContent = t('template.failed', problemLine(answer.problem));
     status.dataset.state = 'failed';
     return;
   }
-  const blob = await response.blob();
+  const { blob } = answer;
   if (kind === 'svg') window.nodewrightBars.lastTemplate = await blob.text();
   const file = `bar-undercut.${kind}`;
-  const a = document.createElement('a');
-  a.href = URL.createObjectURL(blob);
-  a.download = file;
-  document.body.append(a);
-  a.click();
-  a.remove();
-  setTimeout(() => URL.revokeObjectURL(a.href), 10_000);
+  download(blob, file);
   status.textContent = t('template.saved', file, (blob.size / 1024).toFixed(1));
   status.dataset.state = 'saved';
   status.dataset.kind = kind;
@@ -393,8 +376,7 @@ function showFit(res) {
   const problem = $('blank-problem');
   const status = $('blank-status');
   if (!res.ok) {
-    const first = (problemInUserUnits(res.problem, { length: unit })?.errors ?? [])[0];
-    problem.textContent = first ? `${first.field}: ${first.message}` : (res.problem?.detail ?? t('error'));
+    problem.textContent = problemLine(problemInUserUnits(res.problem, { length: unit }), t('error'));
     status.dataset.state = 'refused';
     return;
   }
@@ -471,9 +453,7 @@ async function start() {
     if (lastResponse) drawTargets(lastResponse);
   });
   $('solver-start').addEventListener('click', startSolve);
-  $('solver-cancel').addEventListener('click', async () => {
-    if (jobId) await sendJson('DELETE', `/api/v1/inverse/jobs/${jobId}`);
-  });
+  $('solver-cancel').addEventListener('click', () => solveJob.cancel());
   $('solver-apply').addEventListener('click', () => {
     if (!lastResult) return;
     setParameters(lastResult.bar);

@@ -44,6 +44,38 @@ async function readResponse(response) {
   return { ok: false, status: response.status, data: null, problem: data };
 }
 
+/** POSTs JSON and resolves to {ok, blob, problem}: for SVG and PDF answers. */
+export async function postForBlob(url, body) {
+  const response = await fetch(url, {
+    method: 'POST',
+    headers: { 'Content-Type': 'application/json', Accept: '*/*', ...csrfHeaders() },
+    body: JSON.stringify(body),
+  });
+  if (response.ok) return { ok: true, blob: await response.blob(), problem: null };
+  const type = response.headers.get('Content-Type') || '';
+  return { ok: false, blob: null, problem: type.includes('json') ? await response.json() : { detail: response.statusText } };
+}
+
+/** Saves a blob (an SVG or PDF answer) as a download named {@code name}. */
+export function download(blob, name) {
+  const url = URL.createObjectURL(blob);
+  const a = document.createElement('a');
+  a.href = url;
+  a.download = name;
+  document.body.appendChild(a);
+  a.click();
+  a.remove();
+  setTimeout(() => URL.revokeObjectURL(url), 10000);
+}
+
+/**
+ * One line for a refused request: its first field problem as "field: message", else its detail, else the fallback.
+ */
+export function problemLine(problem, fallback = '') {
+  const first = (problem?.errors ?? [])[0];
+  return first ? `${first.field}: ${first.message}` : (problem?.detail ?? fallback);
+}
+
 /** Field messages of a problem document as a Map from dotted field path to message. */
 export function fieldErrors(problem) {
   const map = new Map();

@@ -7,7 +7,8 @@
 //     getParameters  () => the analysis request object of the page
 //     setParameters  (parameters) => fills the page from a saved design
 //     formRoot       optional element whose [data-field] inputs get the field errors (default <main>)
-//     getView/setView optional: the page's display settings (e.g. its units), kept in this browser
+//     getView/setView optional: the page's display settings; their units are saved with the design
+//     (design.units, seen by whoever opens it) and the whole view is also kept in this browser
 //                    with each design it saves and put back when that design is opened
 // Returns { current(), load(id) }.
 import { getJson, sendJson, showFieldErrors, clearFieldErrors } from './api.js';
@@ -147,9 +148,13 @@ export async function mountDesignBar(element, { kind, getParameters, setParamete
       return false;
     }
     await setParameters(r.data.parameters);
-    const view = localStorage.getItem(VIEW_KEY(r.data.id));
+    // The units saved with the design (what anyone who opens it sees), else this browser's last view of it.
+    let view = r.data.units ? { units: r.data.units } : null;
+    if (!view) {
+      try { view = JSON.parse(localStorage.getItem(VIEW_KEY(r.data.id)) || 'null'); } catch (error) { view = null; }
+    }
     if (view && setView) {
-      try { await setView(JSON.parse(view)); } catch (error) { setStatus(String(error), 'error'); }
+      try { await setView(view); } catch (error) { setStatus(String(error), 'error'); }
     }
     showDesign(r.data);
     hide(conflict); hide(notice); clearErrors();
@@ -158,7 +163,8 @@ export async function mountDesignBar(element, { kind, getParameters, setParamete
   }
 
   function body(extra) {
-    return { name: nameInput.value.trim(), kind, parameters: getParameters(), notes: notesInput.value, tags: tags(), author: who(), ...extra };
+    const units = getView ? getView().units : undefined;
+    return { name: nameInput.value.trim(), kind, parameters: getParameters(), notes: notesInput.value, tags: tags(), author: who(), units, ...extra };
   }
 
   async function saveNew(name) {

@@ -27,3 +27,24 @@ export function pageText(container, prefix = '') {
     return lookup(map, prefix)(key, ...args);
   };
 }
+
+/**
+ * Names the inputs and selects of a table's body for screen readers by their column's heading and
+ * their row's number ("Gauge 3"), where they have no name of their own: a table's cells carry no
+ * <label>, and a heading alone does not name a control. Call after the rows are (re)drawn.
+ */
+export function labelByColumn(tbody) {
+  const table = tbody?.closest('table');
+  if (!table) return;
+  const heads = [...table.querySelectorAll('thead tr:last-child th')].map((th) => th.textContent.replace(/\s+/g, ' ').trim());
+  [...tbody.rows].forEach((tr, i) => {
+    [...tr.cells].forEach((td, k) => {
+      for (const control of td.querySelectorAll('input, select, textarea')) {
+        if (control.hasAttribute('aria-label') && control.dataset.columnLabel === undefined) continue;
+        if (control.labels?.length || !heads[k]) continue;
+        control.dataset.columnLabel = '';
+        control.setAttribute('aria-label', `${heads[k]} ${i + 1}`);
+      }
+    });
+  });
+}

@@ -21,6 +21,27 @@ export function parseNumber(text) {
   return NUMBER.test(s) ? Number(s) : NaN;
 }
 
+const NUMBER_IN_TEXT = /[+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?/g;
+
+/**
+ * A text of lengths in mm (a list such as "x, y" a line, or "x, y, t") as shown in unit: every number in it
+ * converted and rounded for reading (4 decimals of an inch, 3 of a mm), everything else kept as written.
+ * In mm the text comes back untouched.
+ */
+export function textFromMm(text, unit) {
+  const s = String(text ?? '');
+  if (unit === 'mm') return s;
+  const digits = unit === 'inch' ? 4 : 3;
+  return s.replace(NUMBER_IN_TEXT, (v) => String(Number(fromMm(Number(v), unit).toFixed(digits))));
+}
+
+/** The reverse of textFromMm: a list typed in unit with every number turned into mm (not rounded). */
+export function textToMm(text, unit) {
+  const s = String(text ?? '');
+  if (unit === 'mm') return s;
+  return s.replace(NUMBER_IN_TEXT, (v) => String(toMm(Number(v), unit)));
+}
+
 /** Rounds for display without trailing noise. */
 export function fmt(value, digits = 3) {
   if (value === null || value === undefined || Number.isNaN(value)) return '';

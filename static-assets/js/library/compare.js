@@ -6,6 +6,7 @@
 // figure is the server's; the page only subtracts two of them, or takes the cents between two
 // frequencies with common/notes.js. The pure parts (parameterRows, sections) touch no DOM.
 import { cents } from '../common/notes.js';
+import { PALETTE, INK, translucent } from '../common/charts.js';
 import { LENGTH_UNITS, FORCE_UNITS, fromMm, fromNewton } from '../common/units.js';
 
 export const ANALYZE = { string: '/api/v1/strings/analyze', 'string-set': '/api/v1/string-sets/analyze',
@@ -273,7 +274,7 @@ function el(tag, attrs = {}, text) {
   return e;
 }
 
-const COLOURS = { a: '#2b5d8a', b: '#b5651d', difference: '#4d4d4d' };
+const COLOURS = { a: PALETTE[0], b: PALETTE[1], difference: INK };   // the page palette (Okabe–Ito) and the ink
 
 /** Draws one section's table and, where it has one, its chart of the differences. */
 function renderSection(holder, s, names, t) {
@@ -314,7 +315,7 @@ function renderSection(holder, s, names, t) {
         borderColor: COLOURS[k], backgroundColor: COLOURS[k], pointStyle: k === 'a' ? 'circle' : 'triangle', pointRadius: 4, yAxisID: 'y', order: 1 })));
     }
     datasets.push({ kind: 'difference', type: 'bar', label: `${t('library.compare.difference')} (${s.rows[0].differenceUnit})`,
-      data: s.rows.map((r) => r.difference ?? null), backgroundColor: 'rgba(77, 77, 77, 0.45)', borderColor: COLOURS.difference, borderWidth: 1,
+      data: s.rows.map((r) => r.difference ?? null), backgroundColor: translucent(INK, 0.45), borderColor: COLOURS.difference, borderWidth: 1,
       yAxisID: s.chart === 'both' ? 'y2' : 'y', order: 2 });
     const scales = { x: { title: { display: true, text: t(`library.compare.col.${s.id}`) || '' } },
       y: { title: { display: true, text: s.chart === 'both' ? s.axis : `${t('library.compare.difference')} (${s.rows[0].differenceUnit})` } } };

@@ -1,4 +1,5 @@
 import { postForm, showFieldErrors, clearFieldErrors } from '../common/api.js';
+import { clearOverlay } from '../common/charts.js';
 // Helpers of the measurement and listening panels: load a panel's HTML (its text comes from
 // messages/measurements.properties through the server), read its texts, format numbers.
 
@@ -23,6 +24,19 @@ export async function loadPanel(section, name) {
   holder.innerHTML = await response.text();
   const panel = holder.querySelector(`[data-panel="${name}"]`);
   section.appendChild(panel);
+  return panel;
+}
+
+/**
+ * Mounts a panel into the first of sectionIds the page has: loads it (loadPanel) and puts it and its texts into
+ * state.panel and state.t. Resolves to the panel, or null when the page has none of the sections.
+ */
+export async function mountPanel(state, sectionIds, name) {
+  const section = [].concat(sectionIds).map((id) => document.getElementById(id)).find(Boolean);
+  if (!section) return null;
+  const panel = await loadPanel(section, name);
+  state.panel = panel;
+  state.t = texts(panel);
   return panel;
 }
 
@@ -74,6 +88,48 @@ export async function sendUpload(state, form, url, data) {
   clearFieldErrors(form);
   status.textContent = '';
   return result.data;
+}
+
+/** The upload form's file as multipart data (part "file"), or null (and "noFile" said) when none is chosen. */
+export function uploadData(state, form) {
+  const file = form.elements.file.files[0];
+  if (!file) {
+    role(state.panel, 'status').textContent = state.t('noFile');
+    return null;
+  }
+  const data = new FormData();
+  data.append('file', file);
+  return data;
+}
+
+/**
+ * Sends a measurement upload (sendUpload): its answer becomes state.measured, and a refused one clears what an
+ * earlier one left (clearMeasured). Resolves to true when there is a new measurement to show.
+ */
+export async function measure(state, form, url, data, canvasId) {
+  const measured = await sendUpload(state, form, url, data);
+  if (!measured) {
+    clearMeasured(state, canvasId);
+    return false;
+  }
+  state.measured = measured;
+  return true;
+}
+
+/** A refused upload leaves no earlier result, table or chart under its error; the overlay on canvasId goes too. */
+export function clearMeasured(state, canvasId) {
+  state.measured = null;
+  role(state.panel, 'result').hidden = true;
+  role(state.panel, 'peaks').tBodies[0].replaceChildren();
+  role(state.panel, 'own-chart').hidden = true;
+  clearOverlay(canvasId, 'measured');
+}
+
+/** A table row of text cells. */
+export function textRow(cells) {
+  const tr = document.createElement('tr');
+  tr.replaceChildren(...cells.map((c) => Object.assign(document.createElement('td'), { textContent: String(c) })));
+  return tr;
 }
 
 /** A sign on a listening panel that something is sounding, for as long as it sounds. */

@@ -21,7 +21,7 @@ function value(id) {
 }
 
 function say(problem) {
-  const unclaimed = showFieldErrors($('measure-form'), problem);
+  const unclaimed = showFieldErrors($('measure-form'), state.api.shownProblem(problem));
   $('measure-problem').textContent = unclaimed.length ? unclaimed.join('; ') : (problem?.errors?.length ? '' : problem?.detail || '');
 }
 
@@ -40,7 +40,8 @@ async function readRecording(file = $('measure-wav').files[0]) {
 }
 
 function request() {
-  const r = { lengthMm: value('measure-length'), widthMm: value('measure-width'), thicknessMm: value('measure-thickness'),
+  const mm = (id) => state.api.lengthMm($(id)); // in the bench's length unit, as mm
+  const r = { lengthMm: mm('measure-length'), widthMm: mm('measure-width'), thicknessMm: mm('measure-thickness'),
     massG: value('measure-mass') };
   const material = document.getElementById('material').value;
   if (material && material !== 'measured') r.material = material;

@@ -1,6 +1,8 @@
 // The plate bench: outline, thickness, material, edges and braces to a request; the modes back as a
-// table, a gallery of shape maps with node lines, and a tap preview.
+// table, a gallery of shape maps with node lines, and a tap preview. Lengths are typed in mm or inches
+// (js/common/units.js); requests speak mm.
 import { getJson, postJson, showFieldErrors, clearFieldErrors } from '../common/api.js';
+import { parseNumber, toMm, textFromMm, textToMm, problemInUserUnits } from '../common/units.js';
 import { mountDesignBar } from '../common/design-bar.js';
 import { drawMode } from './plate-map.js';
 import { mountSolver } from './solver-panel.js';
@@ -23,6 +25,44 @@ function numberOrText(value) {
   return Number.isFinite(n) ? n : t;
 }
 
+// --- lengths in the unit shown --------------------------------------------------------------
+// Every length input carries data-length: "one" (a single number) or "list" (numbers in a text, such as
+// "x, y" a line). An input written from mm keeps that exact mm text (data-mm) while it shows the same text
+// (data-shown), so switching units back and forth never changes a value the maker did not touch.
+let unit = 'mm';
+
+/** Writes a length (a number or a text of numbers, in mm) into an input in the unit shown. */
+function writeLength(input, mm) {
+  const text = mm === null || mm === undefined ? '' : String(mm);
+  input.value = textFromMm(text, unit);
+  input.dataset.mm = text;
+  input.dataset.shown = input.value;
+}
+
+/** An input's length as mm text: exact when untouched since written, else what is typed, converted. */
+function lengthText(input) {
+  if (input.dataset.mm !== undefined && input.dataset.shown === input.value) return input.dataset.mm;
+  if (input.dataset.length !== 'one') return textToMm(input.value, unit);
+  const v = parseNumber(input.value);
+  return Number.isFinite(v) ? String(toMm(v, unit)) : input.value; // not a number: sent as typed, the server names it
+}
+
+/** A single length input as mm (a number), null when empty, or its text as typed when it is no number. */
+function lengthMm(input) {
+  return numberOrText(lengthText(input));
+}
+
+function setUnit(next) {
+  const inputs = [...document.querySelectorAll('[data-length]')];
+  const mm = inputs.map(lengthText);
+  unit = next;
+  inputs.forEach((input, i) => writeLength(input, mm[i]));
+  document.querySelectorAll('[data-unit-label="length"]').forEach((el) => { el.textContent = unit === 'inch' ? 'in' : 'mm'; });
+}
+
+/** A problem document with its lengths in the unit shown. */
+const shownProblem = (problem) => problemInUserUnits(problem, { length: unit });
+
 function outlineKind() {
   return document.getElementById('outline-points-kind').checked ? 'points' : 'rectangle';
 }
@@ -41,22 +81,23 @@ function parsePoints(text) {
 function addBraceRow(b = { fromMm: [50, 150], toMm: [350, 150], widthMm: 8, heightMm: 12 }) {
   const tr = document.createElement('tr');
   const index = braceRows.children.length;
-  const cell = (field, value) => {
+  const cell = (field, value, kind) => {
     const td = document.createElement('td');
     const input = document.createElement('input');
     input.type = 'text';
     input.inputMode = 'decimal';
-    input.value = value;
     input.dataset.role = field;
+    input.dataset.length = kind;
+    writeLength(input, value);
     td.appendChild(input);
     return td;
   };
   const head = document.createElement('td');
   head.textContent = String(index + 1);
   tr.appendChild(head);
-  const from = cell('from', `${b.fromMm[0]}, ${b.fromMm[1]}`);
-  const to = cell('to', `${b.toMm[0]}, ${b.toMm[1]}`);
-  tr.append(from, to, cell('width', b.widthMm), cell('height', b.heightMm));
+  const from = cell('from', `${b.fromMm[0]}, ${b.fromMm[1]}`, 'list');
+  const to = cell('to', `${b.toMm[0]}, ${b.toMm[1]}`, 'list');
+  tr.append(from, to, cell('width', b.widthMm, 'one'), cell('height', b.heightMm, 'one'));
   const rm = document.createElement('td');
   const button = document.createElement('button');
   button.type = 'button';
@@ -84,17 +125,17 @@ function getParameters() {
   const request = {};
   if (outlineKind() === 'rectangle') {
     request.outline = 'rectangle';
-    request.lengthMm = numberOrText(document.getElementById('lengthMm').value);
-    request.widthMm = numberOrText(document.getElementById('widthMm').value);
+    request.lengthMm = lengthMm(document.getElementById('lengthMm'));
+    request.widthMm = lengthMm(document.getElementById('widthMm'));
   } else {
-    request.outline = parsePoints(document.getElementById('outline-points').value);
+    request.outline = parsePoints(lengthText(document.getElementById('outline-points')));
     if (document.getElementById('mirrorHalf').checked) request.mirrorHalf = true;
   }
-  const points = parsePoints(document.getElementById('thickness-points').value);
+  const points = parsePoints(lengthText(document.getElementById('thickness-points')));
   if (points.length > 0) {
     request.thicknessPoints = points.map(([xMm, yMm, thicknessMm]) => ({ xMm, yMm, thicknessMm }));
   } else {
-    request.thicknessMm = numberOrText(document.getElementById('thicknessMm').value);
+    request.thicknessMm = lengthMm(document.getElementById('thicknessMm'));
   }
   const material = document.getElementById('material').value;
   if (material === MEASURED && measuredMaterial) {
@@ -105,10 +146,10 @@ function getParameters() {
   request.edges = document.getElementById('edges').value;
   request.modeCount = numberOrText(document.getElementById('modeCount').value);
   request.braces = [...braceRows.children].map((tr) => ({
-    fromMm: tr.querySelector('[data-role="from"]').value.split(/[\s,]+/).filter((s) => s).map(numberOrText),
-    toMm: tr.querySelector('[data-role="to"]').value.split(/[\s,]+/).filter((s) => s).map(numberOrText),
-    widthMm: numberOrText(tr.querySelector('[data-role="width"]').value),
-    heightMm: numberOrText(tr.querySelector('[data-role="height"]').value),
+    fromMm: lengthText(tr.querySelector('[data-role="from"]')).split(/[\s,]+/).filter((s) => s).map(numberOrText),
+    toMm: lengthText(tr.querySelector('[data-role="to"]')).split(/[\s,]+/).filter((s) => s).map(numberOrText),
+    widthMm: lengthMm(tr.querySelector('[data-role="width"]')),
+    heightMm: lengthMm(tr.querySelector('[data-role="height"]')),
   }));
   return request;
 }
@@ -118,16 +159,16 @@ function setParameters(p) {
   document.getElementById('outline-rectangle').checked = rect;
   document.getElementById('outline-points-kind').checked = !rect;
   if (rect) {
-    document.getElementById('lengthMm').value = p.lengthMm ?? '';
-    document.getElementById('widthMm').value = p.widthMm ?? '';
+    writeLength(document.getElementById('lengthMm'), p.lengthMm);
+    writeLength(document.getElementById('widthMm'), p.widthMm);
   } else {
-    document.getElementById('outline-points').value = p.outline.map((pt) => pt.join(', ')).join('\n');
+    writeLength(document.getElementById('outline-points'), p.outline.map((pt) => pt.join(', ')).join('\n'));
     document.getElementById('mirrorHalf').checked = !!p.mirrorHalf;
   }
   showOutlineKind();
-  document.getElementById('thicknessMm').value = p.thicknessMm ?? '';
-  document.getElementById('thickness-points').value = (p.thicknessPoints || [])
-    .map((q) => `${q.xMm}, ${q.yMm}, ${q.thicknessMm}`).join('\n');
+  writeLength(document.getElementById('thicknessMm'), p.thicknessMm);
+  writeLength(document.getElementById('thickness-points'), (p.thicknessPoints || [])
+    .map((q) => `${q.xMm}, ${q.yMm}, ${q.thicknessMm}`).join('\n'));
   if (p.material) {
     document.getElementById('material').value = p.material;
   } else if (p.elasticAlongPa != null) {
@@ -192,6 +233,9 @@ function showResults(response) {
     figure.appendChild(canvas);
     const caption = document.createElement('figcaption');
     caption.textContent = `${m.n}: ${m.frequencyHz.toFixed(1)} Hz ${m.name || ''}`;
+    caption.id = `${canvas.id}-caption`;
+    canvas.setAttribute('role', 'img');
+    canvas.setAttribute('aria-labelledby', caption.id);
     figure.appendChild(caption);
     gallery.appendChild(figure);
     drawMode(canvas, m);
@@ -223,8 +267,9 @@ async function analyze() {
   problemLine.textContent = '';
   const result = await postJson('/api/v1/plates/analyze', getParameters());
   if (!result.ok) {
-    const unclaimed = showFieldErrors(form, result.problem);
-    problemLine.textContent = unclaimed.length ? unclaimed.join('; ') : (result.problem && result.problem.detail) || '';
+    const problem = shownProblem(result.problem);
+    const unclaimed = showFieldErrors(form, problem);
+    problemLine.textContent = unclaimed.length ? unclaimed.join('; ') : (problem && problem.detail) || '';
     return false;
   }
   showResults(result.data);
@@ -248,10 +293,12 @@ async function start() {
   });
   document.querySelectorAll('input[name="outline-kind"]').forEach((r) => r.addEventListener('change', showOutlineKind));
   document.getElementById('add-brace').addEventListener('click', () => addBraceRow());
+  document.getElementById('plate-units').addEventListener('change', (e) => { setUnit(e.target.value); analyze(); });
   form.addEventListener('submit', (e) => { e.preventDefault(); analyze(); });
   const bar = document.getElementById('design-bar');
   if (bar) mountDesignBar(bar, { kind: 'plate', getParameters, setParameters, formRoot: form });
-  const api = { getParameters, setParameters, analyze, last: () => lastResponse, useMaterialConstants };
+  const api = { getParameters, setParameters, analyze, last: () => lastResponse, useMaterialConstants, lengthMm,
+    shownProblem };
   mountSolver(api);
   mountMeasure(api);
   const url = new URL(window.location.href);
@@ -259,5 +306,5 @@ async function start() {
 }
 
 start();
-window.nodewrightPlates = { last: () => lastResponse, parameters: () => getParameters(),
+window.nodewrightPlates = { last: () => lastResponse, parameters: () => getParameters(), unit: () => unit,
   tap: () => lastResponse && tap(lastResponse.modes.slice(0, 6)) };

@@ -1,15 +1,15 @@
 // The plate thickness solver: targets for chosen modes, the unknowns and limits, a job on the shared solve
 // machinery (POST /api/v1/inverse/plate-thickness, polled, cancellable), its answer (cents per target, the
 // thicknesses to carve, Hz per 0.1 mm removed), "apply to the plate" and the graduation template.
-import { clearFieldErrors, getJson, postJson, sendJson, showFieldErrors } from '../common/api.js';
+import { clearFieldErrors, postJson, showFieldErrors, postForBlob, download } from '../common/api.js';
+import { createJobFollower } from '../common/jobs.js';
 import { parseNumber } from '../common/units.js';
-import { pageText } from '../common/text.js';
-import { postForBlob, download } from '../templates/shared.js';
+import { pageText, labelByColumn } from '../common/text.js';
 
 const POLL_MS = 250;
 const $ = (id) => document.getElementById(id);
 const t = pageText('#plate-text', 'plates.js.');
-const state = { job: null, timer: null, result: null, api: null };
+const state = { result: null, api: null };
 
 /** "F3" stays a note, "174.6" or "174,6" becomes Hz; an empty cell is nothing. */
 function pitch(text) {
@@ -47,6 +47,7 @@ function renumber() {
     const target = tr.querySelector('[data-role="target"]');
     target.dataset.field = `targets[${i}].targetHz`;
   });
+  labelByColumn($('solver-target-rows'));
 }
 
 /** The frequency each target's mode has now, from the bench's last answer. */
@@ -74,8 +75,8 @@ function request() {
   if (braces.length) unknowns.braceHeights = braces;
   const limits = {};
   const limit = (id, key) => {
-    const text = $(id).value.trim();
-    if (text !== '') { const v = parseNumber(text); limits[key] = Number.isFinite(v) ? v : text; }
+    const mm = state.api.lengthMm($(id)); // in the bench's length unit, as mm
+    if (mm !== null) limits[key] = mm;
   };
   limit('solver-min-thickness', 'minThicknessMm');
   limit('solver-max-thickness', 'maxThicknessMm');
@@ -91,7 +92,7 @@ function busy(on) {
 function refuse(problem) {
   // a target's note or Hz problem belongs to its one input
   const errors = (problem?.errors || []).map((e) => ({ ...e, field: e.field.replace(/^(targets\[\d+\])\.note$/, '$1.targetHz') }));
-  const unclaimed = showFieldErrors($('solver-form'), { ...problem, errors });
+  const unclaimed = showFieldErrors($('solver-form'), state.api.shownProblem({ ...problem, errors }));
   $('solver-problem').textContent = unclaimed.length ? unclaimed.join('; ') : (errors.length ? '' : problem?.detail || '');
 }
 
@@ -102,25 +103,28 @@ async function start(event) {
   $('solver-result').hidden = true;
   const answer = await postJson('/api/v1/inverse/plate-thickness', request());
   if (!answer.ok) { refuse(answer.problem); return; }
-  state.job = answer.data.id;
   busy(true);
-  poll();
+  solveJob.follow(answer.data.id);
 }
 
-async function poll() {
-  const answer = await getJson(`/api/v1/inverse/jobs/${encodeURIComponent(state.job)}`);
-  if (!answer.ok) { busy(false); $('solver-status').textContent = t('failed', answer.problem?.detail || ''); return; }
-  const job = answer.data;
-  const p = job.progress || {};
-  $('solver-progress').value = p.fraction || 0;
-  const worst = p.worstCents == null ? '-' : p.worstCents.toFixed(2);
-  if (job.status === 'queued' || job.status === 'running') {
+const solveJob = createJobFollower({
+  interval: POLL_MS,
+  progress(job) {
+    const p = job.progress || {};
+    $('solver-progress').value = p.fraction || 0;
+    const worst = p.worstCents == null ? '-' : p.worstCents.toFixed(2);
     $('solver-status').textContent = t('running', p.evaluations || 0, p.maxEvaluations || 0, worst);
-    state.timer = setTimeout(poll, POLL_MS);
-    return;
-  }
+  },
+  finished,
+  failed(answer) {
+    busy(false);
+    $('solver-status').textContent = t('failed', answer.problem?.detail || '');
+  },
+});
+
+function finished(job) {
+  $('solver-progress').value = (job.progress || {}).fraction || 0;
   busy(false);
-  state.job = null;
   if (job.status === 'succeeded') {
     $('solver-progress').value = 1;
     showResult(job.result);
@@ -180,10 +184,8 @@ function showResult(r) {
 }
 
 async function cancel() {
-  if (!state.job) return;
-  clearTimeout(state.timer);
-  await sendJson('DELETE', `/api/v1/inverse/jobs/${encodeURIComponent(state.job)}`);
-  poll();
+  const answer = await solveJob.cancel();
+  if (answer && !answer.ok) $('solver-status').textContent = t('failed', answer.problem?.detail || answer.status);
 }
 
 async function template(kind) {

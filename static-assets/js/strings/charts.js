@@ -1,7 +1,7 @@
 // The string bench's charts: mode shapes with nodes and antinodes, the node map, partial
 // deviations and the pluck × pickup spectrum. Canvas ids are read by tests and panels.
 import { $, t, io, L, fmtLen } from './context.js';
-import { drawChart, colour, baseOptions, verticalLine, band, levelsDb, chartOn } from '../common/charts.js';
+import { drawChart, colour, baseOptions, verticalLine, band, levelsDb, chartOn, PALETTE, INK, PAPER, translucent } from '../common/charts.js';
 import { buildRequest } from './form.js';
 
 const SPECTRUM_FLOOR_DB = -80;      // lowest level drawn on the spectrum chart
@@ -65,14 +65,14 @@ function markerAnnotations(request) {
   const annotations = {};
   const pluckLabel = request.pluck.kind === 'strike' ? t('strike') : t('pluck');
   if (typeof request.pluck.positionMm === 'number') {
-    annotations.pluck = verticalLine(L(request.pluck.positionMm), pluckLabel, '#a3262a', { draggable: true, labelAt: 'end' });
+    annotations.pluck = verticalLine(L(request.pluck.positionMm), pluckLabel, PALETTE[1], { draggable: true, labelAt: 'end' });
   }
   request.pickups.forEach((pu, i) => {
     if (typeof pu.positionMm !== 'number') return;
     if (pu.apertureMm > 0) {
-      annotations[`aperture${i}`] = band(L(pu.positionMm - pu.apertureMm / 2), L(pu.positionMm + pu.apertureMm / 2), 'rgba(43,93,138,0.15)');
+      annotations[`aperture${i}`] = band(L(pu.positionMm - pu.apertureMm / 2), L(pu.positionMm + pu.apertureMm / 2), translucent(PALETTE[0], 0.15));
     }
-    annotations[`pickup${i}`] = verticalLine(L(pu.positionMm), `${t('pickup')} ${i + 1}`, '#2b5d8a', { dash: [6, 3], draggable: true });
+    annotations[`pickup${i}`] = verticalLine(L(pu.positionMm), `${t('pickup')} ${i + 1}`, PALETTE[0], { dash: [6, 3], draggable: true });
   });
   return annotations;
 }
@@ -124,8 +124,8 @@ export function drawModeShapes(request, response) {
       antinodes.push({ x: L(x), y: row(mode.n) + SHAPE_HALF_HEIGHT * Math.sign(interpolate(samples, x) || 1), n: mode.n });
     }
   }
-  datasets.push({ kind: 'nodes', label: t('nodes'), data: nodes, showLine: false, pointStyle: 'circle', pointRadius: 3.5, backgroundColor: '#1f2a36', borderColor: '#1f2a36' });
-  datasets.push({ kind: 'antinodes', label: t('antinodes'), data: antinodes, showLine: false, pointStyle: 'triangle', pointRadius: 4, backgroundColor: '#fbf8f1', borderColor: '#a86400', borderWidth: 1.5 });
+  datasets.push({ kind: 'nodes', label: t('nodes'), data: nodes, showLine: false, pointStyle: 'circle', pointRadius: 3.5, backgroundColor: INK, borderColor: INK });
+  datasets.push({ kind: 'antinodes', label: t('antinodes'), data: antinodes, showLine: false, pointStyle: 'triangle', pointRadius: 4, backgroundColor: PAPER, borderColor: PALETTE[4], borderWidth: 1.5 });
   const options = baseOptions({});
   options.plugins.legend.labels.filter = (item, data) => data.datasets[item.datasetIndex].kind !== 'mode';
   options.plugins.annotation.annotations = markerAnnotations(liveMarkers(request));
@@ -173,7 +173,7 @@ export function drawPartials(response) {
   } } };
   drawChart($('partials-chart'), {
     type: 'bar',
-    data: { labels: modes.map((m) => String(m.n)), datasets: [{ kind: 'cents', label: t('cents'), data: values, backgroundColor: '#2b5d8a' }] },
+    data: { labels: modes.map((m) => String(m.n)), datasets: [{ kind: 'cents', label: t('cents'), data: values, backgroundColor: PALETTE[0] }] },
     options,
   });
 }

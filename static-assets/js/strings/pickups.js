@@ -83,6 +83,33 @@ function markerInput(id) {
   return row ? row.querySelector('.pickup-position') : null;
 }
 
+/** The name of a marker as the page shows it: Pluck (or Strike), Pickup 1, Pickup 2, ... */
+export function markerName(id) {
+  return id === 'pluck' ? (($('pluckKind').value === 'strike') ? t('strike') : t('pluck'))
+    : `${t('pickup')} ${Number(id.replace('pickup', '')) + 1}`;
+}
+
+/** Where a marker may go, in the user's length unit: one step inside each end of the string. */
+export function markerRange() {
+  const length = io.readLength($('lengthMm'));
+  const step = SLIDER_STEP[io.units.length];
+  const span = Number.isFinite(length) && length > 0 ? fromMm(length, io.units.length) : 2 * step;
+  return { min: step, max: Math.max(step, Math.floor(span / step - 1e-9) * step), step };
+}
+
+/** Decimals a marker position is spoken with in the current unit. */
+export const markerDigits = () => (io.units.length === 'mm' ? 0 : 2);
+
+/** A marker moved from the keyboard (its chart handle): to x in the user's unit, sliders follow. */
+export function nudgeMarker(id, x) {
+  moveMarker(id, toMm(x, io.units.length), false);
+  syncSliders();
+}
+
+function speak(range) {
+  range.setAttribute('aria-valuetext', `${Number(range.value).toFixed(markerDigits())} ${io.units.length}`);
+}
+
 export function buildSliders() {
   const box = $('position-sliders');
   box.replaceChildren();
@@ -91,13 +118,12 @@ export function buildSliders() {
     const label = document.createElement('label');
     label.className = 'slider';
     const name = document.createElement('span');
-    name.textContent = id === 'pluck' ? (($('pluckKind').value === 'strike') ? t('strike') : t('pluck'))
-      : `${t('pickup')} ${Number(id.replace('pickup', '')) + 1}`;
+    name.textContent = markerName(id);
     const range = document.createElement('input');
     range.type = 'range';
     range.id = `slider-${id}`;
     range.dataset.marker = id;
-    range.addEventListener('input', () => moveMarker(id, toMm(Number(range.value), io.units.length), false));
+    range.addEventListener('input', () => { speak(range); moveMarker(id, toMm(Number(range.value), io.units.length), false); });
     label.append(name, range);
     box.append(label);
   }
@@ -120,6 +146,7 @@ export function syncSliders() {
     range.max = String(Math.floor(max / step - 1e-9) * step);
     range.step = String(step);
     if (Number.isFinite(mm)) range.value = String(fromMm(mm, io.units.length));
+    speak(range);
   }
 }
 

@@ -1,7 +1,7 @@
 // Saddle (and nut) compensation for a set of strings.
-import { clearFieldErrors, postJson } from '../common/api.js';
+import { clearFieldErrors } from '../common/api.js';
 import { fmt } from '../common/units.js';
-import { $, t, num, hz as typedHz, showProblem, say } from './shared.js';
+import { $, t, num, hz as typedHz, postChecked } from './shared.js';
 
 const compForm = $('comp-form');
 $('comp-strings').value = ['E4, nylon, 0.71', 'B3, nylon, 0.82', 'G3, nylon, 1.03', 'D3, nylon, 0.38, copper, 0.16',
@@ -36,19 +36,11 @@ compForm.addEventListener('submit', async (e) => {
       ...(p.length === 5 ? { wrapMaterial: p[3], wrapDiameterMm: wd } : {}),
     });
   });
-  if (problems.length) {
-    showProblem(compForm, $('comp-message'), { errors: problems });
-    return;
-  }
-  const answer = await postJson('/api/v1/templates/compensation', request);
-  if (!answer.ok) {
-    showProblem(compForm, $('comp-message'), answer.problem);
-    return;
-  }
-  say($('comp-message'), '');
+  const data = await postChecked(compForm, $('comp-message'), '/api/v1/templates/compensation', { request, problems });
+  if (!data) return;
   const rows = $('comp-rows');
   rows.replaceChildren();
-  answer.data.strings.forEach((s, i) => {
+  data.strings.forEach((s, i) => {
     const tr = document.createElement('tr');
     tr.dataset.setback = s.saddleSetbackMm;
     [String(i + 1), fmt(s.tensionN, 1), fmt(s.saddleSetbackMm, 2), fmt(s.nutSetbackMm, 2),
@@ -57,9 +49,9 @@ compForm.addEventListener('submit', async (e) => {
     rows.appendChild(tr);
   });
   $('comp-table').hidden = false;
-  $('comp-model').textContent = answer.data.model;
+  $('comp-model').textContent = data.model;
   const list = $('comp-assumptions');
   list.replaceChildren();
-  answer.data.assumptions.forEach((a) => { const li = document.createElement('li'); li.textContent = a; list.appendChild(li); });
+  data.assumptions.forEach((a) => { const li = document.createElement('li'); li.textContent = a; list.appendChild(li); });
 });
 

@@ -1,7 +1,7 @@
 // Gauge picker: the gauge per string for a target tension, from the catalogue or a stock list.
-import { clearFieldErrors, postJson } from '../common/api.js';
+import { clearFieldErrors } from '../common/api.js';
 import { fmt } from '../common/units.js';
-import { $, t, num, hz as typedHz, showProblem, say } from './shared.js';
+import { $, t, num, hz as typedHz, postChecked } from './shared.js';
 
 const gaugeForm = $('gauge-form');
 $('gauge-strings').value = ['E4, 72, plain-steel', 'B3, 68, plain-steel', 'G3, 70, plain-steel',
@@ -40,22 +40,13 @@ function gaugeRequest() {
 gaugeForm.addEventListener('submit', async (e) => {
   e.preventDefault();
   clearFieldErrors(gaugeForm);
-  const { request, problems } = gaugeRequest();
-  if (problems.length) {
-    showProblem(gaugeForm, $('gauge-message'), { errors: problems });
-    return;
-  }
-  const answer = await postJson('/api/v1/inverse/gauges', request);
-  if (!answer.ok) {
-    showProblem(gaugeForm, $('gauge-message'), answer.problem);
-    return;
-  }
-  say($('gauge-message'), '');
+  const data = await postChecked(gaugeForm, $('gauge-message'), '/api/v1/inverse/gauges', gaugeRequest());
+  if (!data) return;
   const rows = $('gauge-rows');
   rows.replaceChildren();
   const warnings = $('gauge-warnings');
   warnings.replaceChildren();
-  answer.data.strings.forEach((s, i) => {
+  data.strings.forEach((s, i) => {
     const tr = document.createElement('tr');
     const gauge = s.wound ? `${fmt(s.outerDiameterMm, 3)} mm (${fmt(s.outerDiameterIn, 3)} in) wound`
       : `${fmt(s.diameterMm, 3)} mm (${fmt(s.diameterIn, 4)} in)`;
@@ -70,7 +61,7 @@ gaugeForm.addEventListener('submit', async (e) => {
   });
   const total = document.createElement('tr');
   total.innerHTML = '<td></td><td></td><td></td><td></td><td></td><td></td>';
-  total.children[3].textContent = fmt(answer.data.totalTensionN, 1);
+  total.children[3].textContent = fmt(data.totalTensionN, 1);
   rows.appendChild(total);
   $('gauge-table').hidden = false;
 });

@@ -1,17 +1,18 @@
 // The bore panel: a bore (from the demo or the bore bench), its drilling template, and the
 // tone-hole solver (a job polled for progress, cancellable, whose result can be applied to the
 // bore and opened in the bore bench).
-import { clearFieldErrors, getJson, postJson, sendJson } from '../common/api.js';
+import { clearFieldErrors, getJson, postJson, postForBlob, download } from '../common/api.js';
+import { createJobFollower } from '../common/jobs.js';
 import { fmt } from '../common/units.js';
 import { OPEN_AIR_COLUMN, BORE_FOR_TEMPLATES, handOver, handedOver } from '../common/handover.js';
-import { $, t, num, postForBlob, showProblem, say, showImage, download } from './shared.js';
+import { $, t, num, showProblem, say, showImage } from './shared.js';
 import {
   fingeringLines, parseFingeringLines, parseMeasuredLines, blankTubeBody, calibrationBody, mouthMoves,
 } from './bore-lines.js';
 
 
 const POLL_MS = 200;
-const state = { job: null, result: null, timer: null, polls: 0, limits: {} };
+const state = { result: null, limits: {} };
 
 const borePanel = $('bore-panel');
 
@@ -119,36 +120,30 @@ async function startSolve() {
   startJob('/api/v1/inverse/tone-holes', { bore: { ...bore, fingerings: f.rows }, limits: limits() });
 }
 
-async function poll() {
-  if (!state.job) return;
-  clearTimeout(state.timer);
-  const ticket = ++state.polls;
-  const answer = await getJson(`/api/v1/inverse/jobs/${encodeURIComponent(state.job)}`);
-  if (ticket !== state.polls || !state.job) return; // a later poll (after a cancel) speaks instead
-  if (!answer.ok) {
-    setRunning(false);
-    $('solve-state').textContent = t('error', answer.status);
-    return;
-  }
-  const job = answer.data;
-  const progress = $('solve-progress');
-  progress.value = job.status === 'succeeded' ? 1 : job.progress.fraction;
+/** The solve's status line and progress bar, from each poll of the job. */
+function showJob(job) {
+  $('solve-progress').value = job.status === 'succeeded' ? 1 : job.progress.fraction;
   $('solve-state').dataset.status = job.status;
   if (job.status === 'queued') {
     $('solve-state').textContent = t('queued');
   } else if (job.status === 'running') {
     $('solve-state').textContent = t('running', job.progress.evaluations,
       job.progress.worstCents == null ? '...' : fmt(job.progress.worstCents, 2));
-  } else {
-    finish(job);
-    return;
   }
-  state.timer = setTimeout(poll, POLL_MS);
 }
+
+const solveJob = createJobFollower({
+  interval: POLL_MS,
+  progress: showJob,
+  finished: (job) => { showJob(job); finish(job); },
+  failed: (answer) => {
+    setRunning(false);
+    $('solve-state').textContent = t('error', answer.status);
+  },
+});
 
 function finish(job) {
   setRunning(false);
-  state.job = null;
   if (job.status === 'cancelled') {
     $('solve-state').textContent = t('cancelled');
     return;
@@ -194,14 +189,10 @@ function finish(job) {
 }
 
 async function cancelSolve() {
-  if (!state.job) return;
-  clearTimeout(state.timer);
-  const answer = await sendJson('DELETE', `/api/v1/inverse/jobs/${encodeURIComponent(state.job)}`)
-    .catch((error) => ({ ok: false, status: String(error) }));
-  // A queued job is cancelled at once, a running one at its next evaluation: poll until the job
-  // says so. A refused or lost cancel is said on the page, and the job is still followed.
-  if (!answer.ok) $('solve-state').textContent = t('error', answer.status);
-  poll();
+  // A queued job is cancelled at once, a running one at its next evaluation: the follower polls until
+  // the job says so. A refused or lost cancel is said on the page, and the job is still followed.
+  const answer = await solveJob.cancel();
+  if (answer && !answer.ok) $('solve-state').textContent = t('error', answer.status);
 }
 
 function applyResult() {
@@ -229,10 +220,9 @@ async function startJob(url, body) {
   }
   say($('bore-message'), '');
   $('solve-result').hidden = true;
-  state.job = answer.data.id;
   setRunning(true);
   $('solve-progress').value = 0;
-  poll();
+  solveJob.follow(answer.data.id);
 }
 
 async function loadBlank() {

@@ -155,6 +155,28 @@ class BarBenchIT extends BrowserTestBase {
         screenshot("bar-bench-inline-error");
     }
 
+    /**
+     * A length typed in inches goes to the server in mm (1 in = 25.4 mm exactly, by definition since 1959), and
+     * the bar answers as a bar of that length: a uniform free-free Euler-Bernoulli bar has f = (βL)² √(EI/ρA) /
+     * (2π L²) with βL fixed by the ends, so f ∝ 1/L², which the element model keeps exactly when every element
+     * scales with L.
+     */
+    @Test
+    void aLengthTypedInInchesIsSentInMillimetres() throws Exception {
+        analyzeAndWait(() -> new Select(driver.findElement(By.id("bar-preset"))).selectByValue("glockenspiel"));
+        new Select(driver.findElement(By.id("theory"))).selectByValue("euler-bernoulli");
+        analyzeAndWait(() -> driver.findElement(By.id("analyze-bar")).click());
+        double f160 = lastAnswer().get("modes").get(0).get("frequencyHz").asDouble();
+        analyzeAndWait(() -> new Select(driver.findElement(By.id("bar-units"))).selectByValue("inch"));
+        type("lengthMm", "7");
+        analyzeAndWait(() -> driver.findElement(By.id("analyze-bar")).click());
+        assertThat(((Number) js("return window.nodewrightBars.request().lengthMm;")).doubleValue())
+                .isCloseTo(177.8, within(1e-9));
+        double f178 = lastAnswer().get("modes").get(0).get("frequencyHz").asDouble();
+        assertThat(f178 / f160).isCloseTo(Math.pow(160.0 / 177.8, 2), within(1e-6));
+        assertThat(driver.findElement(By.id("lengthMm")).getDomProperty("value")).isEqualTo("7");
+    }
+
     @Test
     void listenTemplateAndMeasureTheBlank() throws Exception {
         analyzeAndWait(() -> new Select(driver.findElement(By.id("bar-preset"))).selectByValue("marimba"));

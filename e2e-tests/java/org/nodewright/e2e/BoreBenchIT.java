@@ -27,12 +27,7 @@ class BoreBenchIT extends BrowserTestBase {
     @Test
     void aCylinderBuiltInTheEditorGetsItsChartAndOddHarmonics() throws Exception {
         String before = analyzed();
-        buildCylinder(300.0, 15.0);
-        new Select(driver.findElement(By.id("input-end"))).selectByValue("closed");
-        new Select(driver.findElement(By.id("output-end"))).selectByValue("ideal-open");
-        setChecked(driver.findElement(By.id("losses")), false);
-        type(driver.findElement(By.id("f-min")), "20");
-        type(driver.findElement(By.id("f-max")), "3000");
+        buildLosslessClosedOpenCylinder(300.0, 15.0);
         js("window.__airEvents = []; document.addEventListener('nodewright:air-analyzed', e => window.__airEvents.push(e.detail));");
         driver.findElement(By.id("analyze")).click();
         waitForAnalysisAfter(before);
@@ -73,6 +68,31 @@ class BoreBenchIT extends BrowserTestBase {
         driver.findElement(By.id("analyze")).click();
         waitForAnalysisAfter(beforeUnits);
         assertThat(resonanceColumn(1).get(0)).isCloseTo(f.get(0), within(1e-6));
+    }
+
+    /**
+     * A length typed in inches goes to the server in mm (1 in = 25.4 mm exactly): 12 in = 304.8 mm, and the
+     * lossless closed-open cylinder answers f_n = (2n-1) c / 4L for that length, as in mm above.
+     */
+    @Test
+    void aLengthTypedInInchesIsSentInMillimetres() throws Exception {
+        String before = analyzed();
+        buildLosslessClosedOpenCylinder(300.0, 15.0);
+        new Select(driver.findElement(By.id("units"))).selectByValue("inch");
+        type(field("segments[0].lengthMm"), "12");
+        js("window.__airEvents = []; document.addEventListener('nodewright:air-analyzed', e => window.__airEvents.push(e.detail));");
+        driver.findElement(By.id("analyze")).click();
+        waitForAnalysisAfter(before);
+        assertThat(((Number) js("return window.__airEvents[0].request.segments[0].lengthMm")).doubleValue())
+                .isCloseTo(304.8, within(1e-9));
+        double c = speedOfSound();
+        List<Double> f = resonanceColumn(1);
+        for (int n = 1; n <= 3; n++) {
+            // the same 1-cent window as the millimetre cylinder above
+            assertThat(cents(f.get(n - 1), (2 * n - 1) * c / (4 * 0.3048))).as("resonance %d", n)
+                    .isCloseTo(0.0, within(1.0));
+        }
+        assertThat(field("segments[0].lengthMm").getDomProperty("value")).isEqualTo("12");
     }
 
     @Test
@@ -336,6 +356,16 @@ class BoreBenchIT extends BrowserTestBase {
             driver.findElement(By.cssSelector("#fingering-table-view > summary")).click();
         }
         wait.until(d -> Boolean.TRUE.equals(js("return document.getElementById('fingering-table-view').open")));
+    }
+
+    /** One cylinder, closed at the input, ideally open at the output, no losses, 20 to 3000 Hz (f_n = (2n-1) c / 4L). */
+    private void buildLosslessClosedOpenCylinder(double lengthMm, double boreMm) {
+        buildCylinder(lengthMm, boreMm);
+        new Select(driver.findElement(By.id("input-end"))).selectByValue("closed");
+        new Select(driver.findElement(By.id("output-end"))).selectByValue("ideal-open");
+        setChecked(driver.findElement(By.id("losses")), false);
+        type(driver.findElement(By.id("f-min")), "20");
+        type(driver.findElement(By.id("f-max")), "3000");
     }
 
     /** Clears the editor down to one cylinder of the given length and bore, in millimetres. */

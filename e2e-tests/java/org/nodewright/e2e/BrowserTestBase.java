@@ -150,6 +150,32 @@ public abstract class BrowserTestBase {
                 + "return c ? c.data : null;", canvasId);
     }
 
+    /**
+     * Saves a string design through the API (650 mm plain steel 0.30 mm at 70 N, the contract's
+     * example) and returns its id.
+     */
+    protected String saveStringDesign(String name, String author, String notes) throws IOException, InterruptedException {
+        String body = "{\"name\": " + jsonText(name) + ", \"kind\": \"string\", \"author\": " + jsonText(author)
+                + ", \"notes\": " + jsonText(notes) + ", \"parameters\": {\"lengthMm\": 650.0, \"tensionN\": 70.0,"
+                + " \"material\": \"plain-steel\", \"diameterMm\": 0.30, \"endCondition\": \"pinned\","
+                + " \"stiffness\": true, \"modeCount\": 12}}";
+        java.net.http.HttpResponse<String> r = java.net.http.HttpClient.newHttpClient().send(
+                java.net.http.HttpRequest.newBuilder(java.net.URI.create(url("/api/v1/designs")))
+                        .header("Content-Type", "application/json")
+                        .POST(java.net.http.HttpRequest.BodyPublishers.ofString(body)).build(),
+                java.net.http.HttpResponse.BodyHandlers.ofString());
+        java.util.regex.Matcher m = java.util.regex.Pattern.compile("\"id\"\\s*:\\s*(\\d+)").matcher(r.body());
+        if (r.statusCode() != 201 || !m.find()) {
+            throw new IllegalStateException("design not saved: " + r.statusCode() + " " + r.body());
+        }
+        return m.group(1);
+    }
+
+    /** A JSON string literal of s. */
+    protected static String jsonText(String s) {
+        return "\"" + s.replace("\\", "\\\\").replace("\"", "\\\"") + "\"";
+    }
+
     /** Saves a PNG of the page under target/screenshots. */
     protected Path screenshot(String name) throws IOException {
         Path dir = Path.of(System.getProperty("nodewright.screenshots", "target/screenshots"));

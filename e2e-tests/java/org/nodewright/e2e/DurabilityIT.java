@@ -18,6 +18,8 @@ import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.CleanupMode;
+import org.junit.jupiter.api.io.TempDir;
 
 /**
  * Acknowledged writes survive a kill -9: the packaged jar is started as its own process, 20 designs
@@ -31,17 +33,20 @@ class DurabilityIT {
 
     private final HttpClient http = HttpClient.newBuilder().connectTimeout(Duration.ofSeconds(5)).build();
     private Process server;
+    /** The data directory and the servers' logs; kept when a test fails, for its log. */
+    @TempDir(cleanup = CleanupMode.ON_SUCCESS)
+    Path scratch;
 
     @AfterEach
-    void stop() {
+    void stop() throws InterruptedException {
         if (server != null && server.isAlive()) {
-            server.destroyForcibly();
+            server.destroyForcibly().waitFor();
         }
     }
 
     @Test
     void twentyAcknowledgedDesignsAreKeptAcrossKillMinusNine() throws Exception {
-        Path dataDir = Files.createTempDirectory("nodewright-durability-");
+        Path dataDir = Files.createDirectories(scratch.resolve("data"));
         int port = freePort();
         server = start(port, dataDir, "first");
 
@@ -75,7 +80,7 @@ class DurabilityIT {
         String jar = System.getProperty("nodewright.jar");
         assertThat(jar).as("system property nodewright.jar (set by the pom)").isNotNull();
         assertThat(Path.of(jar)).exists();
-        Path log = Files.createTempFile("nodewright-durability-" + label + "-", ".log");
+        Path log = scratch.resolve("durability-" + label + ".log");
         Process p = new ProcessBuilder(List.of(Path.of(System.getProperty("java.home"), "bin", "java").toString(),
                 "-Xmx256m", "-jar", jar, "--server.port=" + port, "--app.data-dir=" + dataDir))
                 .redirectErrorStream(true).redirectOutput(log.toFile()).start();

@@ -33,6 +33,9 @@ class LanLoginIT extends BrowserTestBase {
         // Any page leads to the sign-in form first.
         driver.get(url("/"));
         wait.until(ExpectedConditions.urlContains("/login"));
+        waitFor(By.id("login-form"));
+        // Issue 15 §6: the sign-in page, like every other, has no serious or critical axe violation.
+        assertThat(AxeCheck.seriousViolations(driver)).as("axe on /login").isEmpty();
         signIn("admin", "not-the-password");
         assertThat(waitFor(By.id("login-error")).getText()).contains("do not match");
         screenshot("lan-login-error");
@@ -71,6 +74,7 @@ class LanLoginIT extends BrowserTestBase {
         assertThat(driver.findElement(By.cssSelector("tr[data-account='fetched'] .account-status")).getText())
                 .isEqualTo("enabled");
         screenshot("lan-accounts-page");
+        assertThat(AxeCheck.seriousViolations(driver)).as("axe on /admin/accounts").isEmpty();
 
         // ... and disables one.
         driver.findElement(By.cssSelector("tr[data-account='fetched'] .toggle-enabled")).click();

@@ -28,7 +28,6 @@ class LibraryIT extends BrowserTestBase {
     private static final String STRINGS = "/strings";
     /** A test-only bench page (src/test/resources) with three plain inputs, no live analysis of its own. */
     private static final String TEST_BENCH = "/e2e/design-bar-test.html";
-    private static final Pattern ID = Pattern.compile("\"id\"\\s*:\\s*(\\d+)");
 
     private final HttpClient http = HttpClient.newHttpClient();
 
@@ -251,17 +250,7 @@ class LibraryIT extends BrowserTestBase {
     }
 
     private String create(String name, String author, String notes) throws Exception {
-        String body = "{\"name\": " + json(name) + ", \"kind\": \"string\", \"author\": " + json(author)
-                + ", \"notes\": " + json(notes) + ", \"parameters\": {\"lengthMm\": 650.0, \"tensionN\": 70.0,"
-                + " \"material\": \"plain-steel\", \"diameterMm\": 0.30, \"endCondition\": \"pinned\","
-                + " \"stiffness\": true, \"modeCount\": 12}}";
-        HttpResponse<String> r = http.send(HttpRequest.newBuilder(URI.create(url("/api/v1/designs")))
-                .header("Content-Type", "application/json").POST(HttpRequest.BodyPublishers.ofString(body)).build(),
-                HttpResponse.BodyHandlers.ofString());
-        assertThat(r.statusCode()).as(r.body()).isEqualTo(201);
-        Matcher m = ID.matcher(r.body());
-        assertThat(m.find()).isTrue();
-        return m.group(1);
+        return saveStringDesign(name, author, notes);
     }
 
     private String get(String path) throws Exception {
@@ -274,9 +263,5 @@ class LibraryIT extends BrowserTestBase {
         Matcher m = Pattern.compile("\"tensionN\":([0-9.eE+-]+)").matcher(designJson);
         assertThat(m.find()).as(designJson).isTrue();
         return Double.parseDouble(m.group(1));
-    }
-
-    private static String json(String s) {
-        return "\"" + s.replace("\\", "\\\\").replace("\"", "\\\"") + "\"";
     }
 }

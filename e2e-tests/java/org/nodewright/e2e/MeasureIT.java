@@ -156,6 +156,10 @@ class MeasureIT extends BrowserTestBase {
         Object points = js("const c = Chart.getChart(document.getElementById('impedance-chart'));"
                 + "const ds = c.data.datasets.find(d => d.kind === 'measured'); return ds ? ds.data.length : 0;");
         assertThat(((Number) points).longValue()).isEqualTo(1501);
+        // Issue 16 polish: the measured curve has its entry in the chart's legend, phase hidden or not.
+        Object legend = js("const c = Chart.getChart(document.getElementById('impedance-chart'));"
+                + "return c.legend.legendItems.map(i => i.text);");
+        assertThat((List<Object>) legend).contains("Measured |Z|");
         WebElement listen = waitFor(By.cssSelector("#listen-panel [data-panel='listen-air'] [data-role='play']"));
         screenshot("measure-air-impedance");
         assertThat((List<Object>) js("return window.__pageErrors")).isEmpty();

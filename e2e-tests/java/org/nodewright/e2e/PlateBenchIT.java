@@ -87,6 +87,49 @@ class PlateBenchIT extends BrowserTestBase {
         assertThat(driver.findElements(By.cssSelector("#brace-rows tr"))).hasSize(1);
     }
 
+    private double parameter(String name) {
+        return ((Number) js("return window.nodewrightPlates.parameters()." + name + ";")).doubleValue();
+    }
+
+    /**
+     * Inches on the plate bench (1 in = 25.4 mm exactly, by definition since 1959): the spruce test plate's lengths
+     * shown in inches send the same millimetres (same modes); a thickness typed in inches is sent in mm and moves
+     * the free plate's modes as Kirchhoff's f ∝ h says (ω ∝ √(D/ρh), D ∝ h³; Leissa 1969); a refused length is
+     * said in inches.
+     */
+    @Test
+    void lengthsTypedInInchesAreSentInMillimetres() throws Exception {
+        long before = count();
+        new Select(driver.findElement(By.id("plate-preset"))).selectByValue("test-rectangle");
+        wait.until(d -> count() > before);
+        double f1 = frequency(1);
+        long beforeUnits = count();
+        new Select(driver.findElement(By.id("plate-units"))).selectByValue("inch");
+        wait.until(d -> count() > beforeUnits);
+        // 400 mm = 15.7480 in, 300 mm = 11.8110 in, 3 mm = 0.1181 in (shown to four decimals)
+        assertThat(driver.findElement(By.id("lengthMm")).getDomProperty("value")).isEqualTo("15.748");
+        assertThat(driver.findElement(By.id("widthMm")).getDomProperty("value")).isEqualTo("11.811");
+        assertThat(driver.findElement(By.id("thicknessMm")).getDomProperty("value")).isEqualTo("0.1181");
+        assertThat(driver.findElement(By.cssSelector("[data-unit-label='length']")).getText()).isEqualTo("in");
+        // untouched values go on the wire as the exact millimetres they were
+        assertThat(parameter("lengthMm")).isEqualTo(400.0);
+        assertThat(parameter("thicknessMm")).isEqualTo(3.0);
+        assertThat(frequency(1)).isEqualTo(f1);
+
+        type("thicknessMm", "0.25");
+        analyzeAndWait();
+        assertThat(parameter("thicknessMm")).isCloseTo(6.35, within(1e-9));
+        assertThat(frequency(1) / f1).isCloseTo(6.35 / 3.0, within(1e-3));
+
+        type("lengthMm", "0");
+        driver.findElement(By.id("analyze-plate")).click();
+        WebElement error = driver.findElement(By.cssSelector("[data-error-for='lengthMm']"));
+        wait.until(d -> !error.getText().isEmpty());
+        // the server's "must be at least 1 mm" shown in the unit chosen: 1 mm = 0.0393701 in
+        assertThat(error.getText()).contains("0.0393701 in").doesNotContain("mm");
+        screenshot("plate-bench-inches");
+    }
+
     @Test
     void badInputIsShownBesideTheField() throws Exception {
         type("thicknessMm", "0");

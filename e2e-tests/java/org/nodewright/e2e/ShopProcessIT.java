@@ -30,6 +30,8 @@ import javax.net.ssl.TrustManager;
 import javax.net.ssl.X509TrustManager;
 import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.CleanupMode;
+import org.junit.jupiter.api.io.TempDir;
 
 /**
  * The packaged jar in LAN mode as its own process: HTTPS with a self-signed certificate that is
@@ -47,19 +49,28 @@ class ShopProcessIT {
 
     private final List<Process> processes = new ArrayList<>();
     private HttpClient https;
+    /** The data directories, the backup file and the servers' logs; kept when the test fails, for its logs. */
+    @TempDir(cleanup = CleanupMode.ON_SUCCESS)
+    Path scratch;
 
     @AfterEach
-    void stop() {
-        processes.forEach(Process::destroyForcibly);
+    void stop() throws InterruptedException {
+        for (Process p : processes) {
+            p.destroyForcibly().waitFor();
+        }
+    }
+
+    private Path log(String name) {
+        return scratch.resolve(name + ".log");
     }
 
     @Test
     void lanModeOverHttpsPasswordsAuditBackupAndRestore() throws Exception {
         https = HttpClient.newBuilder().sslContext(trustAnything()).connectTimeout(Duration.ofSeconds(5)).build();
         HttpClient plain = HttpClient.newBuilder().connectTimeout(Duration.ofSeconds(5)).build();
-        Path dataDir = Files.createTempDirectory("nodewright-shop-process-");
+        Path dataDir = Files.createDirectories(scratch.resolve("data"));
         int port = freePort();
-        Path log1 = Files.createTempFile("nodewright-shop-1-", ".log");
+        Path log1 = log("shop-1");
         Process server = startLan(port, dataDir, log1);
 
         // TLS, with the fingerprint the server logged, showed on the sign-in page and serves.
@@ -82,7 +93,7 @@ class ShopProcessIT {
         assertThat(clear.body()).doesNotContain("\"username\"");
 
         // A second process on the same data directory is refused with one plain message.
-        Path log2 = Files.createTempFile("nodewright-shop-locked-", ".log");
+        Path log2 = log("shop-locked");
         Process second = start(List.of("--server.port=" + freePort(), "--app.data-dir=" + dataDir), log2);
         assertThat(second.waitFor(480, TimeUnit.SECONDS)).isTrue();
         assertThat(second.exitValue()).isNotZero();
@@ -149,7 +160,7 @@ class ShopProcessIT {
         // Restart: the same certificate, the changed password still the one.
         server.destroy();
         assertThat(server.waitFor(60, TimeUnit.SECONDS)).isTrue();
-        server = startLan(port, dataDir, Files.createTempFile("nodewright-shop-3-", ".log"));
+        server = startLan(port, dataDir, log("shop-3"));
         assertThat(servedFingerprint(port)).isEqualTo(served);
         assertThat(send("GET", port, "/api/v1/materials", "luthier-cara", "maple-back-43", null).statusCode())
                 .isEqualTo(200);
@@ -157,22 +168,22 @@ class ShopProcessIT {
         assertThat(server.waitFor(60, TimeUnit.SECONDS)).isTrue();
 
         // Restore: refused into the live (non-empty) folder, done into an empty one, with every acknowledged design.
-        Path file = Files.createTempFile("nodewright-shop-backup-", ".zip");
+        Path file = scratch.resolve("shop-backup.zip");
         Files.write(file, backup.body());
-        Path refusedLog = Files.createTempFile("nodewright-restore-refused-", ".log");
+        Path refusedLog = log("restore-refused");
         Process refused = start(List.of("--app.restore=" + file, "--app.data-dir=" + dataDir), refusedLog);
         assertThat(refused.waitFor(300, TimeUnit.SECONDS)).isTrue();
         assertThat(refused.exitValue()).isEqualTo(2);
         assertThat(Files.readString(refusedLog)).contains("not empty");
-        Path restored = Files.createTempDirectory("nodewright-shop-restored-").resolve("data");
+        Path restored = Files.createDirectories(scratch.resolve("restored")).resolve("data");
         Process restore = start(List.of("--app.restore=" + file, "--app.data-dir=" + restored),
-                Files.createTempFile("nodewright-restore-", ".log"));
+                log("restore"));
         assertThat(restore.waitFor(300, TimeUnit.SECONDS)).isTrue();
         assertThat(restore.exitValue()).isZero();
 
         int localPort = freePort();
         Process local = start(List.of("--server.port=" + localPort, "--app.data-dir=" + restored),
-                Files.createTempFile("nodewright-shop-local-", ".log"));
+                log("shop-local"));
         waitUp(local, () -> plain.send(HttpRequest.newBuilder(URI.create("http://127.0.0.1:" + localPort
                 + "/actuator/health")).build(), HttpResponse.BodyHandlers.ofString()));
         for (long id : beforeBackup) {

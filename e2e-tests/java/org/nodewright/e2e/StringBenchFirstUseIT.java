@@ -119,6 +119,53 @@ class StringBenchFirstUseIT extends StringPageTestBase {
         assertThat(driver.findElement(By.id("pickup-0-position")).getAttribute("value")).isEqualTo("610");
     }
 
+    /**
+     * Issue 15 §6: the pluck and pickup lines on the node map are sliders for the keyboard too. Tab
+     * reaches each line's handle (role slider, named, with its value and unit); the arrow keys move
+     * it a millimetre, Page Up ten, End to one step short of the bridge; the form, the native slider
+     * and the analysis follow.
+     */
+    @Test
+    void theMarkersOnTheNodeMapMoveWithTheArrowKeys() {
+        WebElement handle = waitFor(By.cssSelector("#node-map-chart ~ .line-handle[data-marker='pluck']"));
+        assertThat(handle.getAttribute("role")).isEqualTo("slider");
+        assertThat(handle.getAttribute("aria-label")).isEqualTo("Pluck");
+        assertThat(handle.getAttribute("aria-valuenow")).isEqualTo("520");
+        assertThat(handle.getAttribute("aria-valuetext")).isEqualTo("520 mm");
+        assertThat(handle.getAttribute("aria-valuemax")).isEqualTo("649");
+        // Reached from the keyboard: tabbing from the last form control before the chart lands on a handle.
+        js("arguments[0].focus();", driver.findElement(By.id("analyze-button")));
+        boolean reached = false;
+        for (int i = 0; i < 80 && !reached; i++) {
+            new org.openqa.selenium.interactions.Actions(driver).sendKeys(org.openqa.selenium.Keys.TAB).perform();
+            reached = Boolean.TRUE.equals(js("return document.activeElement.dataset.marker === 'pluck'"
+                    + " && document.activeElement.classList.contains('line-handle');"));
+        }
+        assertThat(reached).as("the pluck handle is in the tab order").isTrue();
+        // The focused handle has a visible focus ring (outline drawn, not 'none').
+        assertThat(js("return getComputedStyle(document.activeElement).outlineStyle;")).isNotEqualTo("none");
+
+        long before = analyses();
+        org.openqa.selenium.interactions.Actions keys = new org.openqa.selenium.interactions.Actions(driver);
+        keys.sendKeys(org.openqa.selenium.Keys.ARROW_RIGHT).perform();
+        wait.until(d -> "521".equals(d.findElement(By.id("pluckPosition")).getAttribute("value")));
+        keys.sendKeys(org.openqa.selenium.Keys.PAGE_UP).perform();
+        wait.until(d -> "531".equals(d.findElement(By.id("pluckPosition")).getAttribute("value")));
+        wait.until(d -> analyses() > before && num(js("return window.lastAnalysis.request.pluck.positionMm;")) == 531.0);
+        assertThat(driver.findElement(By.id("slider-pluck")).getAttribute("value")).isEqualTo("531");
+        assertThat(num(js("return Chart.getChart(document.getElementById('node-map-chart'))"
+                + ".options.plugins.annotation.annotations.pluck.xMin;"))).isEqualTo(531.0);
+        keys.sendKeys(org.openqa.selenium.Keys.END).perform();
+        wait.until(d -> "649".equals(d.findElement(By.id("pluckPosition")).getAttribute("value")));
+        assertThat(driver.findElement(By.cssSelector("#node-map-chart ~ .line-handle[data-marker='pluck']"))
+                .getAttribute("aria-valuenow")).isEqualTo("649");
+        // The chart has its text alternative: an image named by its panel, described by a table of its numbers.
+        WebElement canvas = driver.findElement(By.id("node-map-chart"));
+        assertThat(canvas.getAttribute("role")).isEqualTo("img");
+        assertThat(canvas.getAttribute("aria-describedby")).contains("node-map-chart-numbers").contains("modes-table");
+        assertThat(driver.findElements(By.cssSelector("#node-map-chart-numbers tbody tr"))).hasSize(12);
+    }
+
     @Test
     void switchingFromPitchToTensionKeepsTheSolvedTension() {
         type("targetHz", "E4");
@@ -154,6 +201,32 @@ class StringBenchFirstUseIT extends StringPageTestBase {
         // 650 mm = 25.59055 inch (1 inch = 25.4 mm exactly).
         assertThat(driver.findElement(By.id("lengthMm")).getAttribute("value")).isEqualTo("25.59055");
         assertThat(driver.findElement(By.cssSelector("#design-bar [data-role='who']")).getAttribute("value")).isEqualTo("Ada");
+    }
+
+    @Test
+    void aColleagueOpeningADesignSavedInInchesAndPoundsSeesItInInchesAndPounds() throws Exception {
+        // Issue 16 item 8: the units travel with the design, not only in the browser that saved it.
+        new org.openqa.selenium.support.ui.Select(driver.findElement(By.id("length-unit"))).selectByValue("inch");
+        new org.openqa.selenium.support.ui.Select(driver.findElement(By.id("force-unit"))).selectByValue("lbf");
+        WebElement bar = waitFor(By.cssSelector("#design-bar[data-ready='true']"));
+        bar.findElement(By.cssSelector("[data-role='name']")).sendKeys("Parlour first string for Bram");
+        bar.findElement(By.cssSelector("[data-role='save']")).click();
+        wait.until(d -> d.findElement(By.id("design-bar")).getAttribute("data-design-id") != null);
+        String id = driver.findElement(By.id("design-bar")).getAttribute("data-design-id");
+
+        // Another person's browser: its own profile, so nothing of the first browser's storage.
+        org.openqa.selenium.WebDriver colleague = newBrowser();
+        try {
+            var theirWait = new org.openqa.selenium.support.ui.WebDriverWait(colleague, java.time.Duration.ofSeconds(15));
+            colleague.get(url("/strings?design=" + id));
+            theirWait.until(d -> id.equals(d.findElement(By.id("design-bar")).getAttribute("data-design-id")));
+            assertThat(colleague.findElement(By.id("length-unit")).getAttribute("value")).isEqualTo("inch");
+            assertThat(colleague.findElement(By.id("force-unit")).getAttribute("value")).isEqualTo("lbf");
+            // 650 mm = 25.59055 inch (1 inch = 25.4 mm exactly).
+            assertThat(colleague.findElement(By.id("lengthMm")).getAttribute("value")).isEqualTo("25.59055");
+        } finally {
+            colleague.quit();
+        }
     }
 
     @Test

@@ -100,7 +100,9 @@ class StringSetPlannerIT extends StringPageTestBase {
         // An octave up needs four times the tension (T = mu (2 L f)^2): about 5.7 GPa in a 0.254 mm wire.
         wait.until(d -> driver.findElements(By.cssSelector("#set-results tbody tr:first-child td.strong")).size() > 0);
         Object colour = js("return Chart.getChart(document.getElementById('set-tension-chart')).data.datasets[0].backgroundColor[0];");
-        assertThat(colour).isEqualTo("#a3262a");
+        // The palette's danger colour (one home: --danger in nodewright.css, STATE.danger in charts.js).
+        Object danger = js("return getComputedStyle(document.documentElement).getPropertyValue('--danger').trim();");
+        assertThat(String.valueOf(colour)).isEqualToIgnoringCase(String.valueOf(danger));
         assertThat(driver.findElement(By.cssSelector("#set-results tbody tr:first-child")).getText()).contains("E5");
         js("document.getElementById('set-total').scrollIntoView();");
         screenshot("set-planner-over-strength");
@@ -126,5 +128,29 @@ class StringSetPlannerIT extends StringPageTestBase {
         for (int i = 0; i < before.size(); i++) {
             assertThat(num(after.get(i))).isCloseTo(num(before.get(i)), within(1e-9));
         }
+    }
+
+    /**
+     * A scale length typed in inches goes to the server in mm (1 in = 25.4 mm exactly): 25 in = 635 mm, and at the
+     * same pitches and gauges every tension follows Mersenne's law T = mu (2 L f)^2, so each bar moves by
+     * (635 / 650)^2.
+     */
+    @Test
+    void aScaleLengthTypedInInchesIsSentInMillimetres() throws Exception {
+        List<Object> at650 = bars();
+        new org.openqa.selenium.support.ui.Select(driver.findElement(By.id("length-unit"))).selectByValue("inch");
+        WebElement length = driver.findElement(By.id("setLengthMm"));
+        length.clear();
+        length.sendKeys("25");
+        String count = driver.findElement(By.id("set-form")).getAttribute("data-analyses");
+        driver.findElement(By.id("analyze-set")).click();
+        wait.until(d -> !count.equals(driver.findElement(By.id("set-form")).getAttribute("data-analyses")));
+        List<Object> at635 = bars();
+        assertThat(at635).hasSameSizeAs(at650);
+        for (int i = 0; i < at650.size(); i++) {
+            assertThat(num(at635.get(i)) / num(at650.get(i))).as("string %d", i + 1)
+                    .isCloseTo(Math.pow(635.0 / 650.0, 2), within(1e-6));
+        }
+        assertThat(length.getAttribute("value")).isEqualTo("25");
     }
 }

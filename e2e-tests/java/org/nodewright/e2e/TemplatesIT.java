@@ -46,6 +46,51 @@ class TemplatesIT extends BrowserTestBase {
         return ((Number) n).longValue();
     }
 
+    /**
+     * Issue 16 polish: the fret panel speaks inches when asked (what it sends is still mm), switching
+     * back and forth leaves a typed length exactly as it was, and a marked position past the saddle
+     * is drawn and said to be past the saddle.
+     */
+    @Test
+    void fretPanelTakesInchesAndSaysWhyAMarkPastTheSaddleIsDrawnThere() throws Exception {
+        driver.get(url("/templates"));
+        WebElement scale = waitFor(By.id("fret-scale"));
+        new org.openqa.selenium.support.ui.Select(driver.findElement(By.id("fret-units"))).selectByValue("inch");
+        // the default 650 mm shown in inches, 650 / 25.4 = 25.5906 (1 inch = 25.4 mm exactly)
+        assertThat(scale.getDomProperty("value")).isEqualTo("25.5906");
+        new org.openqa.selenium.support.ui.Select(driver.findElement(By.id("fret-units"))).selectByValue("mm");
+        assertThat(scale.getDomProperty("value")).isEqualTo("650");
+        new org.openqa.selenium.support.ui.Select(driver.findElement(By.id("fret-units"))).selectByValue("inch");
+        scale.clear();
+        scale.sendKeys("25.5");
+        driver.findElement(By.id("fret-positions")).sendKeys("tailpiece = 27");
+        js("window.__fretBodies = []; const f = window.fetch; window.fetch = (u, o) => {"
+                + " if (String(u).includes('/templates/frets')) window.__fretBodies.push(o && o.body); return f(u, o); };");
+        driver.findElement(By.id("fret-preview")).click();
+        wait.until(d -> String.valueOf(js("return document.getElementById('fret-image').getAttribute('src') || ''"))
+                .startsWith("blob:"));
+        assertThat(driver.findElement(By.id("fret-message")).getText())
+                .contains("tailpiece").contains("past the saddle").contains("27 inch").contains("25.5 inch");
+        // What the page sent for the preview: the lengths in mm (1 inch = 25.4 mm exactly).
+        Object sent = js("return window.__fretBodies[window.__fretBodies.length - 1];");
+        var body = new tools.jackson.databind.json.JsonMapper().readTree(String.valueOf(sent));
+        assertThat(body.get("scaleLengthMm").asDouble()).isCloseTo(25.5 * 25.4, within(1e-9));
+        assertThat(body.get("positions").get(0).get("positionMm").asDouble()).isCloseTo(27 * 25.4, within(1e-9));
+        js("localStorage.removeItem('nodewright.units.templates.frets');");
+    }
+
+    /** x1 of the SVG line whose attribute has that value (a fret slot, a ruler tick). */
+    private static double lineX(org.w3c.dom.Document doc, String attribute, String value) {
+        NodeList lines = doc.getElementsByTagName("line");
+        for (int i = 0; i < lines.getLength(); i++) {
+            Element e = (Element) lines.item(i);
+            if (value.equals(e.getAttribute(attribute))) {
+                return Double.parseDouble(e.getAttribute("x1"));
+            }
+        }
+        return Double.NaN;
+    }
+
     @Test
     void fretTemplatePreviewsAndItsSvgAndPdfMeasureTrue() throws Exception {
         driver.get(url("/templates"));

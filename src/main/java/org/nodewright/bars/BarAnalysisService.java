@@ -25,14 +25,9 @@ public class BarAnalysisService {
 
     public BarAnalysisResponse analyze(BarAnalysisRequest r) {
         Bar bar = BarMapper.toBar(r);
-        BarAnalysis a;
-        try {
-            a = BarAnalyzer.analyze(bar, r.theoryOrDefault(), r.modeCountOrDefault(), r.otherFamiliesOn());
-        } catch (IllegalArgumentException | IllegalStateException | org.hipparchus.exception.MathRuntimeException e) {
-            // A numerical failure on an extreme but valid bar is still the client's 400, never a 500.
-            throw new BadRequestException("lengthMm",
-                    "the modes could not be computed for this combination of values: " + e.getMessage());
-        }
+        BarAnalysis a = BadRequestException.whenComputing("lengthMm",
+                "the modes could not be computed for this combination of values",
+                () -> BarAnalyzer.analyze(bar, r.theoryOrDefault(), r.modeCountOrDefault(), r.otherFamiliesOn()));
         return toResponse(r, bar, a);
     }
 

@@ -42,12 +42,8 @@ public class BlankFitService {
             List<SpectralPeak> peaks) {
         Bar bar = BarMapper.toBar(barRequest);
         BeamTheory theory = barRequest.theoryOrDefault();
-        BlankFit fit;
-        try {
-            fit = BlankFitter.fit(bar, theory, modes, fitShear);
-        } catch (IllegalArgumentException | IllegalStateException | org.hipparchus.exception.MathRuntimeException e) {
-            throw new BadRequestException("modes", "the moduli could not be fitted to these modes: " + e.getMessage());
-        }
+        BlankFit fit = BadRequestException.whenComputing("modes", "the moduli could not be fitted to these modes",
+                () -> BlankFitter.fit(bar, theory, modes, fitShear));
         BarAnalysisRequest fitted = new BarAnalysisRequest(barRequest.lengthMm(), barRequest.section(),
                 barRequest.widthMm(), barRequest.thicknessMm(), barRequest.diameterMm(), barRequest.boreMm(),
                 barRequest.profile(), barRequest.material(), barRequest.densityKgPerM3(), fit.youngsModulus(),

@@ -8,7 +8,13 @@ import java.util.Map;
 import tools.jackson.databind.JsonNode;
 
 /** What a save writes: everything of a design that its author edits. Tags are trimmed and de-duplicated. */
-record DesignContent(String name, DesignKind kind, JsonNode parameters, String notes, List<String> tags) {
+record DesignContent(String name, DesignKind kind, JsonNode parameters, String notes, List<String> tags,
+        DesignUnits units) {
+
+    /** Content without units: the design keeps the units it has (or none). */
+    DesignContent(String name, DesignKind kind, JsonNode parameters, String notes, List<String> tags) {
+        this(name, kind, parameters, notes, tags, null);
+    }
 
     DesignContent {
         name = name.strip();

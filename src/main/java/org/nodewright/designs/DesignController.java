@@ -45,7 +45,7 @@ class DesignController {
 
     @PostMapping
     ResponseEntity<Design> create(@Valid @RequestBody DesignInput in, HttpServletRequest request) {
-        Design created = library.create(new DesignContent(in.name(), in.kind(), in.parameters(), in.notes(), in.tags()),
+        Design created = library.create(new DesignContent(in.name(), in.kind(), in.parameters(), in.notes(), in.tags(), in.units()),
                 Authors.who(request, in.author()), "created");
         return ResponseEntity.created(URI.create("/api/v1/designs/" + created.id())).body(created);
     }
@@ -67,7 +67,7 @@ class DesignController {
     Design update(@PathVariable long id, @Valid @RequestBody DesignUpdate in, HttpServletRequest request) {
         Design current = library.get(id);
         DesignKind kind = in.kind() == null ? current.kind() : in.kind();
-        return library.update(id, in.version(), new DesignContent(in.name(), kind, in.parameters(), in.notes(), in.tags()),
+        return library.update(id, in.version(), new DesignContent(in.name(), kind, in.parameters(), in.notes(), in.tags(), in.units()),
                 Authors.who(request, in.author()), "saved");
     }
 

@@ -1,5 +1,6 @@
 package org.nodewright.designs;
 
+import jakarta.validation.Valid;
 import jakarta.validation.constraints.NotBlank;
 import jakarta.validation.constraints.NotNull;
 import jakarta.validation.constraints.Pattern;
@@ -18,5 +19,6 @@ public record DesignInput(
         @Size(max = 20000) String notes,
         @Size(max = 20) List<@NotBlank @Size(max = 40) @Pattern(regexp = "[^,]*", message = "must not contain a comma")
                 String> tags,
-        @Size(max = 80) String author) {
+        @Size(max = 80) String author,
+        @Valid DesignUnits units) {
 }

@@ -31,7 +31,7 @@ class DesignStore {
     private static final TypeReference<List<String>> STRINGS = new TypeReference<>() { };
 
     private static final String DESIGN_COLUMNS =
-            "d.id, d.name, d.kind, d.parameters, d.notes, d.author, d.created_at, d.updated_by, d.updated_at, d.version";
+            "d.id, d.name, d.kind, d.parameters, d.notes, d.author, d.created_at, d.updated_by, d.updated_at, d.version, d.units";
 
     private final JdbcClient jdbc;
     private final JsonMapper mapper;
@@ -72,8 +72,9 @@ class DesignStore {
         Snapshot first = history.get(0);
         Snapshot last = history.get(history.size() - 1);
         KeyHolder keys = new GeneratedKeyHolder();
-        jdbc.sql("INSERT INTO designs (name, kind, parameters, notes, author, created_at, updated_by, updated_at, version)"
-                        + " VALUES (:name, :kind, :parameters, :notes, :author, :createdAt, :updatedBy, :updatedAt, :version)")
+        jdbc.sql("INSERT INTO designs (name, kind, parameters, notes, author, created_at, updated_by, updated_at, version,"
+                        + " units) VALUES (:name, :kind, :parameters, :notes, :author, :createdAt, :updatedBy, :updatedAt,"
+                        + " :version, :units)")
                 .param("name", last.content().name())
                 .param("kind", last.content().kind().word())
                 .param("parameters", json(last.content().parameters()))
@@ -83,6 +84,7 @@ class DesignStore {
                 .param("updatedBy", listedBy)
                 .param("updatedAt", time(listedAt))
                 .param("version", (long) history.size())
+                .param("units", stored(last.content().units()))
                 .update(keys, "id");
         long id = generatedId(keys);
         writeTags(id, last.content().tags());
@@ -100,12 +102,14 @@ class DesignStore {
     @Transactional
     public Optional<Design> update(long id, long expectedVersion, DesignContent content, String by, Instant at,
             String comment) {
+        // Units left out keep the design's own (a script that knows no units changes none).
         int rows = jdbc.sql("UPDATE designs SET name = :name, parameters = :parameters, notes = :notes,"
-                        + " updated_by = :by, updated_at = :at, version = version + 1"
+                        + " updated_by = :by, updated_at = :at, version = version + 1, units = COALESCE(:units, units)"
                         + " WHERE id = :id AND version = :version")
                 .param("name", content.name())
                 .param("parameters", json(content.parameters()))
                 .param("notes", content.notes())
+                .param("units", stored(content.units()))
                 .param("by", by)
                 .param("at", time(at))
                 .param("id", id)
@@ -209,14 +213,14 @@ class DesignStore {
                 });
         return designs.stream().map(d -> new Design(d.id(), d.name(), d.kind(), d.parameters(), d.notes(),
                 tags.getOrDefault(d.id(), List.of()), d.author(), d.createdAt(), d.updatedBy(), d.updatedAt(),
-                d.version())).toList();
+                d.version(), d.units())).toList();
     }
 
     private Design designRow(ResultSet rs, int n) throws SQLException {
         return new Design(rs.getLong("id"), rs.getString("name"), kind(rs.getString("kind")),
                 mapper.readTree(rs.getString("parameters")), rs.getString("notes"), List.of(),
                 rs.getString("author"), instant(rs, "created_at"), rs.getString("updated_by"),
-                instant(rs, "updated_at"), rs.getLong("version"));
+                instant(rs, "updated_at"), rs.getLong("version"), DesignUnits.fromStored(rs.getString("units")));
     }
 
     private DesignRevision revisionRow(ResultSet rs, DesignKind kind) throws SQLException {
@@ -228,6 +232,10 @@ class DesignStore {
 
     private static DesignKind kind(String word) {
         return DesignKind.fromWord(word).orElseThrow(() -> new IllegalStateException("Unknown kind in store: " + word));
+    }
+
+    private static String stored(DesignUnits units) {
+        return units == null ? null : units.stored();
     }
 
     private String json(JsonNode node) {

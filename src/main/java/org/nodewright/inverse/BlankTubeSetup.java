@@ -1,14 +1,18 @@
 package org.nodewright.inverse;
 
+import static org.nodewright.inverse.ToneHoleSolveSetup.finite;
+
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
+import java.util.function.Function;
 import org.nodewright.aircolumns.AirColumnMapper;
 import org.nodewright.aircolumns.AirColumnRequest;
 import org.nodewright.physics.aircolumn.Fingering;
 import org.nodewright.physics.aircolumn.InputEnd;
 import org.nodewright.physics.aircolumn.OutputEnd;
 import org.nodewright.physics.inverse.AirCoreFrequencyModel;
+import org.nodewright.physics.inverse.BlankTubeSolver;
 import org.nodewright.physics.inverse.FirstLayout;
 import org.nodewright.physics.aircolumn.MouthKind;
 import org.nodewright.physics.inverse.HoleLayout;
@@ -159,10 +163,6 @@ record BlankTubeSetup(AirColumnRequest bore, AirCoreFrequencyModel model, FirstL
         return true;
     }
 
-    private static boolean finite(Double v) {
-        return v != null && Double.isFinite(v);
-    }
-
     /** Length-weighted mean diameter of the bore, mm (the closed form's cylinder). */
     static double meanDiameterMm(AirColumnRequest bore) {
         double sum = 0;
@@ -172,6 +172,17 @@ record BlankTubeSetup(AirColumnRequest bore, AirCoreFrequencyModel model, FirstL
             length += s.lengthMm();
         }
         return sum / length;
+    }
+
+    /** The job's work for {@link SolveJobs#accepted}: the blank-tube solve of a request that passed validation. */
+    static Function<SolveJob, Object> work(BlankTubeRequest request) {
+        BlankTubeSetup setup = of(request);
+        double tolerance = request.toleranceOrDefault();
+        int cap = request.evaluationsOrDefault();
+        return j -> BlankTubeResult.of(new BlankTubeSolver(tolerance, cap).solve(setup.model(), setup.tube(),
+                setup.chimneysMm(), setup.model().lengthBeforeFootMm(), setup.fingerings(), setup.limits(),
+                setup.freedom(), setup.startDiametersMm(), j, j::cancelRequested), setup.tube(), tolerance,
+                setup.bore());
     }
 
     /** The solver's inputs for a request that passed validation. */
@@ -192,11 +203,7 @@ record BlankTubeSetup(AirColumnRequest bore, AirCoreFrequencyModel model, FirstL
                 blank.temperatureC(), blank.relativeHumidityPct(), blank.losses(), blank.fMinHz(), blank.fMaxHz(),
                 blank.points(), blank.referenceA4Hz(), blank.profileSamples(), r.fingerings(), blank.mouth(),
                 blank.breath());
-        List<Fingering> fingerings = new ArrayList<>();
-        for (Fingering f : AirColumnMapper.fingerings(bore)) {
-            String name = f.name() == null || f.name().isBlank() ? "fingering " + (fingerings.size() + 1) : f.name();
-            fingerings.add(new Fingering(name, f.closedHoles(), f.targetHz(), f.register()));
-        }
+        List<Fingering> fingerings = ToneHoleSolveSetup.namedFingerings(bore);
         double[] chimneys = new double[n];
         Arrays.fill(chimneys, r.chimneyMm());
         double[] starts = r.startDiametersMm() != null

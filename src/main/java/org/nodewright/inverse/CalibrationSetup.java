@@ -2,17 +2,20 @@ package org.nodewright.inverse;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.function.Function;
 import org.nodewright.aircolumns.AirColumnMapper;
 import org.nodewright.aircolumns.AirColumnRequest;
 import org.nodewright.physics.aircolumn.Fingering;
 import org.nodewright.physics.inverse.CalibrationParameter;
 import org.nodewright.physics.inverse.Calibrator;
+import org.nodewright.physics.inverse.SolveCancelledException;
 import org.nodewright.physics.measure.ImpedanceCsvReader;
 import org.nodewright.physics.measure.ImpedanceCurve;
 import org.nodewright.physics.measure.ImpedancePeak;
 import org.nodewright.physics.measure.ImpedancePeakFinder;
 import org.nodewright.physics.measure.UnreadableInputException;
 import org.nodewright.physics.tuning.Cents;
+import org.nodewright.web.BadRequestException;
 import org.nodewright.web.FieldProblem;
 
 /**
@@ -26,6 +29,9 @@ final class CalibrationSetup {
     static final double MAX_TEMPERATURE_C = 45;
     /** A breath's temperatures may be shifted by up to this much, C. */
     static final double MAX_BREATH_SHIFT_C = 15;
+
+    /** The calibration's evaluation cap. */
+    static final int MAX_EVALUATIONS = 400;
 
     record Parameter(CalibrationParameter kind, String field, String unit, double start, double lower, double upper) {
     }
@@ -116,6 +122,33 @@ final class CalibrationSetup {
             }
         }
         return out;
+    }
+
+    /** The job's work for {@link SolveJobs#accepted}: the calibration of a request that passed validation. */
+    static Function<SolveJob, Object> work(CalibrationRequest request) {
+        List<Parameter> ps = parameters(request);
+        List<Fingering> measured = new ArrayList<>(measured(request));
+        double[] start = ps.stream().mapToDouble(Parameter::start).toArray();
+        double[] lower = ps.stream().mapToDouble(Parameter::lower).toArray();
+        double[] upper = ps.stream().mapToDouble(Parameter::upper).toArray();
+        Calibrator.Family family = family(request.bore(), ps);
+        Matched matched = match(request, family, start);
+        if (request.impedance() != null && matched.fingerings().isEmpty()) {
+            throw new BadRequestException("impedance.csv", "none of the curve's resonances lies near one of the model's");
+        }
+        measured.addAll(matched.fingerings());
+        return j -> {
+            int[] n = {0};
+            Calibrator.Family watched = (x, f, g) -> {
+                if (j.cancelRequested()) {
+                    throw new SolveCancelledException();
+                }
+                j.update(++n[0] / Math.max(1, measured.size()), MAX_EVALUATIONS, Double.NaN);
+                return family.soundingHz(x, f, g);
+            };
+            return CalibrationResult.of(new Calibrator(MAX_EVALUATIONS).fit(watched, start, lower, upper, measured), ps,
+                    measured, request.bore(), matched.peaks());
+        };
     }
 
     /** Name of the n-th measured impedance resonance among the calibration's notes. */

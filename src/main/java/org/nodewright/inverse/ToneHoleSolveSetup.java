@@ -2,12 +2,14 @@ package org.nodewright.inverse;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.function.Function;
 import org.nodewright.aircolumns.AirColumnMapper;
 import org.nodewright.aircolumns.AirColumnRequest;
 import org.nodewright.physics.aircolumn.Fingering;
 import org.nodewright.physics.inverse.AirCoreFrequencyModel;
 import org.nodewright.physics.inverse.HoleLayout;
 import org.nodewright.physics.inverse.SolverLimits;
+import org.nodewright.physics.inverse.ToneHoleSolver;
 import org.nodewright.web.FieldProblem;
 
 /**
@@ -102,20 +104,36 @@ record ToneHoleSolveSetup(AirColumnRequest bore, AirCoreFrequencyModel model, Ho
         return true;
     }
 
-    private static boolean finite(Double v) {
-        return v != null && Double.isFinite(v);
-    }
-
     /** The solver's inputs for a request that passed validation. */
     static ToneHoleSolveSetup of(ToneHoleSolveRequest request) {
         AirColumnRequest bore = request.bore();
         Bounds b = Bounds.of(bore, request.limitsOrNone());
+        List<Fingering> fingerings = namedFingerings(bore);
+        return new ToneHoleSolveSetup(bore, BoreMapping.model(bore), BoreMapping.layout(bore), fingerings, b.toCore());
+    }
+
+    /** The bore's fingerings as the solvers take them, each unnamed one called "fingering N" (N from 1). */
+    static List<Fingering> namedFingerings(AirColumnRequest bore) {
         List<Fingering> fingerings = new ArrayList<>();
         for (Fingering f : AirColumnMapper.fingerings(bore)) {
             String name = f.name() == null || f.name().isBlank() ? "fingering " + (fingerings.size() + 1) : f.name();
             fingerings.add(new Fingering(name, f.closedHoles(), f.targetHz(), f.register()));
         }
-        return new ToneHoleSolveSetup(bore, BoreMapping.model(bore), BoreMapping.layout(bore), fingerings,
-                b.toCore());
+        return fingerings;
+    }
+
+    /** The job's work for {@link SolveJobs#accepted}: the tone-hole solve of a request that passed validation. */
+    static Function<SolveJob, Object> work(ToneHoleSolveRequest request) {
+        ToneHoleSolveSetup setup = of(request);
+        double tolerance = request.toleranceOrDefault();
+        int cap = request.maxEvaluationsOrDefault();
+        return j -> ToneHoleResult.of(new ToneHoleSolver(tolerance, cap).solve(setup.model(), setup.start(),
+                setup.model().lengthBeforeFootMm(), setup.fingerings(), setup.limits(), j, j::cancelRequested),
+                tolerance, setup.bore());
+    }
+
+    /** A figure is present and finite (else its own constraints speak). */
+    static boolean finite(Double v) {
+        return v != null && Double.isFinite(v);
     }
 }

@@ -5,11 +5,6 @@ import jakarta.validation.constraints.DecimalMin;
 import jakarta.validation.constraints.Max;
 import jakarta.validation.constraints.Min;
 import jakarta.validation.constraints.Positive;
-import java.io.IOException;
-import java.nio.ByteBuffer;
-import java.nio.charset.CharacterCodingException;
-import java.nio.charset.CodingErrorAction;
-import java.nio.charset.StandardCharsets;
 import java.util.List;
 import org.nodewright.physics.measure.ImpedanceCsvReader;
 import org.nodewright.physics.measure.ImpedanceCurve;
@@ -22,8 +17,6 @@ import org.nodewright.physics.measure.PartialsCsvReader;
 import org.nodewright.physics.measure.PeakFinder;
 import org.nodewright.physics.measure.SpectralPeak;
 import org.nodewright.physics.measure.StiffStringFit;
-import org.nodewright.physics.measure.UnreadableInputException;
-import org.nodewright.physics.measure.WavReader;
 import org.nodewright.web.BadRequestException;
 import org.nodewright.web.Finite;
 import org.springframework.http.MediaType;
@@ -44,15 +37,13 @@ import org.springframework.web.multipart.MultipartFile;
 @RequestMapping("/api/v1/measurements")
 class MeasurementsController {
 
-    /** The file part's limit, as in spring.servlet.multipart.max-file-size. */
-    static final long MAX_FILE_BYTES = 50L * 1024 * 1024;
-
     @PostMapping(path = "/partials", consumes = MediaType.MULTIPART_FORM_DATA_VALUE)
     PartialsResponse partials(@RequestPart("file") MultipartFile file,
             @RequestParam(required = false) @Finite @Positive @DecimalMax("20000") Double expectedF1Hz,
             @RequestParam(required = false) @Min(2) @Max(200) Integer maxPartials) {
-        MonoRecording recording = readFile(() -> WavReader.read(bytes(file)));
-        PartialFit fit = readFile(() -> PartialAnalyzer.analyze(recording, expectedF1Hz, partialsOrDefault(maxPartials)));
+        MonoRecording recording = Uploads.recording(file);
+        PartialFit fit = Uploads.read(
+                () -> PartialAnalyzer.analyze(recording, expectedF1Hz, partialsOrDefault(maxPartials)));
         return PartialsResponse.of(recording.sampleRateHz(), recording.durationSeconds(), "wav", fit, true);
     }
 
@@ -65,11 +56,11 @@ class MeasurementsController {
             @RequestParam(required = false) @Min(1) @Max(200) Integer maxPeaks,
             @RequestParam(required = false) @Finite @Positive @DecimalMax("20000") Double minHz,
             @RequestParam(required = false) @Finite @Positive @DecimalMax("24000") Double maxHz) {
-        MonoRecording recording = readFile(() -> WavReader.read(bytes(file)));
+        MonoRecording recording = Uploads.recording(file);
         int count = maxPeaks == null ? PeaksResponse.DEFAULT_PEAKS : maxPeaks;
         double lo = minHz == null ? 0 : minHz;
         double hi = maxHz == null ? Double.POSITIVE_INFINITY : maxHz;
-        List<SpectralPeak> all = readFile(() -> PeakFinder.find(recording, PeaksResponse.SEARCHED));
+        List<SpectralPeak> all = Uploads.read(() -> PeakFinder.find(recording, PeaksResponse.SEARCHED));
         List<PeaksResponse.Peak> kept = all.stream()
                 .filter(p -> p.frequencyHz() >= lo && p.frequencyHz() <= hi)
                 .sorted(java.util.Comparator.comparingDouble(SpectralPeak::levelDb).reversed())
@@ -84,7 +75,7 @@ class MeasurementsController {
     PartialsResponse partialsCsv(@RequestPart("file") MultipartFile file,
             @RequestParam(required = false) @Finite @Positive @DecimalMax("20000") Double expectedF1Hz,
             @RequestParam(required = false) @Min(2) @Max(200) Integer maxPartials) {
-        List<PartialsCsvReader.Row> rows = readFile(() -> PartialsCsvReader.read(text(file)));
+        List<PartialsCsvReader.Row> rows = Uploads.read(() -> PartialsCsvReader.read(Uploads.text(file)));
         int limit = partialsOrDefault(maxPartials);
         PartialFit fit;
         if (rows.get(0).n() > 0) {
@@ -92,10 +83,10 @@ class MeasurementsController {
                     .filter(r -> r.n() <= limit)
                     .map(r -> new MatchedPartial(r.n(), r.frequencyHz(), 0.0))
                     .toList();
-            fit = readFile(() -> StiffStringFit.fit(partials));
+            fit = Uploads.read(() -> StiffStringFit.fit(partials));
         } else {
             List<SpectralPeak> peaks = rows.stream().map(r -> new SpectralPeak(r.frequencyHz(), 0.0)).toList();
-            fit = readFile(() -> PartialAnalyzer.fitPeaks(peaks, expectedF1Hz, limit));
+            fit = Uploads.read(() -> PartialAnalyzer.fitPeaks(peaks, expectedF1Hz, limit));
         }
         return PartialsResponse.of(null, null, "csv", fit, false);
     }
@@ -117,49 +108,12 @@ class MeasurementsController {
             default -> throw new BadRequestException("inputEnd", "must be \"closed\" or \"open\"");
         };
         double prominence = minProminenceDb == null ? 3.0 : minProminenceDb;
-        ImpedanceCurve curve = readFile(() -> ImpedanceCsvReader.read(text(file), degrees));
+        ImpedanceCurve curve = Uploads.read(() -> ImpedanceCsvReader.read(Uploads.text(file), degrees));
         return ImpedanceResponse.of(curve, ImpedancePeakFinder.find(curve, false, prominence),
                 ImpedancePeakFinder.find(curve, true, prominence), open);
     }
 
     private static int partialsOrDefault(Integer maxPartials) {
         return maxPartials == null ? PartialAnalyzer.DEFAULT_MAX_PARTIALS : maxPartials;
-    }
-
-    private interface Reading<T> {
-        T read() throws IOException;
-    }
-
-    /** Runs a read of the uploaded file; anything unreadable becomes a 400 on the field {@code file}. */
-    private static <T> T readFile(Reading<T> reading) {
-        try {
-            return reading.read();
-        } catch (UnreadableInputException e) {
-            throw new BadRequestException("file", e.getMessage());
-        } catch (IOException e) {
-            throw new BadRequestException("file", "the upload could not be read");
-        }
-    }
-
-    private static byte[] bytes(MultipartFile file) throws IOException {
-        if (file.isEmpty()) {
-            throw new UnreadableInputException("the file is empty");
-        }
-        if (file.getSize() > MAX_FILE_BYTES) {
-            throw new UnreadableInputException("the file is larger than the upload limit of 50 MB");
-        }
-        return file.getBytes();
-    }
-
-    private static String text(MultipartFile file) throws IOException {
-        try {
-            return StandardCharsets.UTF_8.newDecoder()
-                    .onMalformedInput(CodingErrorAction.REPORT)
-                    .onUnmappableCharacter(CodingErrorAction.REPORT)
-                    .decode(ByteBuffer.wrap(bytes(file)))
-                    .toString();
-        } catch (CharacterCodingException e) {
-            throw new UnreadableInputException("not a UTF-8 text table");
-        }
     }
 }

@@ -13,6 +13,10 @@ import org.springframework.http.ResponseEntity;
 /** SVG and PDF answers for a drawn sheet, with a download file name. */
 final class TemplateResponses {
 
+    /** The ?name= printed on a drawn template: its pattern and the message when it does not match. */
+    static final String NAME = "[\\p{L}\\p{N} .,'()/+-]{1,60}";
+    static final String NAME_RULE = "must be 1 to 60 letters, digits, spaces or .,'()/+-";
+
     static final MediaType SVG = MediaType.parseMediaType("image/svg+xml");
 
     private TemplateResponses() {

@@ -17,7 +17,7 @@ class TemplatesPageController {
             "tpl.js.cancelled", "tpl.js.applied", "tpl.js.foot", "tpl.js.downloaded", "tpl.js.noBench",
             "tpl.js.fromBench", "tpl.js.error", "tpl.js.solvedName", "tpl.js.demoFailed", "tpl.js.notWhole",
             "tpl.js.firstLayout", "tpl.js.calibrated", "tpl.js.calibApplied", "tpl.js.mouthMoved", "tpl.js.peakUsed",
-            "tpl.js.peakUnused");
+            "tpl.js.peakUnused", "tpl.js.pastSaddle");
 
     @GetMapping("/templates")
     String page(Model model) {

@@ -141,6 +141,52 @@ class CsvTablesTest {
     }
 
     /**
+     * Issue 16 item 11: one value per cell. A note is its name in one cell and its cents in the next
+     * (no JSON object), and the string table carries no sampled mode shapes: every cell of every
+     * table is a number, a note name, a word, or a list of positions separated by semicolons.
+     */
+    @Test
+    void notesAreANameAndCentsInCellsOfTheirOwnAndNoCellHoldsJsonOrShapes() throws Exception {
+        HttpResponse<String> set = send("POST", "/api/v1/string-sets/strings.csv", stringSet("top E", "B", "G"));
+        assertThat(set.statusCode()).as(set.body()).isEqualTo(200);
+        List<List<String>> rows = rows(set.body());
+        int note = rows.get(0).indexOf("note");
+        int cents = rows.get(0).indexOf("noteCentsOff");
+        assertThat(note).isNotNegative();
+        assertThat(cents).isNotNegative();
+        // 329.63 Hz against E4 = 440 * 2^(-5/12) Hz (ISO 16 equal temperament), written here: +0.0126 cents.
+        double e4 = 440.0 * Math.pow(2, -5.0 / 12);
+        assertThat(rows.get(1).get(note)).isEqualTo("E4");
+        assertThat(Double.parseDouble(rows.get(1).get(cents))).isCloseTo(1200 * Math.log(329.63 / e4) / Math.log(2),
+                org.assertj.core.data.Offset.offset(0.05));
+        assertThat(rows.get(2).get(note)).isEqualTo("B3");
+        assertThat(rows.get(3).get(note)).isEqualTo("G3");
+
+        HttpResponse<String> partials = send("POST", "/api/v1/strings/partials.csv", DesignApiContract.STRING_PARAMS);
+        HttpResponse<String> resonances = send("POST", "/api/v1/air-columns/resonances.csv", DesignApiContract.BORE_PARAMS);
+        for (HttpResponse<String> r : List.of(set, partials, resonances)) {
+            assertThat(r.statusCode()).as(r.body()).isEqualTo(200);
+            assertThat(r.body()).as("no JSON in any cell").doesNotContain("{").doesNotContain("[").doesNotContain("\"name\"");
+            List<String> header = rows(r.body()).get(0);
+            assertThat(header).as("no sampled shapes").doesNotContain("shape", "shapeX");
+            for (List<String> row : rows(r.body())) {
+                assertThat(row).as("a row as wide as its header").hasSize(header.size());
+            }
+        }
+        // The partials table: 12 modes, 12 rows, a mode's nodes in one cell as positions (mode 3 of a
+        // pinned 650 mm string: the two ends and nodes at L/3 and 2L/3, about 216.7 and 433.3 mm).
+        List<List<String>> modes = rows(partials.body());
+        assertThat(modes).hasSize(13);
+        String nodes3 = modes.get(3).get(modes.get(0).indexOf("nodesMm")).replace("\"", "");
+        List<Double> positions = java.util.Arrays.stream(nodes3.split(";")).map(Double::parseDouble).toList();
+        assertThat(positions).hasSize(4);
+        assertThat(positions.get(0)).isEqualTo(0.0);
+        assertThat(positions.get(1)).isCloseTo(650.0 / 3, org.assertj.core.data.Offset.offset(1.0));
+        assertThat(positions.get(2)).isCloseTo(1300.0 / 3, org.assertj.core.data.Offset.offset(1.0));
+        assertThat(positions.get(3)).isEqualTo(650.0);
+    }
+
+    /**
      * Text a spreadsheet would run as a formula (a cell starting with =, +, - or @; OWASP's CSV
      * injection advice) is written with a leading apostrophe, and RFC 4180 quoting keeps commas and
      * quotes inside their cell. Numbers, negative ones too, stay plain numbers.

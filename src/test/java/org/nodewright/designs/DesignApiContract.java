@@ -141,6 +141,34 @@ abstract class DesignApiContract {
     }
 
     @Test
+    void unitsSavedWithADesignAreReadBackByAnyoneAndKeptByASaveThatGivesNone() throws Exception {
+        // Issue 16 item 8: a design saved in inch/lbf reopens so for whoever opens it.
+        String body = "{\"name\": \"Top E in inches\", \"kind\": \"string\", \"parameters\": " + STRING_PARAMS
+                + ", \"units\": {\"length\": \"inch\", \"force\": \"lbf\"}}";
+        JsonNode created = mapper.readTree(mvc.perform(post("/api/v1/designs").contentType(MediaType.APPLICATION_JSON)
+                .content(body)).andExpect(status().isCreated()).andReturn().getResponse().getContentAsString());
+        long id = created.get("id").asLong();
+        mvc.perform(get("/api/v1/designs/" + id))
+                .andExpect(jsonPath("$.units.length").value("inch"))
+                .andExpect(jsonPath("$.units.force").value("lbf"));
+        // A script's save that knows nothing of units changes none of them.
+        mvc.perform(put("/api/v1/designs/" + id).contentType(MediaType.APPLICATION_JSON)
+                .content(putBody(1, "Top E in inches", STRING_PARAMS))).andExpect(status().isOk());
+        mvc.perform(get("/api/v1/designs/" + id)).andExpect(jsonPath("$.units.length").value("inch"));
+        // A save in other units keeps those.
+        mvc.perform(put("/api/v1/designs/" + id).contentType(MediaType.APPLICATION_JSON)
+                .content("{\"version\": 2, \"name\": \"Top E\", \"parameters\": " + STRING_PARAMS
+                        + ", \"units\": {\"length\": \"mm\", \"force\": \"kgf\"}}")).andExpect(status().isOk());
+        mvc.perform(get("/api/v1/designs?name=Top E")).andExpect(jsonPath("$[0].units.force").value("kgf"));
+        // Units other than the pages' are refused on their field.
+        mvc.perform(post("/api/v1/designs").contentType(MediaType.APPLICATION_JSON)
+                        .content(body.replace("\"lbf\"", "\"stone\"")))
+                .andExpect(status().isBadRequest())
+                .andExpect(jsonPath("$.errors[0].field").value("units.force"))
+                .andExpect(jsonPath("$.errors[0].message").value("must be N, kgf or lbf"));
+    }
+
+    @Test
     void staleWriteIsRefusedWith409NamingWhoChangedItAndStoredDesignIsUnchanged() throws Exception {
         long id = create("Top E", "string", STRING_PARAMS, "[]").get("id").asLong();
         mvc.perform(put("/api/v1/designs/" + id).contentType(MediaType.APPLICATION_JSON)

@@ -27,13 +27,9 @@ import java.util.zip.ZipInputStream;
 import java.util.zip.ZipOutputStream;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
-import org.nodewright.TestProperties;
+import org.nodewright.NodewrightWebTest;
 import org.springframework.beans.factory.annotation.Autowired;
-import org.springframework.boot.test.context.SpringBootTest;
-import org.springframework.boot.webmvc.test.autoconfigure.AutoConfigureMockMvc;
 import org.springframework.http.MediaType;
-import org.springframework.test.context.DynamicPropertyRegistry;
-import org.springframework.test.context.DynamicPropertySource;
 import org.springframework.test.web.servlet.MockMvc;
 import org.springframework.test.web.servlet.MvcResult;
 import tools.jackson.databind.JsonNode;
@@ -44,17 +40,8 @@ import tools.jackson.databind.json.JsonMapper;
  * checksums (checked here with the JDK's SHA-256), every design acknowledged before the backup
  * back after a restore, refusals of a non-empty folder and of a damaged file.
  */
-@SpringBootTest(properties = {TestProperties.NO_WARM_UP, TestProperties.NO_BANNER})
-@AutoConfigureMockMvc
+@NodewrightWebTest
 class BackupRestoreTest {
-
-    @DynamicPropertySource
-    static void dataDir(DynamicPropertyRegistry registry) throws Exception {
-        Path dir = Files.createTempDirectory("nodewright-backup-");
-        registry.add("app.data-dir", dir::toString);
-        registry.add("spring.datasource.url", () -> "jdbc:h2:file:" + dir.toString().replace('\\', '/')
-                + "/nodewright;WRITE_DELAY=0;LOCK_TIMEOUT=10000");
-    }
 
     @Autowired
     MockMvc mvc;
@@ -103,8 +90,9 @@ class BackupRestoreTest {
         return out;
     }
 
+    /** Restores a backup into {@code into}; the backup file is written beside it (in the test's own folder). */
     private static int restore(byte[] zip, Path into) throws Exception {
-        Path file = Files.createTempFile("nodewright-restore-", ".zip");
+        Path file = into.resolveSibling(into.getFileName() + ".zip");
         Files.write(file, zip);
         ByteArrayOutputStream said = new ByteArrayOutputStream();
         int code = new StoreRestore(new PrintStream(said, true, StandardCharsets.UTF_8)).restore(file, into);

@@ -83,6 +83,22 @@ class ToneHoleTemplateControllerTest {
         }
     }
 
+    /** Issue 16 polish: with no name the title starts with the bore (it read "Tone holes: bore, bore 300.00 mm"). */
+    @Test
+    void theTitleNamesTheBoreOnceAndTheNameWhenGiven() throws Exception {
+        for (String[] c : new String[][] {{"", "Tone holes: bore 300.00 mm, 3 holes"},
+            {"?name=practice pipe", "Tone holes: practice pipe, bore 300.00 mm, 3 holes"}}) {
+            byte[] pdf = mvc.perform(post("/api/v1/templates/tone-holes.pdf" + c[0]).contentType(MediaType.APPLICATION_JSON)
+                            .content(BORE))
+                    .andExpect(status().isOk())
+                    .andReturn().getResponse().getContentAsByteArray();
+            try (var doc = Loader.loadPDF(pdf)) {
+                String text = new PDFTextStripper().getText(doc).replaceAll("\\s+", " ");
+                assertThat(text).contains(c[1]).doesNotContain("bore, bore");
+            }
+        }
+    }
+
     @ParameterizedTest
     @CsvSource(delimiter = '|', value = {
         "\"positionMm\":150.0 | \"positionMm\":350.0 | holes[0].positionMm",

@@ -4,7 +4,7 @@ package org.nodewright.physics.bars;
  * The cross-section of a bar along its length, SI units (metres). "Bending" bends through the
  * thickness (the plane a bar is struck in); "lateral" bends across the width.
  */
-public sealed interface BarSection permits RectangleSection, RoundSection, TubeSection {
+public sealed interface BarSection permits RectangleSection, CircularSection {
 
     /** Cross-sectional area A(x), m². */
     double area(double x);

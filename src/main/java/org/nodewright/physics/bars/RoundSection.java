@@ -7,7 +7,7 @@ import org.nodewright.physics.Require;
  *
  * @param diameter m
  */
-public record RoundSection(double diameter) implements BarSection {
+public record RoundSection(double diameter) implements CircularSection {
 
     public RoundSection {
         Require.positive("diameter", diameter);
@@ -25,11 +25,6 @@ public record RoundSection(double diameter) implements BarSection {
         return Math.PI * Math.pow(diameter, 4) / 64.0;
     }
 
-    @Override
-    public double lateralSecondMoment(double x) {
-        return secondMoment(x);
-    }
-
     /** J = π d⁴ / 32 (a circle does not warp). */
     @Override
     public double torsionConstant(double x) {
@@ -37,27 +32,7 @@ public record RoundSection(double diameter) implements BarSection {
     }
 
     @Override
-    public double polarSecondMoment(double x) {
-        return torsionConstant(x);
-    }
-
-    @Override
     public double shearCoefficient(double nu) {
         return CowperShearCoefficient.tube(nu, 0.0);
-    }
-
-    @Override
-    public double[] breakpoints(double length) {
-        return new double[] {0, length};
-    }
-
-    @Override
-    public boolean hasLateralFamily() {
-        return false;
-    }
-
-    @Override
-    public double depth(double x) {
-        return diameter;
     }
 }

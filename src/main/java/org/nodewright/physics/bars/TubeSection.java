@@ -8,7 +8,7 @@ import org.nodewright.physics.Require;
  * @param diameter outside diameter, m
  * @param bore     inside diameter, m, smaller than the outside diameter
  */
-public record TubeSection(double diameter, double bore) implements BarSection {
+public record TubeSection(double diameter, double bore) implements CircularSection {
 
     public TubeSection {
         Require.positive("diameter", diameter);
@@ -31,11 +31,6 @@ public record TubeSection(double diameter, double bore) implements BarSection {
         return Math.PI * (Math.pow(diameter, 4) - Math.pow(bore, 4)) / 64.0;
     }
 
-    @Override
-    public double lateralSecondMoment(double x) {
-        return secondMoment(x);
-    }
-
     /** J = π (D⁴ − d⁴) / 32 (closed circular tube, no warping). */
     @Override
     public double torsionConstant(double x) {
@@ -43,27 +38,7 @@ public record TubeSection(double diameter, double bore) implements BarSection {
     }
 
     @Override
-    public double polarSecondMoment(double x) {
-        return torsionConstant(x);
-    }
-
-    @Override
     public double shearCoefficient(double nu) {
         return CowperShearCoefficient.tube(nu, bore / diameter);
-    }
-
-    @Override
-    public double[] breakpoints(double length) {
-        return new double[] {0, length};
-    }
-
-    @Override
-    public boolean hasLateralFamily() {
-        return false;
-    }
-
-    @Override
-    public double depth(double x) {
-        return diameter;
     }
 }

@@ -1,16 +1,13 @@
 package org.nodewright.physics.bars;
 
 import java.util.function.BooleanSupplier;
-import org.hipparchus.exception.MathIllegalStateException;
 import org.hipparchus.linear.Array2DRowRealMatrix;
 import org.hipparchus.linear.ArrayRealVector;
 import org.hipparchus.linear.RealMatrix;
 import org.hipparchus.linear.RealVector;
-import org.hipparchus.optim.nonlinear.vector.leastsquares.LeastSquaresBuilder;
-import org.hipparchus.optim.nonlinear.vector.leastsquares.LeastSquaresProblem;
-import org.hipparchus.optim.nonlinear.vector.leastsquares.LevenbergMarquardtOptimizer;
 import org.hipparchus.util.Pair;
 import org.nodewright.physics.Require;
+import org.nodewright.physics.inverse.BestKeptFit;
 import org.nodewright.physics.inverse.SolveCancelledException;
 import org.nodewright.physics.inverse.SolveProgress;
 import org.nodewright.physics.tuning.Cents;
@@ -112,31 +109,8 @@ public final class UndercutTuner {
     }
 
     private void optimise(Run run, double[] p0, TuningTargets targets) {
-        LeastSquaresProblem problem = new LeastSquaresBuilder()
-                .model(run::valueAndJacobian)
-                .target(new double[targets.modes()])
-                .start(run.clamp(p0))
-                .parameterValidator(v -> new ArrayRealVector(run.clamp(v.toArray())))
-                .checker((iteration, previous, current) -> run.best != null && run.bestWorst <= toleranceCents)
-                .maxEvaluations(Integer.MAX_VALUE)
-                .maxIterations(Integer.MAX_VALUE)
-                .lazyEvaluation(false)
-                .build();
-        try {
-            new LevenbergMarquardtOptimizer().optimize(problem);
-        } catch (MathIllegalStateException e) {
-            // the optimiser could not improve further: keep the best seen
-        } catch (CapReached e) {
-            // the evaluation cap: keep the best seen
-        }
-    }
-
-    private static final class CapReached extends RuntimeException {
-        private static final long serialVersionUID = 1L;
-
-        CapReached() {
-            super(null, null, false, false);
-        }
+        BestKeptFit.run(run::valueAndJacobian, targets.modes(), run.clamp(p0),
+                v -> new ArrayRealVector(run.clamp(v.toArray())), () -> run.best != null && run.bestWorst <= toleranceCents);
     }
 
     private final class Run {
@@ -202,12 +176,7 @@ public final class UndercutTuner {
         }
 
         double[] residuals(double[] p) {
-            if (cancelled.getAsBoolean()) {
-                throw new SolveCancelledException();
-            }
-            if (evaluations >= maxEvaluations) {
-                throw new CapReached();
-            }
+            BestKeptFit.spend(evaluations, maxEvaluations, cancelled);
             evaluations++;
             double[] f = BarAnalyzer.bendingFrequencies(barOf(p), theory, targets.modes());
             double[] r = new double[targets.modes()];

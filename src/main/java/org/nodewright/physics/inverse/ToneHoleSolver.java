@@ -6,10 +6,6 @@ import java.util.function.BooleanSupplier;
 import org.hipparchus.linear.Array2DRowRealMatrix;
 import org.hipparchus.linear.ArrayRealVector;
 import org.hipparchus.linear.RealVector;
-import org.hipparchus.optim.nonlinear.vector.leastsquares.LeastSquaresBuilder;
-import org.hipparchus.optim.nonlinear.vector.leastsquares.LeastSquaresOptimizer;
-import org.hipparchus.optim.nonlinear.vector.leastsquares.LeastSquaresProblem;
-import org.hipparchus.optim.nonlinear.vector.leastsquares.LevenbergMarquardtOptimizer;
 import org.hipparchus.util.Pair;
 import org.nodewright.physics.Require;
 import org.nodewright.physics.aircolumn.Fingering;
@@ -17,7 +13,7 @@ import org.nodewright.physics.tuning.Cents;
 
 /**
  * Moves tone holes (and optionally resizes them and trims the foot) so that every fingering
- * sounds its target: Levenberg–Marquardt (Hipparchus {@link LevenbergMarquardtOptimizer}, after
+ * sounds its target: Levenberg–Marquardt (Hipparchus {@code LevenbergMarquardtOptimizer}, after
  * Moré 1978) on the residuals r_i = 1200 log2(f_i / f_target,i) in cents, with
  *
  * <ul>
@@ -101,25 +97,9 @@ public final class ToneHoleSolver {
         run.weights = weights;
         double[] startHz = run.frequencies(run.encode(start), null);
         run.guess = startHz.clone();
-        LeastSquaresProblem problem = new LeastSquaresBuilder()
-                .model(run::value)
-                .target(new double[run.residualCount()])
-                .start(run.encode(start))
-                .parameterValidator(run::clamp)
-                .maxEvaluations(Integer.MAX_VALUE)
-                .maxIterations(Integer.MAX_VALUE)
-                .checker((iteration, previous, current) -> run.bestWorst <= toleranceCents)
-                .lazyEvaluation(false)
-                .build();
-        int iterations = 0;
-        try {
-            LeastSquaresOptimizer.Optimum optimum = new LevenbergMarquardtOptimizer().optimize(problem);
-            iterations = optimum.getIterations();
-        } catch (EvaluationCapReached stop) {
-            // keep the best layout seen so far
-        } catch (org.hipparchus.exception.MathIllegalStateException stalled) {
-            // the optimiser could not improve further; keep the best layout seen so far
-        }
+        // keeps the best layout seen so far when the cap ends the run or the optimiser stalls
+        int iterations = BestKeptFit.run(run::value, run.residualCount(), run.encode(start), run::clamp,
+                () -> run.bestWorst <= toleranceCents);
         double[] bestX = run.best == null ? run.encode(start) : run.best;
         HoleLayout best = run.decode(bestX);
         double[] endHz = run.frequencies(bestX, run.bestHz);
@@ -144,14 +124,6 @@ public final class ToneHoleSolver {
         }
         return new ToneHoleSolution(best, notes, holes, best.footLengthMm() - start.footLengthMm(), iterations,
                 run.evaluations, worst <= toleranceCents, moved);
-    }
-
-    private static final class EvaluationCapReached extends RuntimeException {
-        private static final long serialVersionUID = 1L;
-
-        EvaluationCapReached() {
-            super(null, null, false, false);
-        }
     }
 
     /** State of one solve: the parameter encoding, the best layout seen, counters. */
@@ -353,7 +325,7 @@ public final class ToneHoleSolver {
             evaluations++;
             progress.update(evaluations, maxEvaluations, bestWorst);
             if (evaluations >= maxEvaluations) {
-                throw new EvaluationCapReached();
+                throw new BestKeptFit.EvaluationCap();
             }
             return hz;
         }

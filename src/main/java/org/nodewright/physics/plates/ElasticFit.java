@@ -4,16 +4,13 @@ import java.util.ArrayList;
 import java.util.EnumMap;
 import java.util.List;
 import java.util.Map;
-import org.hipparchus.exception.MathIllegalStateException;
 import org.hipparchus.linear.Array2DRowRealMatrix;
 import org.hipparchus.linear.ArrayRealVector;
 import org.hipparchus.linear.RealMatrix;
 import org.hipparchus.linear.RealVector;
-import org.hipparchus.optim.nonlinear.vector.leastsquares.LeastSquaresBuilder;
-import org.hipparchus.optim.nonlinear.vector.leastsquares.LeastSquaresProblem;
-import org.hipparchus.optim.nonlinear.vector.leastsquares.LevenbergMarquardtOptimizer;
 import org.hipparchus.util.Pair;
 import org.nodewright.physics.Require;
+import org.nodewright.physics.inverse.BestKeptFit;
 import org.nodewright.physics.tuning.Cents;
 
 /**
@@ -97,7 +94,7 @@ public final class ElasticFit {
         Map<Kind, Double> lastHz = new EnumMap<>(Kind.class);
         java.util.function.Function<double[], double[]> residuals = p -> {
             if (evaluations[0]++ >= MAX_EVALUATIONS) {
-                throw new CapReached();
+                throw new BestKeptFit.EvaluationCap();
             }
             double[] values = {ex, ey, g};
             for (int k = 0; k < which.length; k++) {
@@ -121,8 +118,7 @@ public final class ElasticFit {
         }
         double[][] bestP = {p0.clone()};
         double[] bestWorst = {Double.POSITIVE_INFINITY};
-        LeastSquaresProblem problem = new LeastSquaresBuilder()
-                .model((RealVector point) -> {
+        BestKeptFit.run((RealVector point) -> {
                     double[] p = point.toArray();
                     double[] r0 = residuals.apply(p);
                     double worst = 0;
@@ -145,19 +141,7 @@ public final class ElasticFit {
                         }
                     }
                     return new Pair<RealVector, RealMatrix>(new ArrayRealVector(r0), new Array2DRowRealMatrix(jac, false));
-                })
-                .target(new double[kinds.size()])
-                .start(p0)
-                .checker((iteration, previous, current) -> bestWorst[0] <= TOLERANCE_CENTS)
-                .maxEvaluations(Integer.MAX_VALUE)
-                .maxIterations(Integer.MAX_VALUE)
-                .lazyEvaluation(false)
-                .build();
-        try {
-            new LevenbergMarquardtOptimizer().optimize(problem);
-        } catch (MathIllegalStateException | CapReached e) {
-            // keep the best seen
-        }
+                }, kinds.size(), p0, null, () -> bestWorst[0] <= TOLERANCE_CENTS);
         double[] values = {ex, ey, g};
         for (int k = 0; k < which.length; k++) {
             values[which[k]] = Math.exp(bestP[0][k]);
@@ -181,14 +165,6 @@ public final class ElasticFit {
             nu = Math.signum(poisson) * 0.99 * Math.sqrt(ex / ey);
         }
         return new PlateMaterial(density, ex, ey, g, nu);
-    }
-
-    private static final class CapReached extends RuntimeException {
-        private static final long serialVersionUID = 1L;
-
-        CapReached() {
-            super(null, null, false, false);
-        }
     }
 
     /**

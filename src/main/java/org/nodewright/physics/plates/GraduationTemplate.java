@@ -175,12 +175,9 @@ public final class GraduationTemplate {
         marks.add(Mark.Caption.of(MARGIN_MM, MARGIN_MM + 4, title, 3.5, Mark.Caption.Anchor.START));
         marks.add(Mark.Caption.of(MARGIN_MM, MARGIN_MM + 9, "y upwards as on the bench's maps; T = thickness control"
                 + " point, B = brace (width x height)", 2.5, Mark.Caption.Anchor.START));
-        marks.addAll(CalibrationRuler.at(MARGIN_MM, rulerBase, "calibration: this ruler must measure 100 mm"));
+        marks.addAll(CalibrationRuler.at(MARGIN_MM, rulerBase));
         double y = rulerBase + CalibrationRuler.HEIGHT_MM;
-        for (int i = 0; i < cautionLines.size(); i++) {
-            marks.add(new Mark.Caption(MARGIN_MM, y + CAUTION_LINE_MM * i, cautionLines.get(i), 2.6,
-                    Mark.Caption.Anchor.START, Mark.Role.TEXT, Map.of("caution", Integer.toString(i))));
-        }
+        marks.addAll(Mark.Caption.cautions(MARGIN_MM, y, CAUTION_LINE_MM, cautionLines, 0));
         return new Sheet(title, width, height, marks);
     }
 

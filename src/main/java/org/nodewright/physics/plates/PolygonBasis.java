@@ -42,25 +42,14 @@ final class PolygonBasis implements RitzBasis {
     public void evaluate(double x, double y, double[] w, double[] wx, double[] wy, double[] wxx, double[] wyy,
                          double[] wxy) {
         int m = degree + 1;
-        double[] p = new double[m];
-        double[] p1 = new double[m];
-        double[] p2 = new double[m];
-        double[] q = new double[m];
-        double[] q1 = new double[m];
-        double[] q2 = new double[m];
-        Legendre.evaluate((x - cx) / hx, m, p, p1, p2);
-        Legendre.evaluate((y - cy) / hy, m, q, q1, q2);
+        double[][] px = RitzBasis.axis(m);
+        double[][] qy = RitzBasis.axis(m);
+        Legendre.evaluate((x - cx) / hx, m, px[0], px[1], px[2]);
+        Legendre.evaluate((y - cy) / hy, m, qy[0], qy[1], qy[2]);
         double sx = 1 / hx;
         double sy = 1 / hy;
         for (int a = 0; a < pi.length; a++) {
-            int i = pi[a];
-            int j = pj[a];
-            w[a] = p[i] * q[j];
-            wx[a] = sx * p1[i] * q[j];
-            wy[a] = sy * p[i] * q1[j];
-            wxx[a] = sx * sx * p2[i] * q[j];
-            wyy[a] = sy * sy * p[i] * q2[j];
-            wxy[a] = sx * sy * p1[i] * q1[j];
+            RitzBasis.product(a, px, pi[a], sx, qy, pj[a], sy, w, wx, wy, wxx, wyy, wxy);
         }
     }
 }

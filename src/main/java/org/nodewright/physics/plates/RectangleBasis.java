@@ -26,25 +26,15 @@ final class RectangleBasis implements RitzBasis {
                          double[] wxy) {
         int nx = fx.count();
         int ny = fy.count();
-        double[] p = new double[nx];
-        double[] p1 = new double[nx];
-        double[] p2 = new double[nx];
-        double[] q = new double[ny];
-        double[] q1 = new double[ny];
-        double[] q2 = new double[ny];
-        fx.evaluate(2 * x / lengthM - 1, p, p1, p2);
-        fy.evaluate(2 * y / widthM - 1, q, q1, q2);
+        double[][] px = RitzBasis.axis(nx);
+        double[][] qy = RitzBasis.axis(ny);
+        fx.evaluate(2 * x / lengthM - 1, px[0], px[1], px[2]);
+        fy.evaluate(2 * y / widthM - 1, qy[0], qy[1], qy[2]);
         double sx = 2 / lengthM;
         double sy = 2 / widthM;
         for (int i = 0; i < nx; i++) {
             for (int j = 0; j < ny; j++) {
-                int a = i * ny + j;
-                w[a] = p[i] * q[j];
-                wx[a] = sx * p1[i] * q[j];
-                wy[a] = sy * p[i] * q1[j];
-                wxx[a] = sx * sx * p2[i] * q[j];
-                wyy[a] = sy * sy * p[i] * q2[j];
-                wxy[a] = sx * sy * p1[i] * q1[j];
+                RitzBasis.product(i * ny + j, px, i, sx, qy, j, sy, w, wx, wy, wxx, wyy, wxy);
             }
         }
     }

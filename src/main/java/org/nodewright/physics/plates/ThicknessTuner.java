@@ -3,16 +3,13 @@ package org.nodewright.physics.plates;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.function.BooleanSupplier;
-import org.hipparchus.exception.MathIllegalStateException;
 import org.hipparchus.linear.Array2DRowRealMatrix;
 import org.hipparchus.linear.ArrayRealVector;
 import org.hipparchus.linear.RealMatrix;
 import org.hipparchus.linear.RealVector;
-import org.hipparchus.optim.nonlinear.vector.leastsquares.LeastSquaresBuilder;
-import org.hipparchus.optim.nonlinear.vector.leastsquares.LeastSquaresProblem;
-import org.hipparchus.optim.nonlinear.vector.leastsquares.LevenbergMarquardtOptimizer;
 import org.hipparchus.util.Pair;
 import org.nodewright.physics.Require;
+import org.nodewright.physics.inverse.BestKeptFit;
 import org.nodewright.physics.inverse.SolveCancelledException;
 import org.nodewright.physics.inverse.SolveProgress;
 import org.nodewright.physics.tuning.Cents;
@@ -109,21 +106,8 @@ public final class ThicknessTuner {
         }
         Tracker tracker = new Tracker(solver.shapes(plate, count), targets);
         Run run = new Run(plate, targets, unknowns, count, tracker, progress, cancelled);
-        LeastSquaresProblem problem = new LeastSquaresBuilder()
-                .model(run::valueAndJacobian)
-                .target(new double[targets.size() + unknowns.size()])
-                .start(run.start.clone())
-                .parameterValidator(v -> new ArrayRealVector(run.clamp(v.toArray())))
-                .checker((iteration, previous, current) -> run.bestWorst <= toleranceCents)
-                .maxEvaluations(Integer.MAX_VALUE)
-                .maxIterations(Integer.MAX_VALUE)
-                .lazyEvaluation(false)
-                .build();
-        try {
-            new LevenbergMarquardtOptimizer().optimize(problem);
-        } catch (MathIllegalStateException | CapReached e) {
-            // the optimiser could not improve further, or the cap: keep the best seen
-        }
+        BestKeptFit.run(run::valueAndJacobian, targets.size() + unknowns.size(), run.start.clone(),
+                v -> new ArrayRealVector(run.clamp(v.toArray())), () -> run.bestWorst <= toleranceCents);
         if (run.best == null) {
             throw new IllegalArgumentException("the thickness solve found no usable plate");
         }
@@ -324,14 +308,6 @@ public final class ThicknessTuner {
         return new Plate(plate.outline(), plate.material(), thickness, plate.edges(), braces);
     }
 
-    private static final class CapReached extends RuntimeException {
-        private static final long serialVersionUID = 1L;
-
-        CapReached() {
-            super(null, null, false, false);
-        }
-    }
-
     private final class Run {
         final Plate plate;
         final List<Target> targets;
@@ -371,12 +347,7 @@ public final class ThicknessTuner {
         }
 
         double[] residuals(double[] p) {
-            if (cancelled.getAsBoolean()) {
-                throw new SolveCancelledException();
-            }
-            if (evaluations >= maxEvaluations) {
-                throw new CapReached();
-            }
+            BestKeptFit.spend(evaluations, maxEvaluations, cancelled);
             evaluations++;
             double[] f = tracker.frequencies(apply(plate, unknowns, p), count);
             double[] r = new double[targets.size() + unknowns.size()];

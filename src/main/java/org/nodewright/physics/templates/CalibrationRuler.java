@@ -20,7 +20,15 @@ public final class CalibrationRuler {
     /** Height the ruler takes on a sheet, numbers and label included. */
     public static final double HEIGHT_MM = 12.0;
 
+    /** The line printed under every template's ruler. */
+    public static final String LABEL = "calibration: this ruler must measure 100 mm";
+
     private CalibrationRuler() {
+    }
+
+    /** The ruler with its usual label ({@link #LABEL}). */
+    public static List<Mark> at(double x, double y) {
+        return at(x, y, LABEL);
     }
 
     /**

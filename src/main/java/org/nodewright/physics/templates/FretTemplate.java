@@ -98,7 +98,7 @@ public record FretTemplate(double scaleLengthMm, int count, int divisionsPerOcta
             marks.add(Mark.Caption.of(x, positionsRow + 5 + (i % 2) * 3.5, p.label() + " " + mm(p.positionMm()), 2.2,
                     Mark.Caption.Anchor.MIDDLE));
         }
-        marks.addAll(CalibrationRuler.at(x0, rulerBase, "calibration: this ruler must measure 100 mm"));
+        marks.addAll(CalibrationRuler.at(x0, rulerBase));
         String title = String.format(Locale.ROOT, "Fret slots: scale %s mm, %d frets, %d per octave",
                 mm(scaleLengthMm), count, divisionsPerOctave);
         marks.add(Mark.Caption.of(x0, 6, title, 3.0, Mark.Caption.Anchor.START));

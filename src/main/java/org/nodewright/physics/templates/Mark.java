@@ -1,5 +1,7 @@
 package org.nodewright.physics.templates;
 
+import java.util.ArrayList;
+import java.util.List;
 import java.util.Map;
 import org.nodewright.physics.Require;
 
@@ -68,6 +70,20 @@ public sealed interface Mark permits Mark.Stroke, Mark.Ring, Mark.Caption {
 
         public static Caption of(double x, double y, String text, double sizeMm, Anchor anchor) {
             return new Caption(x, y, text, sizeMm, anchor, Role.TEXT, Map.of());
+        }
+
+        /**
+         * The caution lines of a template, 2.6 mm text from x: line k (from 0) on the baseline
+         * {@code top + lineMm * (k + firstNumber)}, tagged {@code data-caution} = k + firstNumber.
+         */
+        public static List<Mark> cautions(double x, double top, double lineMm, List<String> lines,
+                int firstNumber) {
+            List<Mark> out = new ArrayList<>();
+            for (int i = 0; i < lines.size(); i++) {
+                out.add(new Caption(x, top + lineMm * (i + firstNumber), lines.get(i), 2.6, Anchor.START, Role.TEXT,
+                        Map.of("caution", Integer.toString(i + firstNumber))));
+            }
+            return out;
         }
     }
 }

@@ -36,10 +36,9 @@ public record ToneHoleTemplate(String name, List<Section> sections, List<Hole> h
         }
     }
 
+    /** name: printed at the head of the sheet; null or blank for none (the title then starts with the bore). */
     public ToneHoleTemplate {
-        if (name == null || name.isBlank()) {
-            throw new IllegalArgumentException("template name must not be blank");
-        }
+        name = name == null ? "" : name.strip();
         sections = List.copyOf(sections);
         holes = List.copyOf(holes);
         if (sections.isEmpty()) {
@@ -106,9 +105,9 @@ public record ToneHoleTemplate(String name, List<Section> sections, List<Hole> h
             marks.add(Mark.Caption.of(cx, row, "H" + number + " d " + mm(h.diameterMm()) + " at " + mm(h.positionMm()),
                     2.0, Mark.Caption.Anchor.MIDDLE));
         }
-        marks.addAll(CalibrationRuler.at(x0, rulerBase, "calibration: this ruler must measure 100 mm"));
-        String title = String.format(Locale.ROOT, "Tone holes: %s, bore %s mm, %d holes, distances from the input end",
-                name, mm(length), holes.size());
+        marks.addAll(CalibrationRuler.at(x0, rulerBase));
+        String title = String.format(Locale.ROOT, "Tone holes: %sbore %s mm, %d holes, distances from the input end",
+                name.isEmpty() ? "" : name + ", ", mm(length), holes.size());
         marks.add(Mark.Caption.of(x0, 8, title, 3.0, Mark.Caption.Anchor.START));
         return new Sheet(title, width, height, marks);
     }

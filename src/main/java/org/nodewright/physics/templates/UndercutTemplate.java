@@ -133,11 +133,8 @@ public record UndercutTemplate(String name, double widthMm, List<Point> profile,
             marks.add(Mark.Caption.of(cx, row, "cord hole " + number + " at " + mm(pos) + " (node of mode 1)", 2.0,
                     Mark.Caption.Anchor.MIDDLE));
         }
-        marks.addAll(CalibrationRuler.at(x0, rulerBase, "calibration: this ruler must measure 100 mm"));
-        for (int i = 0; i < cautions.size(); i++) {
-            marks.add(new Mark.Caption(x0, cautionTop + CAUTION_LINE_MM * (i + 1), cautions.get(i), 2.6,
-                    Mark.Caption.Anchor.START, Mark.Role.TEXT, Map.of("caution", Integer.toString(i + 1))));
-        }
+        marks.addAll(CalibrationRuler.at(x0, rulerBase));
+        marks.addAll(Mark.Caption.cautions(x0, cautionTop, CAUTION_LINE_MM, cautions, 1));
         String title = String.format(Locale.ROOT, "Undercut: %s, %s x %s mm, thinnest %s mm, distances from x = 0",
                 name, mm(length), mm(widthMm), mm(profile.stream().mapToDouble(Point::thicknessMm).min().orElseThrow()));
         marks.add(Mark.Caption.of(x0, 8, title, 3.0, Mark.Caption.Anchor.START));
